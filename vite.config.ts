@@ -21,7 +21,13 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'unit',
-          include: ['shared/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'scripts/**/*.test.ts'],
+          include: [
+            'shared/**/*.test.ts',
+            'src/**/*.test.{ts,tsx}',
+            'scripts/**/*.test.ts',
+            'server/engine-pool/**/*.test.ts',
+            'server/cli/**/*.test.ts',
+          ],
           environment: 'node',
         },
       },
@@ -30,6 +36,7 @@ export default defineConfig({
         test: {
           name: 'api',
           include: ['server/**/*.test.ts', 'tests/api/**/*.test.ts'],
+          exclude: ['server/engine-pool/**', 'server/cli/**', '**/node_modules/**'],
           environment: 'node',
           globalSetup: ['tests/support/global-setup.ts'],
           testTimeout: 60_000,
