@@ -1,0 +1,38 @@
+/**
+ * `npm run dev`: the API (with the private MariaDB) plus Vite's dev server, which proxies
+ * /api to it. Open the address Vite prints (http://127.0.0.1:5173).
+ */
+import { spawn } from 'node:child_process';
+import path from 'node:path';
+import { loadConfig } from '../server/config.ts';
+import { startServer } from '../server/index.ts';
+import { countDepartments } from '../server/modules/departments/departments.repository.ts';
+import { seedDemo } from '../server/seed/demo.ts';
+import { DEFAULT_STATE_DIR, PROJECT_ROOT, devDbPort, ensureMariaDb } from './mariadb.ts';
+
+const conn = await ensureMariaDb({ stateDir: DEFAULT_STATE_DIR, port: devDbPort(), database: 'tidefield', appUser: 'tidefield' });
+const config = loadConfig({
+  NODE_ENV: 'development',
+  ...process.env,
+  CLIENT_DIST: '.data/no-client-in-dev',
+  DB_PORT: String(conn.port),
+  DB_USER: conn.user,
+  DB_PASSWORD: conn.password,
+  DB_NAME: conn.database,
+});
+const running = await startServer(config);
+if ((await countDepartments(running.database.db)) === 0) await seedDemo(running.database.db, config.DEMO_PASSWORD);
+console.log(`API at ${running.url}; starting Vite …`);
+
+const vite = spawn(process.execPath, [path.join(PROJECT_ROOT, 'node_modules/vite/bin/vite.js'), '--host', '127.0.0.1'], {
+  cwd: PROJECT_ROOT,
+  stdio: 'inherit',
+  env: { ...process.env, PORT: String(config.PORT) },
+});
+const stop = async () => {
+  vite.kill('SIGTERM');
+  await running.stop();
+  process.exit(0);
+};
+process.once('SIGINT', () => void stop());
+process.once('SIGTERM', () => void stop());

@@ -1,0 +1,16 @@
+/** `npm run seed`: (re)applies the demo seed to the local database. Idempotent. */
+import { connectDatabase, migrateDatabase } from '../server/db/client.ts';
+import { loadConfig } from '../server/config.ts';
+import { DEMO_DEPARTMENT, seedDemo } from '../server/seed/demo.ts';
+import { DEFAULT_STATE_DIR, devDbPort, ensureMariaDb } from './mariadb.ts';
+
+const conn = await ensureMariaDb({ stateDir: DEFAULT_STATE_DIR, port: devDbPort(), database: 'tidefield', appUser: 'tidefield' });
+const config = loadConfig({ ...process.env, DB_PORT: String(conn.port), DB_PASSWORD: conn.password, DB_USER: conn.user, DB_NAME: conn.database });
+const database = connectDatabase(config);
+try {
+  await migrateDatabase(database);
+  const result = await seedDemo(database.db, config.DEMO_PASSWORD);
+  console.log(result.created ? `Seeded the demo department "${DEMO_DEPARTMENT}".` : `The demo department "${DEMO_DEPARTMENT}" was already there; missing demo rows were added.`);
+} finally {
+  await database.close();
+}

@@ -1,0 +1,55 @@
+import { z } from 'zod';
+
+/**
+ * The server's configuration, parsed from the environment once at start-up. Nothing else in
+ * the server reads process.env. A bad value stops the start with a list of every problem.
+ */
+const port = (fallback: number) => z.coerce.number().int().min(1).max(65535).default(fallback);
+const bool = (fallback: boolean) =>
+  z
+    .enum(['1', '0', 'true', 'false', 'yes', 'no'])
+    .default(fallback ? 'true' : 'false')
+    .transform((v) => v === '1' || v === 'true' || v === 'yes');
+
+export const configSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  /** Where the app listens. */
+  HOST: z.string().default('127.0.0.1'),
+  PORT: port(3000),
+  /** The address users reach the app at; https here makes session cookies Secure. */
+  PUBLIC_URL: z.url().optional(),
+  /** Express `trust proxy` (set when running behind a TLS-terminating proxy). */
+  TRUST_PROXY: bool(false),
+  DB_HOST: z.string().default('127.0.0.1'),
+  DB_PORT: port(3407),
+  DB_USER: z.string().default('tidefield'),
+  DB_PASSWORD: z.string().default(''),
+  DB_NAME: z.string().regex(/^[A-Za-z0-9_]+$/).default('tidefield'),
+  /** Sessions last this long and are renewed when used in their second half (lucia). */
+  SESSION_DAYS: z.coerce.number().min(0.0001).max(365).default(30),
+  /** Sign-in attempts allowed per client address and e-mail in each window. */
+  SIGN_IN_LIMIT: z.coerce.number().int().min(1).max(10_000).default(10),
+  SIGN_IN_WINDOW_MINUTES: z.coerce.number().min(0.01).max(24 * 60).default(15),
+  /** Largest JSON body accepted by the API. */
+  JSON_BODY_LIMIT: z.string().regex(/^\d+(b|kb|mb)$/i).default('256kb'),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  /** Folder with the built client (served in production). */
+  CLIENT_DIST: z.string().default('dist/client'),
+  DEMO_PASSWORD: z.string().min(10).default('tidefield-demo'),
+});
+
+export type Config = z.output<typeof configSchema>;
+
+export function loadConfig(env: Record<string, string | undefined> = process.env): Config {
+  const parsed = configSchema.safeParse(env);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`).join('\n');
+    throw new Error(`Invalid configuration:\n${problems}`);
+  }
+  return parsed.data;
+}
+
+/** A configuration for tests: defaults plus overrides, never read from the environment. */
+export function testConfig(overrides: Partial<Config> = {}): Config {
+  return { ...configSchema.parse({ NODE_ENV: 'test', LOG_LEVEL: 'silent' }), ...overrides };
+}

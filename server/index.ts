@@ -1,0 +1,44 @@
+import type { Server } from 'node:http';
+import { createApp } from './app.ts';
+import type { Config } from './config.ts';
+import { connectDatabase, migrateDatabase, type Database } from './db/client.ts';
+import { createLogger } from './logger.ts';
+
+export interface RunningServer {
+  url: string;
+  server: Server;
+  database: Database;
+  stop(): Promise<void>;
+}
+
+/** Connects to the database, applies migrations, and listens. Stops cleanly on stop(). */
+export async function startServer(config: Config): Promise<RunningServer> {
+  const logger = createLogger(config);
+  const database = connectDatabase(config);
+  await migrateDatabase(database);
+  const app = createApp({ config, database, logger });
+  const server = await new Promise<Server>((resolve, reject) => {
+    const s = app.listen(config.PORT, config.HOST, () => resolve(s));
+    s.once('error', reject);
+  });
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : config.PORT;
+  const url = `http://${config.HOST}:${port}`;
+  logger.info({ url }, 'Tidefield is listening');
+  let stopping: Promise<void> | undefined;
+  return {
+    url,
+    server,
+    database,
+    stop() {
+      stopping ??= (async () => {
+        await new Promise<void>((resolve) => {
+          server.close(() => resolve());
+          server.closeAllConnections();
+        });
+        await database.close();
+      })();
+      return stopping;
+    },
+  };
+}

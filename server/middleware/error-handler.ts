@@ -1,0 +1,61 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import type { Logger } from 'pino';
+import { ZodError, type z } from 'zod';
+import { AppError } from '../lib/errors.ts';
+
+/** Turns one zod issue into a message that names the field (its dotted path). */
+export function describeIssue(issue: z.core.$ZodIssue): { field: string | undefined; message: string } {
+  const path = issue.path.map(String).join('.');
+  if (issue.code === 'unrecognized_keys') {
+    const key = issue.keys[0] ?? '';
+    const field = path ? `${path}.${key}` : key;
+    return { field, message: `${field} is not a field this request accepts` };
+  }
+  if (issue.code === 'invalid_type' && issue.input === undefined) {
+    return { field: path || undefined, message: issue.message.includes('required') ? issue.message : `${path || 'body'} is required` };
+  }
+  const startsWithField = path && issue.message.startsWith(path.split('.').pop()!);
+  return { field: path || undefined, message: startsWithField || !path ? issue.message : `${path}: ${issue.message}` };
+}
+
+/** Answers unknown /api paths with the JSON error shape instead of the client app. */
+export const apiNotFound: RequestHandler = (req, _res, next) =>
+  next(new AppError({ code: 'not_found', status: 404, message: `No API route ${req.method} ${req.originalUrl.split('?')[0]}.` }));
+
+/** The one error middleware, registered last: typed errors → { error: { code, message, field? } }. */
+export function errorHandler(logger: Logger): ErrorRequestHandler {
+  return (error: unknown, req, res, _next) => {
+    if (res.headersSent) {
+      logger.error({ err: error }, 'error after the response started');
+      res.end();
+      return;
+    }
+    if (error instanceof ZodError) {
+      const first = error.issues[0];
+      const { field, message } = first ? describeIssue(first) : { field: undefined, message: 'Invalid input' };
+      res.status(400).json({ error: { code: 'invalid_input', message, ...(field ? { field } : {}) } });
+      return;
+    }
+    if (error instanceof AppError && error.expose) {
+      for (const [k, v] of Object.entries(error.headers ?? {})) res.setHeader(k, v);
+      res.status(error.status).json({ error: { code: error.code, message: error.message, ...(error.field ? { field: error.field } : {}) } });
+      return;
+    }
+    // body-parser errors carry `type` and `status`.
+    const parserError = error as { type?: string; status?: number; limit?: number };
+    if (parserError?.type === 'entity.parse.failed') {
+      res.status(400).json({ error: { code: 'malformed_json', message: 'The request body is not valid JSON.' } });
+      return;
+    }
+    if (parserError?.type === 'entity.too.large') {
+      res.status(413).json({ error: { code: 'body_too_large', message: `The request body is larger than the ${parserError.limit ? Math.round(parserError.limit / 1024) + ' kB' : ''} this route accepts.` } });
+      return;
+    }
+    if (parserError?.type === 'encoding.unsupported' || parserError?.type === 'charset.unsupported') {
+      res.status(415).json({ error: { code: 'unsupported_encoding', message: 'The request body encoding is not supported; send UTF-8 JSON.' } });
+      return;
+    }
+    logger.error({ err: error, method: req.method, url: req.originalUrl }, 'unhandled error');
+    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side; it has been logged.' } });
+  };
+}

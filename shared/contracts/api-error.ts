@@ -1,0 +1,11 @@
+import { z } from 'zod';
+
+/** The one error body every API route answers with. `field` names the input path at fault. */
+export const apiErrorBodySchema = z.object({
+  error: z.object({
+    code: z.string(),
+    message: z.string(),
+    field: z.string().optional(),
+  }),
+});
+export type ApiErrorBody = z.infer<typeof apiErrorBodySchema>;

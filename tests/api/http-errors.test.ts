@@ -1,0 +1,61 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createTestApp, uniqueEmail, GOOD_PASSWORD, type TestContext } from '../support/test-app.ts';
+
+let ctx: TestContext;
+beforeAll(async () => {
+  ctx = await createTestApp({ JSON_BODY_LIMIT: '2kb' });
+});
+afterAll(() => ctx.close());
+
+describe('error bodies', () => {
+  it('answers malformed JSON with a 400 JSON error', async () => {
+    const res = await request(ctx.app).post('/api/auth/sign-in').set('Content-Type', 'application/json').send('{"email": ').expect(400);
+    expect(res.body).toEqual({ error: { code: 'malformed_json', message: expect.any(String) } });
+  });
+
+  it('answers an oversized body with 413', async () => {
+    const res = await request(ctx.app)
+      .post('/api/auth/sign-up')
+      .send({ email: uniqueEmail(), password: GOOD_PASSWORD, name: 'x'.repeat(5000), department: 'D' })
+      .expect(413);
+    expect(res.body.error.code).toBe('body_too_large');
+  });
+
+  it('names a missing field', async () => {
+    const res = await request(ctx.app).post('/api/auth/sign-up').send({ email: uniqueEmail(), password: GOOD_PASSWORD, name: 'A' }).expect(400);
+    expect(res.body.error).toMatchObject({ code: 'invalid_input', field: 'department' });
+    expect(res.body.error.message).toMatch(/department is required/);
+  });
+
+  it('names an extra field', async () => {
+    const res = await request(ctx.app)
+      .post('/api/auth/sign-in')
+      .send({ email: uniqueEmail(), password: GOOD_PASSWORD, remember: true })
+      .expect(400);
+    expect(res.body.error).toMatchObject({ code: 'invalid_input', field: 'remember' });
+    expect(res.body.error.message).toMatch(/remember is not a field/);
+  });
+
+  it('names a field of the wrong type', async () => {
+    const res = await request(ctx.app).post('/api/auth/sign-in').send({ email: 42, password: GOOD_PASSWORD }).expect(400);
+    expect(res.body.error.field).toBe('email');
+  });
+
+  it('answers a body that is not an object', async () => {
+    const res = await request(ctx.app).post('/api/auth/sign-in').set('Content-Type', 'application/json').send('[1,2]').expect(400);
+    expect(res.body.error.code).toBe('invalid_input');
+  });
+
+  it('answers an unknown API path with a JSON 404', async () => {
+    const res = await request(ctx.app).get('/api/no-such-thing').expect(404);
+    expect(res.body.error.code).toBe('not_found');
+  });
+
+  it('sends security headers', async () => {
+    const res = await request(ctx.app).get('/api/health').expect(200);
+    expect(res.headers['x-content-type-options']).toBe('nosniff');
+    expect(res.headers['content-security-policy']).toMatch(/default-src 'self'/);
+    expect(res.body).toMatchObject({ status: 'ok', database: { reachable: true } });
+  });
+});

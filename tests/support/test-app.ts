@@ -1,0 +1,80 @@
+import { randomBytes } from 'node:crypto';
+import mysql from 'mysql2/promise';
+import request from 'supertest';
+import { inject } from 'vitest';
+import { createApp } from '../../server/app.ts';
+import { testConfig, type Config } from '../../server/config.ts';
+import { connectDatabase, migrateDatabase, type Database } from '../../server/db/client.ts';
+import { createLogger } from '../../server/logger.ts';
+
+export interface TestContext {
+  app: ReturnType<typeof createApp>;
+  database: Database;
+  config: Config;
+  close(): Promise<void>;
+}
+
+/** A fresh, migrated database on the throwaway server and an app wired to it. */
+export async function createTestDatabase(): Promise<{ database: Database; config: Config; drop(): Promise<void> }> {
+  const conn = inject('testDb');
+  const name = `tf_${randomBytes(6).toString('hex')}`;
+  const admin = await mysql.createConnection({ host: conn.host, port: conn.port, user: conn.user, password: conn.password });
+  await admin.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
+  await admin.end();
+  const config = testConfig({ DB_HOST: conn.host, DB_PORT: conn.port, DB_USER: conn.user, DB_PASSWORD: conn.password, DB_NAME: name });
+  const database = connectDatabase(config);
+  await migrateDatabase(database);
+  return {
+    database,
+    config,
+    async drop() {
+      await database.close();
+      const a = await mysql.createConnection({ host: conn.host, port: conn.port, user: conn.user, password: conn.password });
+      await a.query(`DROP DATABASE IF EXISTS \`${name}\``);
+      await a.end();
+    },
+  };
+}
+
+export async function createTestApp(overrides: Partial<Config> = {}): Promise<TestContext> {
+  const { database, config: base, drop } = await createTestDatabase();
+  const config = { ...base, ...overrides };
+  const app = createApp({ config, database, logger: createLogger(config) });
+  return { app, database, config, close: drop };
+}
+
+let counter = 0;
+/** A unique e-mail for this test run. */
+export function uniqueEmail(label = 'user'): string {
+  counter += 1;
+  return `${label}-${counter}-${randomBytes(3).toString('hex')}@test.example`;
+}
+
+export const GOOD_PASSWORD = 'correct horse battery';
+
+/** Signs up a new user (with a new department) and returns a cookie-carrying agent. */
+export async function signUp(app: TestContext['app'], options: { email?: string; name?: string; department?: string } = {}) {
+  const agent = request.agent(app);
+  const email = options.email ?? uniqueEmail();
+  const res = await agent
+    .post('/api/auth/sign-up')
+    .send({ email, password: GOOD_PASSWORD, name: options.name ?? 'Test Person', department: options.department ?? `Dept ${email}` });
+  if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return { agent, email, me: res.body as { user: { id: string }; department: { id: string; name: string } } };
+}
+
+/** Adds a new user to a department with a role (the way an accepted invitation would) and signs them in. */
+export async function addMember(ctx: TestContext, departmentId: string, role: 'admin' | 'modeller' | 'observer') {
+  const { hashPassword } = await import('../../server/modules/auth/password.ts');
+  const { insertUser } = await import('../../server/modules/auth/auth.repository.ts');
+  const { insertMembership } = await import('../../server/modules/departments/departments.repository.ts');
+  const { newId } = await import('../../server/db/columns.ts');
+  const id = newId();
+  const email = uniqueEmail(role);
+  await insertUser(ctx.database.db, { id, email, name: `A ${role}`, passwordHash: await hashPassword(GOOD_PASSWORD), createdAt: new Date() });
+  await insertMembership(ctx.database.db, { userId: id, departmentId, role, createdAt: new Date() });
+  const agent = request.agent(ctx.app);
+  const res = await agent.post('/api/auth/sign-in').send({ email, password: GOOD_PASSWORD });
+  if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return { agent, email, userId: id };
+}
