@@ -2,10 +2,13 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
-import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
+import { pinoHttp } from 'pino-http';
+import type { Piscina } from 'piscina';
 import type { Config } from './config.ts';
 import type { Database } from './db/client.ts';
+import { createEnginePool } from './engine-pool/engine-pool.ts';
+import { runScenario } from './engine-pool/run-scenario.ts';
 import { RouteRegistry } from './lib/http.ts';
 import { apiNotFound, errorHandler } from './middleware/error-handler.ts';
 import { originCheck } from './middleware/origin-check.ts';
@@ -16,23 +19,80 @@ import { createSessionStore } from './modules/auth/session.ts';
 import { membersRoutes } from './modules/departments/members.routes.ts';
 import { createMembersService } from './modules/departments/members.service.ts';
 import { healthRoutes } from './modules/health/health.routes.ts';
+import { occurrenceTablesRoutes } from './modules/occurrence-tables/occurrence-tables.routes.ts';
+import { createOccurrenceTablesService } from './modules/occurrence-tables/occurrence-tables.service.ts';
+import { openApiRoutes } from './modules/openapi/openapi.routes.ts';
+import { RunEvents } from './modules/runs/run-events.ts';
+import { createRunScheduler, type RunEngine, type RunSettledHook } from './modules/runs/run-scheduler.ts';
+import { runsRoutes } from './modules/runs/runs.routes.ts';
+import { createRunsService, noBilling, type RunBilling } from './modules/runs/runs.service.ts';
+import { samplesRoutes } from './modules/samples/samples.routes.ts';
+import { createSamplesService } from './modules/samples/samples.service.ts';
+import { scenariosRoutes } from './modules/scenarios/scenarios.routes.ts';
+import { createScenariosService } from './modules/scenarios/scenarios.service.ts';
+import { sweepsRoutes } from './modules/sweeps/sweeps.routes.ts';
+import { createSweepsService } from './modules/sweeps/sweeps.service.ts';
+import { tokensRoutes } from './modules/tokens/tokens.routes.ts';
+import { createTokensService } from './modules/tokens/tokens.service.ts';
+import { createGridResolver } from './modules/runs/engulfment-grid-cache.ts';
 
 export interface AppDeps {
   config: Config;
   database: Database;
   logger: Logger;
+  /** The engine's worker pool (default: a new one of config.WORKER_THREADS threads). */
+  pool?: Piscina;
+  /** How runs execute (default: runScenario on the pool). Tests inject faults here. */
+  engine?: RunEngine;
+  billing?: RunBilling;
+  onRunSettled?: RunSettledHook;
+}
+
+export interface TidefieldApp {
+  app: Express;
+  registry: RouteRegistry;
+  scheduler: ReturnType<typeof createRunScheduler>;
+  /** Stops the scheduler (runs checkpoint and resume on the next start) and the pool made here. */
+  close(): Promise<void>;
 }
 
 /** Wires every module into one Express app. The only place where things are put together. */
-export function createApp({ config, database, logger }: AppDeps): Express {
+export function createApp(deps: AppDeps): TidefieldApp {
+  const { config, database, logger } = deps;
   const { db } = database;
   const registry = new RouteRegistry();
+  const ownPool = !deps.pool && !deps.engine;
+  const pool = deps.pool ?? (deps.engine ? undefined : createEnginePool({ workers: config.WORKER_THREADS }));
+  const resolveGrid = createGridResolver(db, pool);
+  const engine: RunEngine =
+    deps.engine ??
+    (async (scenario, options) => runScenario(scenario, { ...options, pool, engulfmentGrid: await resolveGrid(scenario) }));
+
+  const events = new RunEvents();
+  const scheduler = createRunScheduler({
+    db,
+    engine,
+    events,
+    logger,
+    onSettled: deps.onRunSettled,
+    options: {
+      maxConcurrentRuns: config.RUNS_MAX_CONCURRENT,
+      maxRunsPerDepartment: config.RUNS_PER_DEPARTMENT,
+      checkpointIntervalMs: config.CHECKPOINT_INTERVAL_MS,
+      pollIntervalMs: 2000,
+    },
+  });
   const sessions = createSessionStore(db, config.SESSION_DAYS);
   const auth = createAuthService(db, sessions);
   const members = createMembersService(db);
+  const tokens = createTokensService(db);
+  const tables = createOccurrenceTablesService(db);
+  const scenarios = createScenariosService(db, (departmentId, tableId) => tables.exists(departmentId, tableId));
+  const samples = createSamplesService(db);
+  const runs = createRunsService({ db, scheduler, scenarios, tables, samples, billing: deps.billing ?? noBilling });
+  const sweeps = createSweepsService({ db, runs, scenarios, samples, scheduler });
 
   const app = express();
-  app.locals.registry = registry;
   app.disable('x-powered-by');
   app.set('trust proxy', config.TRUST_PROXY);
   app.use(
@@ -54,11 +114,18 @@ export function createApp({ config, database, logger }: AppDeps): Express {
 
   app.use('/api', express.json({ limit: config.JSON_BODY_LIMIT }));
   app.use('/api', originCheck());
-  app.use('/api', authenticate(db, sessions));
+  app.use('/api', authenticate(db, sessions, tokens.resolver()));
 
   app.use('/api', healthRoutes(registry, db));
   app.use('/api', authRoutes(registry, config, auth, sessions));
   app.use('/api/members', membersRoutes(registry, members));
+  app.use('/api/tokens', tokensRoutes(registry, tokens));
+  app.use('/api/scenarios', scenariosRoutes(registry, scenarios));
+  app.use('/api/occurrence-tables', occurrenceTablesRoutes(registry, tables));
+  app.use('/api/samples', samplesRoutes(registry, samples));
+  app.use('/api', runsRoutes(registry, runs, events));
+  app.use('/api/sweeps', sweepsRoutes(registry, sweeps));
+  app.use('/api', openApiRoutes(registry));
   app.use('/api', apiNotFound);
 
   const clientDir = path.resolve(config.CLIENT_DIST);
@@ -69,5 +136,13 @@ export function createApp({ config, database, logger }: AppDeps): Express {
   }
 
   app.use(errorHandler(logger));
-  return app;
+  return {
+    app,
+    registry,
+    scheduler,
+    async close() {
+      await scheduler.stop();
+      if (ownPool && pool) await pool.destroy();
+    },
+  };
 }

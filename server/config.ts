@@ -36,6 +36,13 @@ export const configSchema = z.object({
   /** Folder with the built client (served in production). */
   CLIENT_DIST: z.string().default('dist/client'),
   DEMO_PASSWORD: z.string().min(10).default('tidefield-demo'),
+  /** Worker threads of the engine pool (default: one per core). */
+  WORKER_THREADS: z.coerce.number().int().min(1).max(256).optional(),
+  /** Runs executing at once over all departments, and per department. */
+  RUNS_MAX_CONCURRENT: z.coerce.number().int().min(1).max(64).default(2),
+  RUNS_PER_DEPARTMENT: z.coerce.number().int().min(1).max(64).default(2),
+  /** Shortest time between two checkpoints of a run's running totals. */
+  CHECKPOINT_INTERVAL_MS: z.coerce.number().int().min(10).max(600_000).default(1000),
 });
 
 export type Config = z.output<typeof configSchema>;

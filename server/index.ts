@@ -3,6 +3,7 @@ import { createApp } from './app.ts';
 import type { Config } from './config.ts';
 import { connectDatabase, migrateDatabase, type Database } from './db/client.ts';
 import { createLogger } from './logger.ts';
+import { ensurePublishedLibrary } from './modules/samples/samples.service.ts';
 
 export interface RunningServer {
   url: string;
@@ -16,14 +17,16 @@ export async function startServer(config: Config): Promise<RunningServer> {
   const logger = createLogger(config);
   const database = connectDatabase(config);
   await migrateDatabase(database);
-  const app = createApp({ config, database, logger });
+  await ensurePublishedLibrary(database.db);
+  const tidefield = createApp({ config, database, logger });
   const server = await new Promise<Server>((resolve, reject) => {
-    const s = app.listen(config.PORT, config.HOST, () => resolve(s));
+    const s = tidefield.app.listen(config.PORT, config.HOST, () => resolve(s));
     s.once('error', reject);
   });
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : config.PORT;
   const url = `http://${config.HOST}:${port}`;
+  await tidefield.scheduler.start();
   logger.info({ url }, 'Tidefield is listening');
   let stopping: Promise<void> | undefined;
   return {
@@ -32,10 +35,11 @@ export async function startServer(config: Config): Promise<RunningServer> {
     database,
     stop() {
       stopping ??= (async () => {
-        await new Promise<void>((resolve) => {
-          server.close(() => resolve());
-          server.closeAllConnections();
-        });
+        const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+        server.closeAllConnections();
+        // Runs in progress write a checkpoint and resume from it on the next start.
+        await tidefield.close();
+        await closed;
         await database.close();
       })();
       return stopping;

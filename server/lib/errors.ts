@@ -11,6 +11,8 @@ export class AppError extends Error {
   readonly field: string | undefined;
   readonly expose: boolean;
   readonly headers: Record<string, string> | undefined;
+  /** Row-level problems (uploads): listed in the error body as `details`. */
+  readonly details: { line: number; column?: string; message: string }[] | undefined;
 
   constructor(options: {
     code: string;
@@ -20,6 +22,7 @@ export class AppError extends Error {
     expose?: boolean;
     cause?: unknown;
     headers?: Record<string, string>;
+    details?: { line: number; column?: string; message: string }[];
   }) {
     super(options.message, { cause: options.cause });
     this.code = options.code;
@@ -27,6 +30,7 @@ export class AppError extends Error {
     this.field = options.field;
     this.expose = options.expose ?? options.status < 500;
     this.headers = options.headers;
+    this.details = options.details;
   }
 }
 

@@ -38,7 +38,9 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     if (error instanceof AppError && error.expose) {
       for (const [k, v] of Object.entries(error.headers ?? {})) res.setHeader(k, v);
-      res.status(error.status).json({ error: { code: error.code, message: error.message, ...(error.field ? { field: error.field } : {}) } });
+      res.status(error.status).json({
+        error: { code: error.code, message: error.message, ...(error.field ? { field: error.field } : {}), ...(error.details ? { details: error.details } : {}) },
+      });
       return;
     }
     // body-parser errors carry `type` and `status`.

@@ -6,6 +6,8 @@ export const apiErrorBodySchema = z.object({
     code: z.string(),
     message: z.string(),
     field: z.string().optional(),
+    /** Row-level problems of an upload: the file line (1 = header), the column and what is wrong. */
+    details: z.array(z.object({ line: z.number(), column: z.string().optional(), message: z.string() })).optional(),
   }),
 });
 export type ApiErrorBody = z.infer<typeof apiErrorBodySchema>;

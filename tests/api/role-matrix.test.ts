@@ -46,7 +46,7 @@ function routeKey(r: RegisteredRoute) {
 
 describe('role × route matrix', () => {
   it('covers every registered route', () => {
-    const registry = ctx.app.locals.registry as RouteRegistry;
+    const registry: RouteRegistry = ctx.tidefield.registry;
     const registered = registry.routes.map(routeKey).sort();
     expect(registered).toEqual(Object.keys(EXPECTED_ACCESS).sort());
   });

@@ -2,13 +2,16 @@ import { randomBytes } from 'node:crypto';
 import mysql from 'mysql2/promise';
 import request from 'supertest';
 import { inject } from 'vitest';
-import { createApp } from '../../server/app.ts';
+import type { Express } from 'express';
+import { createApp, type AppDeps, type TidefieldApp } from '../../server/app.ts';
+import { ensurePublishedLibrary } from '../../server/modules/samples/samples.service.ts';
 import { testConfig, type Config } from '../../server/config.ts';
 import { connectDatabase, migrateDatabase, type Database } from '../../server/db/client.ts';
 import { createLogger } from '../../server/logger.ts';
 
 export interface TestContext {
-  app: ReturnType<typeof createApp>;
+  app: Express;
+  tidefield: TidefieldApp;
   database: Database;
   config: Config;
   close(): Promise<void>;
@@ -36,11 +39,22 @@ export async function createTestDatabase(): Promise<{ database: Database; config
   };
 }
 
-export async function createTestApp(overrides: Partial<Config> = {}): Promise<TestContext> {
+export async function createTestApp(overrides: Partial<Config> = {}, deps: Partial<Omit<AppDeps, 'config' | 'database' | 'logger'>> = {}): Promise<TestContext> {
   const { database, config: base, drop } = await createTestDatabase();
-  const config = { ...base, ...overrides };
-  const app = createApp({ config, database, logger: createLogger(config) });
-  return { app, database, config, close: drop };
+  const config = { ...base, WORKER_THREADS: 2, CHECKPOINT_INTERVAL_MS: 50, ...overrides };
+  await ensurePublishedLibrary(database.db);
+  const tidefield = createApp({ config, database, logger: createLogger(config), ...deps });
+  await tidefield.scheduler.start();
+  return {
+    app: tidefield.app,
+    tidefield,
+    database,
+    config,
+    async close() {
+      await tidefield.close();
+      await drop();
+    },
+  };
 }
 
 let counter = 0;
@@ -53,7 +67,7 @@ export function uniqueEmail(label = 'user'): string {
 export const GOOD_PASSWORD = 'correct horse battery';
 
 /** Signs up a new user (with a new department) and returns a cookie-carrying agent. */
-export async function signUp(app: TestContext['app'], options: { email?: string; name?: string; department?: string } = {}) {
+export async function signUp(app: Express, options: { email?: string; name?: string; department?: string } = {}) {
   const agent = request.agent(app);
   const email = options.email ?? uniqueEmail();
   const res = await agent

@@ -1,5 +1,6 @@
 import type { RequestHandler } from 'express';
 import type { Db } from '../../db/client.ts';
+import { unauthenticated } from '../../lib/errors.ts';
 import type { RequestAuth } from './auth.context.ts';
 import { setActiveDepartment } from './auth.repository.ts';
 import { loadCaller } from './caller.ts';
@@ -18,9 +19,8 @@ export function authenticate(db: Db, sessions: SessionStore, resolveToken?: Call
     const authorization = req.headers.authorization;
     if (authorization && resolveToken) {
       const caller = await resolveToken(authorization);
-      if (caller) {
-        res.locals.auth = await loadCaller(db, { user: caller.user, tokenId: caller.tokenId }, caller.departmentId);
-      }
+      if (!caller) return next(unauthenticated('That API token is unknown, expired or revoked.'));
+      res.locals.auth = await loadCaller(db, { user: caller.user, tokenId: caller.tokenId }, caller.departmentId);
       return next();
     }
     const sessionId = sessions.readCookie(req.headers.cookie);

@@ -1,0 +1,26 @@
+import { availableParallelism } from 'node:os';
+import { extname } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { Piscina } from 'piscina';
+
+/**
+ * The pool's task module. Run from source (this file is .ts under tsx or vitest), workers load
+ * chunk-task-source.mjs, which imports chunk-task.ts through tsx's API; compiled, chunk-task.js.
+ */
+const TASK_FILE = new URL(extname(fileURLToPath(import.meta.url)) === '.ts' ? './chunk-task-source.mjs' : './chunk-task.js', import.meta.url).href;
+
+/** Worker threads to use when the caller does not say: one per core. */
+export function defaultWorkerCount(): number {
+  return Math.max(1, availableParallelism());
+}
+
+/** A piscina pool of engine workers, one thread per worker, kept alive while idle for 30 s. */
+export function createEnginePool(options: { workers?: number; filename?: string } = {}): Piscina {
+  const threads = options.workers ?? defaultWorkerCount();
+  return new Piscina({
+    filename: options.filename ?? TASK_FILE,
+    minThreads: threads,
+    maxThreads: threads,
+    idleTimeout: 30_000,
+  });
+}

@@ -1,0 +1,152 @@
+import { and, asc, count, desc, eq, inArray, isNull, like, sql, type SQL } from 'drizzle-orm';
+import type { RunListQuery, RunStatus } from '../../../shared/contracts/runs.ts';
+import type { Db } from '../../db/client.ts';
+import type { DbOrTx } from '../departments/departments.repository.ts';
+import { users } from '../auth/users.table.ts';
+import { engulfmentGrids, runBins, runCheckpoints, runResults, runs, type RunRow } from './runs.table.ts';
+
+export type { RunRow };
+
+export async function insertRun(tx: DbOrTx, values: typeof runs.$inferInsert) {
+  await tx.insert(runs).values(values);
+}
+
+export async function findRun(db: DbOrTx, departmentId: string, id: string) {
+  const rows = await db
+    .select({ run: runs, ownerName: users.name })
+    .from(runs)
+    .innerJoin(users, eq(users.id, runs.ownerUserId))
+    .where(and(eq(runs.departmentId, departmentId), eq(runs.id, id)))
+    .limit(1);
+  return rows[0];
+}
+
+export async function findRunsByIds(db: Db, departmentId: string, ids: string[]) {
+  if (ids.length === 0) return [];
+  return db
+    .select({ run: runs, ownerName: users.name })
+    .from(runs)
+    .innerJoin(users, eq(users.id, runs.ownerUserId))
+    .where(and(eq(runs.departmentId, departmentId), inArray(runs.id, ids)));
+}
+
+const SORT_COLUMNS = {
+  createdAt: runs.createdAt,
+  systems: runs.systems,
+  fraction: runs.fraction,
+  status: runs.status,
+  scenarioName: runs.scenarioName,
+  finishedAt: runs.finishedAt,
+} as const;
+
+export async function listRuns(db: Db, departmentId: string, userId: string, q: RunListQuery) {
+  const filters: SQL[] = [eq(runs.departmentId, departmentId)];
+  if (q.status) filters.push(eq(runs.status, q.status));
+  if (q.scenarioId) filters.push(eq(runs.scenarioId, q.scenarioId));
+  if (q.owner === 'me') filters.push(eq(runs.ownerUserId, userId));
+  if (q.includeSweepPoints === 'false') filters.push(isNull(runs.sweepId));
+  if (q.q) filters.push(like(runs.scenarioName, `%${q.q.replace(/[%_\\]/g, (c) => `\\${c}`)}%`));
+  const where = and(...filters);
+  const column = SORT_COLUMNS[q.sort];
+  const [rows, totals] = await Promise.all([
+    db
+      .select({ run: runs, ownerName: users.name })
+      .from(runs)
+      .innerJoin(users, eq(users.id, runs.ownerUserId))
+      .where(where)
+      .orderBy(q.order === 'asc' ? asc(column) : desc(column), desc(runs.id))
+      .limit(q.pageSize)
+      .offset((q.page - 1) * q.pageSize),
+    db.select({ n: count() }).from(runs).where(where),
+  ]);
+  return { rows, total: Number(totals[0]?.n ?? 0) };
+}
+
+export async function runsOfSweep(db: Db, sweepId: string) {
+  return db.select().from(runs).where(eq(runs.sweepId, sweepId)).orderBy(asc(runs.sweepPointIndex));
+}
+
+/** Claims a queued run for execution; false if someone else got it first or it was cancelled. */
+export async function claimQueuedRun(db: Db, id: string, now: Date): Promise<boolean> {
+  const result = await db
+    .update(runs)
+    .set({ status: 'running', startedAt: sql`COALESCE(${runs.startedAt}, ${now})` })
+    .where(and(eq(runs.id, id), eq(runs.status, 'queued')));
+  return result[0].affectedRows === 1;
+}
+
+/** Moves runs left 'running' by a stopped server back to the queue, to be resumed. */
+export async function requeueInterrupted(db: Db): Promise<number> {
+  const result = await db
+    .update(runs)
+    .set({ status: 'queued', resumes: sql`${runs.resumes} + 1` })
+    .where(eq(runs.status, 'running'));
+  return result[0].affectedRows;
+}
+
+export async function queuedRuns(db: Db, limit: number) {
+  return db
+    .select({ id: runs.id, departmentId: runs.departmentId, createdAt: runs.createdAt, resumes: runs.resumes })
+    .from(runs)
+    .where(eq(runs.status, 'queued'))
+    // Interrupted runs first (they hold work already done), then oldest first.
+    .orderBy(desc(runs.resumes), asc(runs.createdAt))
+    .limit(limit);
+}
+
+export async function loadRun(db: DbOrTx, id: string) {
+  const rows = await db.select().from(runs).where(eq(runs.id, id)).limit(1);
+  return rows[0];
+}
+
+export async function updateRun(db: DbOrTx, id: string, values: Partial<typeof runs.$inferInsert>, onlyIfStatus?: RunStatus[]) {
+  const where = onlyIfStatus ? and(eq(runs.id, id), inArray(runs.status, onlyIfStatus)) : eq(runs.id, id);
+  const result = await db.update(runs).set(values).where(where);
+  return result[0].affectedRows === 1;
+}
+
+export async function deleteRun(tx: DbOrTx, id: string) {
+  await tx.delete(runs).where(eq(runs.id, id));
+}
+
+export async function loadCheckpoint(db: Db, runId: string) {
+  const rows = await db.select().from(runCheckpoints).where(eq(runCheckpoints.runId, runId)).limit(1);
+  return rows[0];
+}
+
+/** Writes the running totals and the chunks they cover in one statement (they never disagree). */
+export async function saveCheckpoint(db: Db, runId: string, tally: string, doneChunks: [number, number][]) {
+  const now = new Date();
+  await db
+    .insert(runCheckpoints)
+    .values({ runId, tally, doneChunks, updatedAt: now })
+    .onDuplicateKeyUpdate({ set: { tally, doneChunks, updatedAt: now } });
+}
+
+export async function deleteCheckpoint(db: DbOrTx, runId: string) {
+  await db.delete(runCheckpoints).where(eq(runCheckpoints.runId, runId));
+}
+
+export async function saveResult(tx: DbOrTx, runId: string, result: string, bins: (typeof runBins.$inferInsert)[]) {
+  await tx.insert(runResults).values({ runId, result, createdAt: new Date() });
+  for (let i = 0; i < bins.length; i += 1000) await tx.insert(runBins).values(bins.slice(i, i + 1000));
+}
+
+export async function loadResult(db: Db, runId: string): Promise<string | undefined> {
+  const rows = await db.select({ result: runResults.result }).from(runResults).where(eq(runResults.runId, runId)).limit(1);
+  return rows[0]?.result;
+}
+
+export async function countActiveRuns(db: Db, departmentId: string): Promise<number> {
+  const rows = await db.select({ n: count() }).from(runs).where(and(eq(runs.departmentId, departmentId), inArray(runs.status, ['queued', 'running'])));
+  return Number(rows[0]?.n ?? 0);
+}
+
+export async function findGrid(db: Db, key: string) {
+  const rows = await db.select().from(engulfmentGrids).where(eq(engulfmentGrids.key, key)).limit(1);
+  return rows[0];
+}
+
+export async function saveGrid(db: Db, key: string, grid: string, buildMs: number) {
+  await db.insert(engulfmentGrids).values({ key, grid, buildMs, createdAt: new Date() }).onDuplicateKeyUpdate({ set: { key } });
+}

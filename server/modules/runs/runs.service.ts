@@ -1,0 +1,298 @@
+import type { ScenarioResult } from '../../../shared/contracts/result.ts';
+import type { CreateRunBody, RunListQuery, RunSummary } from '../../../shared/contracts/runs.ts';
+import { parseScenario, type Scenario } from '../../../shared/contracts/scenario.ts';
+import { OBSERVER_MAX_SYSTEMS, runCostCredits } from '../../../shared/contracts/pricing.ts';
+import { roleAtLeast } from '../../../shared/contracts/roles.ts';
+import { impliedMultiplier } from '../../../shared/engine/stats/implied-occurrence.ts';
+import type { Db } from '../../db/client.ts';
+import { newId } from '../../db/columns.ts';
+import { ENGINE_VERSION, planChunks, scenarioHash } from '../../engine.ts';
+import { AppError, badRequest, conflict, forbidden, notFound } from '../../lib/errors.ts';
+import { recordAudit } from '../audit/audit.service.ts';
+import { departmentOf, type RequestAuth } from '../auth/auth.context.ts';
+import type { OccurrenceTablesService } from '../occurrence-tables/occurrence-tables.service.ts';
+import type { SamplesService } from '../samples/samples.service.ts';
+import { invalidDocument } from '../scenarios/scenarios.errors.ts';
+import type { ScenariosService } from '../scenarios/scenarios.service.ts';
+import { compareRunWithSample } from './comparison.ts';
+import { methodsParagraph, resultCsv } from './run-exports.ts';
+import type { RunScheduler } from './run-scheduler.ts';
+import { deleteRun, findRun, findRunsByIds, insertRun, listRuns, loadResult, type RunRow } from './runs.repository.ts';
+
+export const runNotFound = () => notFound('That run');
+const notFinished = (status: string) =>
+  new AppError({ code: 'run_not_finished', status: 409, message: `The run has no result yet (it is ${status}); results exist once it has succeeded.` });
+
+/** Charging for runs (issue: billing). Reserve is called before a run is queued, inside its transaction. */
+export interface RunBilling {
+  reserve(tx: Parameters<Parameters<Db['transaction']>[0]>[0], run: { id: string; departmentId: string; userId: string; systems: number; costCredits: number }): Promise<void>;
+}
+
+export const noBilling: RunBilling = { reserve: async () => {} };
+
+export function toRunSummary(run: RunRow, ownerName: string, live?: { chunksDone: number; etaSeconds: number | null } | null): RunSummary {
+  const chunksDone = live?.chunksDone ?? run.chunksDone;
+  return {
+    id: run.id,
+    scenarioId: run.scenarioId,
+    scenarioName: run.scenarioName,
+    scenarioVersion: run.scenarioVersion,
+    scenarioHash: run.scenarioHash,
+    status: run.status,
+    progress: run.status === 'succeeded' ? 1 : run.chunkCount > 0 ? chunksDone / run.chunkCount : 0,
+    chunksDone,
+    chunkCount: run.chunkCount,
+    systems: run.systems,
+    seed: run.seed,
+    engineVersion: run.engineVersion,
+    costCredits: run.costCredits,
+    whiteDwarfs: run.whiteDwarfs,
+    magnetic: run.magnetic,
+    fraction: run.fraction,
+    fractionSe: run.fractionSe,
+    ownerUserId: run.ownerUserId,
+    ownerName,
+    sweepId: run.sweepId,
+    sweepPointIndex: run.sweepPointIndex,
+    error: run.error,
+    createdAt: run.createdAt.toISOString(),
+    startedAt: run.startedAt?.toISOString() ?? null,
+    finishedAt: run.finishedAt?.toISOString() ?? null,
+    computeMs: run.computeMs,
+    resumes: run.resumes,
+    etaSeconds: run.status === 'running' ? (live?.etaSeconds ?? null) : null,
+  };
+}
+
+export interface RunsServiceDeps {
+  db: Db;
+  scheduler: RunScheduler;
+  scenarios: ScenariosService;
+  tables: OccurrenceTablesService;
+  samples: SamplesService;
+  billing: RunBilling;
+}
+
+export function createRunsService({ db, scheduler, scenarios, tables, samples, billing }: RunsServiceDeps) {
+  /** The scenario as it will run: stored table rows inlined, seed and systems overridden, validated again. */
+  async function snapshotOf(departmentId: string, scenario: Scenario, overrides: { systems?: number; seed?: string }): Promise<Scenario> {
+    const doc: Record<string, unknown> = structuredClone(scenario) as unknown as Record<string, unknown>;
+    if (overrides.systems !== undefined) doc.systems = overrides.systems;
+    if (overrides.seed !== undefined) doc.seed = overrides.seed;
+    const companions = doc.companions as { tableId?: string; rows?: unknown[]; multiplier: number };
+    if (companions.tableId) {
+      const rows = await tables.rowsFor(departmentId, companions.tableId).catch(() => {
+        throw invalidDocument([{ field: 'companions.tableId', message: `companions.tableId names no occurrence table of this department (got "${companions.tableId}")` }]);
+      });
+      doc.companions = { multiplier: companions.multiplier, rows };
+    }
+    try {
+      return parseScenario(doc);
+    } catch (error) {
+      const issues = (error as { issues?: { field: string; message: string }[] }).issues;
+      if (issues) throw invalidDocument(issues);
+      throw error;
+    }
+  }
+
+  function checkSize(auth: RequestAuth, systems: number) {
+    if (!roleAtLeast(auth.role!, 'modeller') && systems > OBSERVER_MAX_SYSTEMS) {
+      throw new AppError({
+        code: 'forbidden',
+        status: 403,
+        field: 'systems',
+        message: `Observers may start runs of at most ${OBSERVER_MAX_SYSTEMS.toLocaleString('en-US')} systems (this one has ${systems.toLocaleString('en-US')}); ask a modeller for a larger run.`,
+      });
+    }
+  }
+
+  /** Queues one run of a fully resolved scenario (used by runs, sweeps and implied occurrence). */
+  async function enqueue(
+    auth: RequestAuth,
+    source: { scenarioId: string; scenarioVersion: number; scenarioName: string },
+    snapshot: Scenario,
+    extra: { sweepId?: string; sweepPointIndex?: number; tx?: Parameters<Parameters<Db['transaction']>[0]>[0] } = {},
+  ): Promise<string> {
+    const department = departmentOf(auth);
+    checkSize(auth, snapshot.systems);
+    const id = newId();
+    const costCredits = runCostCredits(snapshot.systems);
+    const insert = async (tx: Parameters<Parameters<Db['transaction']>[0]>[0]) => {
+      await billing.reserve(tx, { id, departmentId: department.id, userId: auth.user.id, systems: snapshot.systems, costCredits });
+      await insertRun(tx, {
+        id,
+        departmentId: department.id,
+        ownerUserId: auth.user.id,
+        scenarioId: source.scenarioId,
+        scenarioVersion: source.scenarioVersion,
+        scenarioName: source.scenarioName,
+        snapshot: snapshot as unknown as Record<string, unknown>,
+        scenarioHash: scenarioHash(snapshot),
+        seed: snapshot.seed,
+        systems: snapshot.systems,
+        engineVersion: ENGINE_VERSION,
+        status: 'queued',
+        chunkCount: planChunks(snapshot.systems).chunkCount,
+        costCredits,
+        sweepId: extra.sweepId ?? null,
+        sweepPointIndex: extra.sweepPointIndex ?? null,
+        createdAt: new Date(),
+      });
+      await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'run.queued', target: id, detail: { systems: snapshot.systems, costCredits } });
+    };
+    if (extra.tx) await insert(extra.tx);
+    else await db.transaction(insert);
+    return id;
+  }
+
+  async function finishedResult(departmentId: string, id: string): Promise<{ run: RunRow; result: ScenarioResult }> {
+    const found = await findRun(db, departmentId, id);
+    if (!found) throw runNotFound();
+    if (found.run.status !== 'succeeded') throw notFinished(found.run.status);
+    const text = await loadResult(db, id);
+    if (!text) throw notFinished(found.run.status);
+    return { run: found.run, result: JSON.parse(text) as ScenarioResult };
+  }
+
+  return {
+    snapshotOf,
+    enqueue,
+    finishedResult,
+
+    async create(auth: RequestAuth, body: CreateRunBody): Promise<{ id: string }> {
+      const department = departmentOf(auth);
+      const source = await scenarios.resolve(department.id, body.scenarioId, body.version);
+      const snapshot = await snapshotOf(department.id, source.scenario, { systems: body.systems, seed: body.seed });
+      const id = await enqueue(auth, { scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: source.name }, snapshot);
+      scheduler.wake();
+      return { id };
+    },
+
+    async list(auth: RequestAuth, query: RunListQuery) {
+      const { rows, total } = await listRuns(db, departmentOf(auth).id, auth.user.id, query);
+      return {
+        runs: rows.map((r) => toRunSummary(r.run, r.ownerName, scheduler.live(r.run.id))),
+        page: { page: query.page, pageSize: query.pageSize, total },
+      };
+    },
+
+    async detail(auth: RequestAuth, id: string): Promise<RunSummary> {
+      const found = await findRun(db, departmentOf(auth).id, id);
+      if (!found) throw runNotFound();
+      return toRunSummary(found.run, found.ownerName, scheduler.live(id));
+    },
+
+    /** The owner or any modeller may cancel a queued or running run. */
+    async cancel(auth: RequestAuth, id: string): Promise<RunSummary> {
+      const department = departmentOf(auth);
+      const found = await findRun(db, department.id, id);
+      if (!found) throw runNotFound();
+      if (found.run.ownerUserId !== auth.user.id && !roleAtLeast(auth.role!, 'modeller')) throw forbidden('Only the run\'s owner or a modeller can cancel it.');
+      if (found.run.status !== 'queued' && found.run.status !== 'running') throw conflict(`The run has already ${found.run.status === 'succeeded' ? 'succeeded' : `been ${found.run.status}`}; only queued or running runs can be cancelled.`);
+      await scheduler.cancel(id);
+      await recordAudit(db, { departmentId: department.id, actorUserId: auth.user.id, action: 'run.cancelled', target: id });
+      const after = await findRun(db, department.id, id);
+      return toRunSummary(after!.run, after!.ownerName);
+    },
+
+    /** Owners delete their own finished runs (admins any); a queued or running run is cancelled first. */
+    async remove(auth: RequestAuth, id: string): Promise<void> {
+      const department = departmentOf(auth);
+      const found = await findRun(db, department.id, id);
+      if (!found) throw runNotFound();
+      if (found.run.ownerUserId !== auth.user.id && auth.role !== 'admin') throw forbidden('You can delete only your own runs.');
+      if (found.run.status === 'queued' || found.run.status === 'running') await scheduler.cancel(id);
+      await db.transaction(async (tx) => {
+        await deleteRun(tx, id);
+        await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'run.deleted', target: id });
+      });
+    },
+
+    async result(auth: RequestAuth, id: string): Promise<ScenarioResult> {
+      return (await finishedResult(departmentOf(auth).id, id)).result;
+    },
+
+    async comparison(auth: RequestAuth, id: string, sampleId: string) {
+      const department = departmentOf(auth);
+      const { run, result } = await finishedResult(department.id, id);
+      const sample = await samples.visible(department.id, sampleId);
+      const scenario = parseScenario(run.snapshot);
+      return compareRunWithSample(result, sample, scenario.field.thresholdMG);
+    },
+
+    async impliedOccurrence(auth: RequestAuth, id: string, sampleId: string) {
+      const department = departmentOf(auth);
+      const { result } = await finishedResult(department.id, id);
+      const sample = await samples.visible(department.id, sampleId);
+      if (sample.kind !== 'counts' || sample.magnetic === null || sample.total === null) {
+        throw badRequest('Implied occurrence needs a sample with counts (magnetic of total); this one states only a fraction or mean masses.', 'sample');
+      }
+      if (result.counts.whiteDwarfs === 0) throw badRequest('The run has no white dwarfs, so no occurrence is implied.', 'runId');
+      return {
+        runId: id,
+        sample: { id: sample.id, name: sample.name, magnetic: sample.magnetic, total: sample.total },
+        runMultiplier: result.multiplierResponse.runMultiplier,
+        ...impliedMultiplier(result.multiplierResponse, { magnetic: sample.magnetic, total: sample.total }),
+      };
+    },
+
+    async compare(auth: RequestAuth, ids: string[]) {
+      const department = departmentOf(auth);
+      const found = await findRunsByIds(db, department.id, ids);
+      const byId = new Map(found.map((f) => [f.run.id, f]));
+      const missing = ids.find((i) => !byId.has(i));
+      if (missing) throw notFound(`Run ${missing}`);
+      const entries = await Promise.all(
+        ids.map(async (id) => {
+          const { run, result } = await finishedResult(department.id, id);
+          return { summary: toRunSummary(run, byId.get(id)!.ownerName), result };
+        }),
+      );
+      const pairs = [];
+      for (let i = 0; i < entries.length; i++) {
+        for (let j = i + 1; j < entries.length; j++) {
+          const a = entries[i].result.fraction;
+          const b = entries[j].result.fraction;
+          if (a.value === null || b.value === null || a.se === null || b.se === null) continue;
+          const combined = Math.hypot(a.se, b.se);
+          pairs.push({ a: entries[i].summary.id, b: entries[j].summary.id, difference: a.value - b.value, sigma: combined > 0 ? Math.abs(a.value - b.value) / combined : null });
+        }
+      }
+      return {
+        runs: entries.map(({ summary, result }) => ({
+          run: summary,
+          fraction: result.fraction,
+          fractionBySetting: result.fractionBySetting,
+          fractionByChannel: result.fractionByChannel,
+          counts: result.counts,
+          bins: { wdMass: result.bins.wdMass, logField: result.bins.logField },
+        })),
+        differences: pairs,
+        method: 'Differences of predicted fractions in units of their combined Monte Carlo standard error (Gaussian, independent runs; runs sharing a seed are correlated, so this overstates the error for them).',
+      };
+    },
+
+    async exportCsv(auth: RequestAuth, id: string) {
+      return resultCsv((await finishedResult(departmentOf(auth).id, id)).result);
+    },
+
+    async methods(auth: RequestAuth, id: string) {
+      const { run, result } = await finishedResult(departmentOf(auth).id, id);
+      return methodsParagraph(parseScenario(run.snapshot), result, id);
+    },
+
+    /** The observer's question in one call: run the scenario (or reuse an identical finished run) for a sample. */
+    async startImpliedOccurrence(auth: RequestAuth, body: { scenarioId: string; sampleId: string; systems?: number; seed?: string }) {
+      const department = departmentOf(auth);
+      const sample = await samples.visible(department.id, body.sampleId);
+      if (sample.kind !== 'counts') throw badRequest('Implied occurrence needs a sample with counts (magnetic of total).', 'sampleId');
+      const source = await scenarios.resolve(department.id, body.scenarioId);
+      const snapshot = await snapshotOf(department.id, source.scenario, { systems: body.systems, seed: body.seed });
+      const id = await enqueue(auth, { scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: source.name }, snapshot);
+      scheduler.wake();
+      return { runId: id, sampleId: sample.id };
+    },
+  };
+}
+
+export type RunsService = ReturnType<typeof createRunsService>;

@@ -1,0 +1,109 @@
+import { bigint, char, double, index, int, json, longtext, mysqlEnum, mysqlTable, primaryKey, text, varchar } from 'drizzle-orm/mysql-core';
+import { RUN_STATUSES } from '../../../shared/contracts/runs.ts';
+import { idColumn, timestamp } from '../../db/columns.ts';
+
+
+/** One seeded Monte Carlo run of a scenario snapshot. */
+export const runs = mysqlTable(
+  'runs',
+  {
+    id: idColumn().primaryKey(),
+    departmentId: idColumn('department_id').notNull(),
+    ownerUserId: idColumn('owner_user_id').notNull(),
+    scenarioId: idColumn('scenario_id').notNull(),
+    scenarioVersion: int('scenario_version').notNull(),
+    scenarioName: varchar('scenario_name', { length: 160 }).notNull(),
+    /** The parsed scenario exactly as run (stored table rows inlined, seed and systems set). */
+    snapshot: json('snapshot').$type<Record<string, unknown>>().notNull(),
+    scenarioHash: char('scenario_hash', { length: 64 }).notNull(),
+    seed: varchar('seed', { length: 200 }).notNull(),
+    systems: bigint('systems', { mode: 'number' }).notNull(),
+    engineVersion: varchar('engine_version', { length: 40 }).notNull(),
+    status: mysqlEnum('status', RUN_STATUSES).notNull(),
+    chunkCount: int('chunk_count').notNull(),
+    chunksDone: int('chunks_done').notNull().default(0),
+    /** Fraction of chunks done, 0–1. */
+    progress: double('progress').notNull().default(0),
+    costCredits: int('cost_credits').notNull(),
+    /** Headline numbers copied from the result so lists can sort and filter on them. */
+    whiteDwarfs: bigint('white_dwarfs', { mode: 'number' }),
+    magnetic: bigint('magnetic', { mode: 'number' }),
+    fraction: double('fraction'),
+    fractionSe: double('fraction_se'),
+    error: text('error'),
+    sweepId: idColumn('sweep_id'),
+    sweepPointIndex: int('sweep_point_index'),
+    /** How many times the run was resumed after the server stopped. */
+    resumes: int('resumes').notNull().default(0),
+    createdAt: timestamp('created_at').notNull(),
+    startedAt: timestamp('started_at'),
+    finishedAt: timestamp('finished_at'),
+    /** Wall time spent computing, summed over resumes (ms). */
+    computeMs: bigint('compute_ms', { mode: 'number' }).notNull().default(0),
+  },
+  (t) => [
+    index('runs_department_idx').on(t.departmentId, t.createdAt),
+    index('runs_status_idx').on(t.status, t.createdAt),
+    index('runs_sweep_idx').on(t.sweepId, t.sweepPointIndex),
+  ],
+);
+
+/**
+ * Running totals of a run in progress: the summed tally of the chunks listed in
+ * `doneChunks`, written together in one statement so that they always agree. A resumed run
+ * starts from here and recomputes only the other chunks (chunk i is a pure function of
+ * (seed, i)), so it ends with exactly the counts of an uninterrupted run.
+ */
+export const runCheckpoints = mysqlTable('run_checkpoints', {
+  runId: idColumn('run_id')
+    .primaryKey()
+    .references(() => runs.id, { onDelete: 'cascade' }),
+  tally: longtext('tally').notNull(),
+  /** Sorted, merged [first, last] index ranges of finished chunks. */
+  doneChunks: json('done_chunks').$type<[number, number][]>().notNull(),
+  updatedAt: timestamp('updated_at').notNull(),
+});
+
+/** The finished result document (same fields the CLI prints). */
+export const runResults = mysqlTable('run_results', {
+  runId: idColumn('run_id')
+    .primaryKey()
+    .references(() => runs.id, { onDelete: 'cascade' }),
+  result: longtext('result').notNull(),
+  createdAt: timestamp('created_at').notNull(),
+});
+
+/**
+ * The result's histograms as rows, so SQL can aggregate them across runs (e.g. summing
+ * the white-dwarf mass histogram of magnetic white dwarfs over a sweep).
+ * histogram: wdMass | logField | fateMap; series: magnetic | nonMagnetic | all | a fate name.
+ * For the 2-D fate map, bin is the mass bin and bin2 the period bin.
+ */
+export const runBins = mysqlTable(
+  'run_bins',
+  {
+    runId: idColumn('run_id')
+      .notNull()
+      .references(() => runs.id, { onDelete: 'cascade' }),
+    histogram: varchar('histogram', { length: 16 }).notNull(),
+    series: varchar('series', { length: 16 }).notNull(),
+    bin: int('bin').notNull(),
+    bin2: int('bin2').notNull().default(0),
+    lo: double('lo').notNull(),
+    hi: double('hi').notNull(),
+    lo2: double('lo2'),
+    hi2: double('hi2'),
+    count: bigint('count', { mode: 'number' }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.runId, t.histogram, t.series, t.bin, t.bin2] })],
+);
+
+/** Engulfment grids of the `track` giant option, built once per physics hash. */
+export const engulfmentGrids = mysqlTable('engulfment_grids', {
+  key: char('grid_key', { length: 64 }).primaryKey(),
+  grid: longtext('grid').notNull(),
+  buildMs: int('build_ms').notNull(),
+  createdAt: timestamp('created_at').notNull(),
+});
+
+export type RunRow = typeof runs.$inferSelect;

@@ -1,0 +1,171 @@
+import { and, desc, eq } from 'drizzle-orm';
+import { SWEEPABLE_PARAMETERS, ScenarioValidationError, withParameter, type Scenario } from '../../../shared/contracts/scenario.ts';
+import type { Sample } from '../../../shared/contracts/samples.ts';
+import type { CreateSweepBody, SweepDetail, SweepSummary } from '../../../shared/contracts/sweeps.ts';
+import { binomialTestTwoSided } from '../../../shared/engine/stats/binomial-test.ts';
+import type { Db } from '../../db/client.ts';
+import { newId } from '../../db/columns.ts';
+import { AppError, notFound } from '../../lib/errors.ts';
+import { recordAudit } from '../audit/audit.service.ts';
+import { departmentOf, type RequestAuth } from '../auth/auth.context.ts';
+import type { RunScheduler } from '../runs/run-scheduler.ts';
+import { runsOfSweep } from '../runs/runs.repository.ts';
+import type { RunsService } from '../runs/runs.service.ts';
+import type { SamplesService } from '../samples/samples.service.ts';
+import type { ScenariosService } from '../scenarios/scenarios.service.ts';
+import { sweeps } from './sweeps.table.ts';
+
+type SweepRow = typeof sweeps.$inferSelect;
+type RunRow = Awaited<ReturnType<typeof runsOfSweep>>[number];
+
+export const sweepNotFound = () => notFound('That sweep');
+
+/** Every grid point of the axes, row-major (the last axis varies fastest). */
+export function gridPoints(axes: { values: number[] }[]): number[][] {
+  return axes.reduce<number[][]>((points, axis) => points.flatMap((p) => axis.values.map((v) => [...p, v])), [[]]);
+}
+
+function sweepStatus(points: RunRow[]): SweepSummary['status'] {
+  if (points.some((p) => p.status === 'running')) return 'running';
+  if (points.some((p) => p.status === 'queued')) return 'queued';
+  if (points.length > 0 && points.every((p) => p.status === 'cancelled')) return 'cancelled';
+  return 'finished';
+}
+
+function summary(row: SweepRow, points: RunRow[]): SweepSummary {
+  return {
+    id: row.id,
+    name: row.name,
+    scenarioId: row.scenarioId,
+    scenarioVersion: row.scenarioVersion,
+    axes: row.axes.map((a) => {
+      const known = SWEEPABLE_PARAMETERS.find((p) => p.path === a.path);
+      return { ...a, label: known?.label ?? a.path, unit: known?.unit ?? '' };
+    }),
+    seed: row.seed,
+    systems: row.systems,
+    pointCount: row.pointCount,
+    pointsDone: points.filter((p) => p.status === 'succeeded' || p.status === 'failed' || p.status === 'cancelled').length,
+    status: sweepStatus(points),
+    createdAt: row.createdAt.toISOString(),
+  };
+}
+
+/** Contiguous range of axis values whose points are all consistent, around the most consistent one. */
+function allowedRange(values: number[], consistent: (boolean | null)[], pValues: (number | null)[]): [number, number] | null {
+  const ok = values.map((v, i) => ({ v, ok: consistent[i] === true, p: pValues[i] ?? -1 })).sort((a, b) => a.v - b.v);
+  const okValues = ok.filter((x) => x.ok).map((x) => x.v);
+  if (okValues.length === 0) return null;
+  return [Math.min(...okValues), Math.max(...okValues)];
+}
+
+export function createSweepsService(deps: { db: Db; runs: RunsService; scenarios: ScenariosService; samples: SamplesService; scheduler: RunScheduler }) {
+  const { db, runs, scenarios, samples, scheduler } = deps;
+
+  async function load(departmentId: string, id: string) {
+    const rows = await db.select().from(sweeps).where(and(eq(sweeps.departmentId, departmentId), eq(sweeps.id, id))).limit(1);
+    if (!rows[0]) throw sweepNotFound();
+    return { row: rows[0], points: await runsOfSweep(db, id) };
+  }
+
+  return {
+    /** Queues one run per grid point, every one with the same seed (common random numbers). */
+    async create(auth: RequestAuth, body: CreateSweepBody): Promise<{ id: string }> {
+      const department = departmentOf(auth);
+      body.axes.forEach((axis, i) => {
+        if (!SWEEPABLE_PARAMETERS.some((p) => p.path === axis.path)) {
+          throw new AppError({ code: 'invalid_input', status: 400, field: `axes[${i}].path`, message: `axes[${i}].path must be one of ${SWEEPABLE_PARAMETERS.map((p) => p.path).join(', ')} (got "${axis.path}")` });
+        }
+      });
+      const source = await scenarios.resolve(department.id, body.scenarioId);
+      const base = await runs.snapshotOf(department.id, source.scenario, { systems: body.systems, seed: body.seed });
+      const points = gridPoints(body.axes);
+      const snapshots: Scenario[] = points.map((values, index) =>
+        values.reduce((scenario, value, axisIndex) => {
+          try {
+            return withParameter(scenario, body.axes[axisIndex].path, value);
+          } catch (error) {
+            if (!(error instanceof ScenarioValidationError)) throw error;
+            const valueIndex = body.axes[axisIndex].values.indexOf(value);
+            throw new AppError({
+              code: 'invalid_input', status: 400, field: `axes[${axisIndex}].values[${valueIndex}]`,
+              message: `axes[${axisIndex}].values[${valueIndex}] = ${value} at grid point ${index}: ${error.issues[0]?.message ?? 'invalid'}`,
+            });
+          }
+        }, base),
+      );
+      const id = newId();
+      const name = body.name ?? `${source.name}: ${body.axes.map((a) => a.path).join(' × ')}`;
+      await db.transaction(async (tx) => {
+        await tx.insert(sweeps).values({
+          id, departmentId: department.id, ownerUserId: auth.user.id, scenarioId: body.scenarioId, scenarioVersion: source.version,
+          name: name.slice(0, 160), axes: body.axes, seed: base.seed, systems: base.systems, pointCount: points.length, createdAt: new Date(),
+        });
+        for (const [index, snapshot] of snapshots.entries()) {
+          await runs.enqueue(auth, { scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: source.name }, snapshot, { sweepId: id, sweepPointIndex: index, tx });
+        }
+        await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'sweep.created', target: id, detail: { points: points.length } });
+      });
+      scheduler.wake();
+      return { id };
+    },
+
+    async list(auth: RequestAuth): Promise<SweepSummary[]> {
+      const department = departmentOf(auth);
+      const rows = await db.select().from(sweeps).where(eq(sweeps.departmentId, department.id)).orderBy(desc(sweeps.createdAt)).limit(200);
+      return Promise.all(rows.map(async (row) => summary(row, await runsOfSweep(db, row.id))));
+    },
+
+    async detail(auth: RequestAuth, id: string, sampleId?: string): Promise<SweepDetail> {
+      const department = departmentOf(auth);
+      const { row, points } = await load(department.id, id);
+      const sample: Sample | null = sampleId ? await samples.visible(department.id, sampleId) : null;
+      const counts = sample?.kind === 'counts' && sample.magnetic !== null && sample.total !== null ? { k: sample.magnetic, n: sample.total } : null;
+      const grid = gridPoints(row.axes);
+      const pointRows = points.map((run) => {
+        const pValue = counts && run.status === 'succeeded' && run.fraction !== null ? binomialTestTwoSided(counts.k, counts.n, run.fraction) : null;
+        return {
+          index: run.sweepPointIndex ?? 0,
+          values: grid[run.sweepPointIndex ?? 0] ?? [],
+          runId: run.id,
+          status: run.status,
+          fraction: run.fraction,
+          fractionSe: run.fractionSe,
+          whiteDwarfs: run.whiteDwarfs,
+          magnetic: run.magnetic,
+          pValue,
+          consistent68: pValue === null ? null : pValue >= 1 - 0.6827,
+          consistent95: pValue === null ? null : pValue >= 0.05,
+        };
+      });
+      const oneD = row.axes.length === 1;
+      return {
+        ...summary(row, points),
+        points: pointRows,
+        band: sample
+          ? { sampleId: sample.id, name: sample.name, fraction: sample.fraction ?? 0, interval68: sample.interval68, interval95: sample.interval95 }
+          : null,
+        allowedRange:
+          counts && oneD
+            ? {
+                level68: allowedRange(pointRows.map((p) => p.values[0]), pointRows.map((p) => p.consistent68), pointRows.map((p) => p.pValue)),
+                level95: allowedRange(pointRows.map((p) => p.values[0]), pointRows.map((p) => p.consistent95), pointRows.map((p) => p.pValue)),
+                note: 'The smallest and largest grid values whose prediction the sample does not reject (exact two-sided binomial test); the true limits lie between grid values, and each point carries its own Monte Carlo error.',
+              }
+            : null,
+        method: 'Every point is a separate run with the same seed, so the points share their random numbers (common random numbers) and the curve is smooth; p-values are exact two-sided binomial tests of the sample against each point.',
+      };
+    },
+
+    async cancel(auth: RequestAuth, id: string): Promise<SweepSummary> {
+      const department = departmentOf(auth);
+      const { points } = await load(department.id, id);
+      for (const run of points) if (run.status === 'queued' || run.status === 'running') await scheduler.cancel(run.id);
+      await recordAudit(db, { departmentId: department.id, actorUserId: auth.user.id, action: 'sweep.cancelled', target: id });
+      const after = await load(department.id, id);
+      return summary(after.row, after.points);
+    },
+  };
+}
+
+export type SweepsService = ReturnType<typeof createSweepsService>;

@@ -1,0 +1,111 @@
+import { z } from 'zod';
+
+/**
+ * The result document of one run: integer counts (chunk sums, exact), fractions derived from
+ * them with Monte Carlo standard errors, histograms, the exact response of the magnetic count to
+ * the occurrence multiplier, and, when the scenario carries an observed sample, the comparison.
+ */
+
+const count = z.number().int().min(0);
+
+/** A fraction k/n with its Monte Carlo standard error; null when n = 0. */
+export const fractionSchema = z.object({
+  value: z.number().min(0).max(1).nullable(),
+  se: z.number().min(0).nullable(),
+  k: count,
+  n: count,
+});
+
+const settingCountsSchema = z.object({ whiteDwarfs: count, magnetic: count });
+const bySettingSchema = <T extends z.ZodType>(item: T) => z.object({ single: item, wide: item, postCE: item });
+const byChannelSchema = <T extends z.ZodType>(item: T) => z.object({ disruption: item, coreMerger: item, fossil: item });
+
+/** compareWithObserved's output (shared/engine/stats/compare-observed.ts). Unknown keys are dropped on parse. */
+export const observedComparisonSchema = z.object({
+  observed: z.object({
+    magnetic: count,
+    total: count,
+    fraction: z.number(),
+    interval68: z.tuple([z.number(), z.number()]),
+    interval95: z.tuple([z.number(), z.number()]),
+  }),
+  predicted: z.object({ value: z.number(), se: z.number() }),
+  pValue: z.number(),
+  sigma: z.number(),
+  predictedInside68: z.boolean(),
+  predictedInside95: z.boolean(),
+  mcErrorMatters: z.boolean(),
+  summary: z.string(),
+  method: z.string(),
+});
+
+/** impliedMultiplier's output (shared/engine/stats/implied-occurrence.ts). Unknown keys are dropped on parse. */
+export const impliedOccurrenceSchema = z.object({
+  interval68: z.tuple([z.number(), z.number()]).nullable(),
+  interval95: z.tuple([z.number(), z.number()]).nullable(),
+  bestFit: z.number(),
+  curve: z.array(z.object({ multiplier: z.number(), fraction: z.number() })),
+  summary: z.string(),
+  method: z.string(),
+});
+
+export const methodEntrySchema = z.object({ topic: z.string(), method: z.string(), reference: z.string() });
+
+export const scenarioResultSchema = z.object({
+  engineVersion: z.string(),
+  scenarioHash: z.string().regex(/^[0-9a-f]{64}$/),
+  seed: z.string(),
+  systems: count,
+  chunkCount: count,
+  /** Chunks summed into these counts; equals chunkCount for a finished run. */
+  chunksCompleted: count,
+  complete: z.boolean(),
+  counts: z.object({
+    /** Primaries drawn (equals systems for a finished run). */
+    primaries: count,
+    /** Primaries that are white dwarfs today, before selection. */
+    whiteDwarfsFormed: count,
+    /** White dwarfs in the (selected) sample. */
+    whiteDwarfs: count,
+    magnetic: count,
+    byChannel: byChannelSchema(count),
+    bySetting: bySettingSchema(settingCountsSchema),
+    channelBySetting: byChannelSchema(bySettingSchema(count)),
+    /** Companions present around sampled white dwarfs, by fate. */
+    companionFates: z.object({ wide: count, postCE: count, disrupted: count, merged: count }),
+  }),
+  /** Magnetic / white dwarfs. */
+  fraction: fractionSchema,
+  /** Magnetic / white dwarfs within each setting. */
+  fractionBySetting: bySettingSchema(fractionSchema),
+  /** Magnetic white dwarfs of each channel / all white dwarfs. */
+  fractionByChannel: byChannelSchema(fractionSchema),
+  bins: z.object({
+    wdMass: z.object({ edgesMsun: z.array(z.number()), magnetic: z.array(count), nonMagnetic: z.array(count) }),
+    logField: z.object({ edgesLog10MG: z.array(z.number()), counts: z.array(count), thresholdMG: z.number() }),
+    fateMap: z.object({
+      log10MassEdgesMsun: z.array(z.number()),
+      log10PeriodEdgesDays: z.array(z.number()),
+      fates: z.array(z.enum(['wide', 'postCE', 'disrupted', 'merged'])),
+      /** counts[fate][massBin][periodBin]. */
+      counts: z.array(z.array(z.array(count))),
+    }),
+    survivorSeparation: z.object({ edgesLog10AU: z.array(z.number()), wide: z.array(count), postCE: z.array(count) }),
+  }),
+  /** magneticAt[j]: magnetic white dwarfs had the multiplier been multiplierEdges[j] (same draws). */
+  multiplierResponse: z.object({
+    whiteDwarfs: count,
+    multiplierEdges: z.array(z.number()),
+    magneticAt: z.array(count),
+    runMultiplier: z.number(),
+    method: z.string(),
+  }),
+  comparison: observedComparisonSchema.optional(),
+  impliedOccurrence: impliedOccurrenceSchema.optional(),
+  assumptions: z.array(z.string()),
+  methods: z.array(methodEntrySchema),
+});
+
+export type ScenarioResult = z.output<typeof scenarioResultSchema>;
+export type ResultFraction = z.output<typeof fractionSchema>;
+export type MethodEntry = z.output<typeof methodEntrySchema>;

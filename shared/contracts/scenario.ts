@@ -1,0 +1,356 @@
+import { z } from 'zod';
+import { giantTrackSchema } from './giant-track.ts';
+import { companionRowSchema, emptyRangeMessage, rangeSchema } from './occurrence-table.ts';
+import { describeIssues, formatNumber, numberBounds, schemaAt, type FieldIssue } from './schema-issues.ts';
+
+/**
+ * The scenario document: one seeded Monte Carlo population of white-dwarf progenitors and
+ * their companions. Units are in the names (Msun unless a name says MJup; days; Gyr; AU; MG).
+ * Every numeric field has a lower and an upper bound; `parseScenario` turns zod's issues into
+ * messages that name the field, the value and the allowed range.
+ */
+
+const number = (lo: number, hi: number) => z.number().min(lo).max(hi);
+
+const LIMITS = {
+  /** Upper end of the primaries' mass range: heavier stars do not end as white dwarfs. */
+  primaryMassMsun: [0.01, 8] as const,
+  ageGyr: [0.01, 13.8] as const,
+};
+
+// ---- primaries -------------------------------------------------------------------------
+
+const imfSchema = z.discriminatedUnion('law', [
+  /** Single power law dN/dM ∝ M^-slope (Salpeter's slope is 2.35). */
+  z.strictObject({ law: z.literal('powerlaw'), slope: number(-3, 6).default(2.35) }),
+  /** Broken power law: slopes[i] applies between breaksMsun[i-1] and breaksMsun[i]. */
+  z.strictObject({
+    law: z.literal('brokenPowerlaw'),
+    breaksMsun: z.array(number(0.01, 8)).min(1).max(8),
+    slopes: z.array(number(-3, 6)).min(2).max(9),
+  }),
+  /** Salpeter (1955): dN/dM ∝ M^-2.35. */
+  z.strictObject({ law: z.literal('salpeter1955') }),
+  /** Kroupa (2001): slopes 0.3 / 1.3 / 2.3 with breaks at 0.08 and 0.5 Msun. */
+  z.strictObject({ law: z.literal('kroupa2001') }),
+  /** Chabrier (2003) single-star IMF: log-normal below 1 Msun, power law above. */
+  z.strictObject({ law: z.literal('chabrier2003') }),
+]);
+
+const historySchema = z.discriminatedUnion('kind', [
+  /** Every star has the age ageGyr. */
+  z.strictObject({ kind: z.literal('burst'), ageGyr: number(...LIMITS.ageGyr).default(10) }),
+  /** Birth times uniform over [0, ageGyr]. */
+  z.strictObject({ kind: z.literal('constant'), ageGyr: number(...LIMITS.ageGyr).default(10) }),
+]);
+
+const lifetimeSchema = z.discriminatedUnion('kind', [
+  /** t_MS = t0Gyr · (M/Msun)^-exponent. */
+  z.strictObject({
+    kind: z.literal('scaling'),
+    t0Gyr: number(0.1, 100).default(10),
+    exponent: number(0.5, 5).default(2.5),
+  }),
+  /** Tabulated t_MS(M), interpolated linearly in log M – log t. */
+  z.strictObject({
+    kind: z.literal('table'),
+    points: z
+      .array(z.strictObject({ massMsun: number(0.01, 150), lifetimeGyr: number(1e-4, 1e5) }))
+      .min(2)
+      .max(200),
+  }),
+]);
+
+const ifmrSchema = z.discriminatedUnion('relation', [
+  /** Kalirai et al. (2008): Mf = 0.109 Mi + 0.394. */
+  z.strictObject({ relation: z.literal('kalirai2008') }),
+  /** Cummings et al. (2018): piecewise linear, MIST- or PARSEC-based. */
+  z.strictObject({ relation: z.literal('cummings2018'), calibration: z.enum(['mist', 'parsec']).default('mist') }),
+  /** A user table of (initial, final) masses, interpolated linearly. */
+  z.strictObject({
+    relation: z.literal('table'),
+    points: z
+      .array(z.strictObject({ initialMsun: number(0.01, 150), finalMsun: number(0.1, 1.4) }))
+      .min(2)
+      .max(200),
+  }),
+]);
+
+const primariesSchema = z.strictObject({
+  imf: imfSchema.default({ law: 'kroupa2001' }),
+  /** Initial masses of the drawn primaries. */
+  massRangeMsun: rangeSchema(...LIMITS.primaryMassMsun).default([0.8, 8]),
+  history: historySchema.default({ kind: 'constant', ageGyr: 10 }),
+  lifetime: lifetimeSchema.default({ kind: 'scaling', t0Gyr: 10, exponent: 2.5 }),
+  ifmr: ifmrSchema.default({ relation: 'cummings2018', calibration: 'mist' }),
+});
+
+// ---- companions and their fates ---------------------------------------------------------
+
+const companionsSchema = z.strictObject({
+  /** Global factor on every row's occurrence (what-if studies). */
+  multiplier: number(0, 1000).default(1),
+  rows: z.array(companionRowSchema).max(32).optional(),
+  /** A stored occurrence table, resolved to rows by the server before a run. */
+  tableId: z.string().min(1).max(100).optional(),
+});
+
+const fixedReachSchema = z.strictObject({
+  kind: z.literal('fixedReach'),
+  /** Engulfed iff the initial semi-major axis is below this. */
+  reachAU: number(0.01, 100).default(2),
+});
+
+const giantSchema = z.discriminatedUnion('kind', [fixedReachSchema, giantTrackSchema.strict()]);
+
+const envelopeSchema = z.strictObject({
+  /** Common-envelope efficiency α_CE (Webbink 1984). */
+  alpha: number(0.01, 10).default(1),
+  /** Envelope structure parameter λ in E_bind = G M M_env / (λ R). */
+  lambda: number(0.05, 5).default(0.5),
+});
+
+const disruptionSchema = z.strictObject({
+  /** η in the tidal radius r_t = η R2 (M_core/M2)^(1/3); 2.44 is the fluid Roche limit. */
+  eta: number(0.1, 5).default(2.44),
+});
+
+const lognormalFieldSchema = z.strictObject({
+  kind: z.literal('lognormal'),
+  medianMG: number(1e-3, 1e5),
+  widthDex: number(0, 3).default(0.5),
+});
+
+const accretionFieldSchema = z.strictObject({
+  kind: z.literal('accretion'),
+  /** Shakura & Sunyaev (1973) viscosity parameter of the debris disc. */
+  alpha: number(1e-4, 1).default(0.1),
+  /** Disc aspect ratio H/R. */
+  aspectRatio: number(1e-3, 0.5).default(0.1),
+  /** Fraction of the companion's mass that ends in the disc. */
+  discMassFraction: number(1e-4, 1).default(1),
+  /** Log-normal scatter (dex) around the computed field; 0 = none. */
+  widthDex: number(0, 3).default(0),
+});
+
+const fieldSchema = z.strictObject({
+  disruption: z
+    .discriminatedUnion('kind', [lognormalFieldSchema, accretionFieldSchema])
+    .default({ kind: 'lognormal', medianMG: 50, widthDex: 0.5 }),
+  coreMerger: lognormalFieldSchema.default({ kind: 'lognormal', medianMG: 100, widthDex: 0.5 }),
+  /** A white dwarf counts as magnetic iff its field is at least this. */
+  thresholdMG: number(0.01, 1000).default(1),
+});
+
+const fossilSchema = z.strictObject({
+  enabled: z.boolean().default(false),
+  /** Fraction of progenitors inside massRangeMsun that carry a main-sequence field. */
+  fraction: number(0, 1).default(0.05),
+  massRangeMsun: rangeSchema(...LIMITS.primaryMassMsun).default([1.5, 4]),
+  /** Log-normal main-sequence surface field: median in kG, width in dex. */
+  msField: z
+    .strictObject({ medianKG: number(1e-3, 1e3).default(1), widthDex: number(0, 3).default(0.5) })
+    .default({ medianKG: 1, widthDex: 0.5 }),
+});
+
+const channelsSchema = z.strictObject({
+  disruption: z.boolean().default(true),
+  coreMerger: z.boolean().default(true),
+  fossil: fossilSchema.default({ enabled: false, fraction: 0.05, massRangeMsun: [1.5, 4], msField: { medianKG: 1, widthDex: 0.5 } }),
+});
+
+const selectionSchema = z.discriminatedUnion('kind', [
+  z.strictObject({ kind: z.literal('volume') }),
+  /** Accept each white dwarf with probability ∝ L^(3/2) (Mestel cooling). */
+  z.strictObject({
+    kind: z.literal('magnitudeLimited'),
+    /** Cooling ages below this are raised to it (Mestel's law fails for hot young white dwarfs). */
+    coolingAgeFloorGyr: number(1e-3, 2).default(0.1),
+  }),
+]);
+
+const observedSchema = z.strictObject({
+  magnetic: z.number().int().min(0).max(1e9),
+  total: z.number().int().min(1).max(1e9),
+  label: z.string().max(200).optional(),
+});
+
+export const scenarioSchema = z
+  .strictObject({
+    title: z.string().max(200).optional(),
+    description: z.string().max(4000).optional(),
+    seed: z.string().min(1).max(200),
+    /** Number of primaries drawn. */
+    systems: z.number().int().min(1e3).max(1e10).default(1e6),
+    primaries: primariesSchema.default({
+      imf: { law: 'kroupa2001' },
+      massRangeMsun: [0.8, 8],
+      history: { kind: 'constant', ageGyr: 10 },
+      lifetime: { kind: 'scaling', t0Gyr: 10, exponent: 2.5 },
+      ifmr: { relation: 'cummings2018', calibration: 'mist' },
+    }),
+    companions: companionsSchema.default({ multiplier: 1, rows: [] }),
+    giant: giantSchema.default({ kind: 'fixedReach', reachAU: 2 }),
+    envelope: envelopeSchema.default({ alpha: 1, lambda: 0.5 }),
+    disruption: disruptionSchema.default({ eta: 2.44 }),
+    field: fieldSchema.default({
+      disruption: { kind: 'lognormal', medianMG: 50, widthDex: 0.5 },
+      coreMerger: { kind: 'lognormal', medianMG: 100, widthDex: 0.5 },
+      thresholdMG: 1,
+    }),
+    channels: channelsSchema.default({
+      disruption: true,
+      coreMerger: true,
+      fossil: { enabled: false, fraction: 0.05, massRangeMsun: [1.5, 4], msField: { medianKG: 1, widthDex: 0.5 } },
+    }),
+    selection: selectionSchema.default({ kind: 'volume' }),
+    /** An observed sample to test the prediction against. */
+    observed: observedSchema.optional(),
+  })
+  .superRefine((s, ctx) => {
+    const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: 'custom', path, message });
+    const range = (path: (string | number)[], r: readonly [number, number]) => {
+      if (!(r[0] < r[1])) issue(path, emptyRangeMessage(r));
+    };
+    range(['primaries', 'massRangeMsun'], s.primaries.massRangeMsun);
+    range(['channels', 'fossil', 'massRangeMsun'], s.channels.fossil.massRangeMsun);
+
+    const imf = s.primaries.imf;
+    if (imf.law === 'brokenPowerlaw') {
+      if (imf.slopes.length !== imf.breaksMsun.length + 1) {
+        issue(['primaries', 'imf', 'slopes'], `must have one more entry than breaksMsun (got ${imf.slopes.length} slopes for ${imf.breaksMsun.length} breaks)`);
+      }
+      if (!isStrictlyAscending(imf.breaksMsun)) issue(['primaries', 'imf', 'breaksMsun'], `must be strictly ascending (got [${imf.breaksMsun.join(', ')}])`);
+    }
+
+    const lifetime = s.primaries.lifetime;
+    if (lifetime.kind === 'table') {
+      const masses = lifetime.points.map((p) => p.massMsun);
+      const times = lifetime.points.map((p) => p.lifetimeGyr);
+      if (!isStrictlyAscending(masses)) issue(['primaries', 'lifetime', 'points'], `masses must be strictly ascending (got [${masses.join(', ')}])`);
+      else if (!isStrictlyAscending(times.slice().reverse())) issue(['primaries', 'lifetime', 'points'], `lifetimes must fall strictly as mass rises (got [${times.join(', ')}])`);
+    }
+
+    const ifmr = s.primaries.ifmr;
+    if (ifmr.relation === 'table') {
+      const initial = ifmr.points.map((p) => p.initialMsun);
+      if (!isStrictlyAscending(initial)) issue(['primaries', 'ifmr', 'points'], `initial masses must be strictly ascending (got [${initial.join(', ')}])`);
+      ifmr.points.forEach((p, i) => {
+        if (!(p.finalMsun < p.initialMsun)) issue(['primaries', 'ifmr', 'points', i, 'finalMsun'], `must be below initialMsun = ${p.initialMsun} (got ${p.finalMsun})`);
+      });
+    }
+
+    const { rows, tableId, multiplier } = s.companions;
+    if ((rows === undefined) === (tableId === undefined)) {
+      issue(['companions'], `must give exactly one of rows or tableId (got ${rows === undefined ? 'neither' : 'both'})`);
+    }
+    rows?.forEach((row, i) => {
+      const product = row.occurrence * multiplier;
+      if (product > 1 + 1e-12) {
+        issue(['companions', 'rows', i, 'occurrence'], `× companions.multiplier must be at most 1, since it is a probability (got ${row.occurrence} × ${multiplier} = ${formatNumber(product)})`);
+      }
+    });
+
+    if (s.observed && s.observed.magnetic > s.observed.total) {
+      issue(['observed', 'magnetic'], `must not exceed observed.total = ${s.observed.total} (got ${s.observed.magnetic})`);
+    }
+  });
+
+export type ScenarioInput = z.input<typeof scenarioSchema>;
+export type Scenario = z.output<typeof scenarioSchema>;
+export type ImfOptions = Scenario['primaries']['imf'];
+export type HistoryOptions = Scenario['primaries']['history'];
+export type LifetimeOptions = Scenario['primaries']['lifetime'];
+export type IfmrOptions = Scenario['primaries']['ifmr'];
+export type GiantOptions = Scenario['giant'];
+export type FieldOptions = Scenario['field'];
+export type LognormalFieldOptions = z.output<typeof lognormalFieldSchema>;
+export type AccretionFieldOptions = z.output<typeof accretionFieldSchema>;
+export type FossilOptions = Scenario['channels']['fossil'];
+export type SelectionOptions = Scenario['selection'];
+export type ObservedSample = z.output<typeof observedSchema>;
+
+function isStrictlyAscending(values: readonly number[]): boolean {
+  for (let i = 1; i < values.length; i++) if (!(values[i] > values[i - 1])) return false;
+  return true;
+}
+
+/** A scenario that failed validation; `issues` lists every problem, each naming its field. */
+export class ScenarioValidationError extends Error {
+  override readonly name = 'ScenarioValidationError';
+  constructor(readonly issues: FieldIssue[]) {
+    super(issues.map((i) => i.message).join('; '));
+  }
+}
+
+/** Validates a scenario document and fills in the defaults; throws ScenarioValidationError. */
+export function parseScenario(input: unknown): Scenario {
+  const parsed = scenarioSchema.safeParse(input, { reportInput: true });
+  if (parsed.success) return parsed.data;
+  throw new ScenarioValidationError(describeIssues(scenarioSchema, input, parsed.error.issues));
+}
+
+// ---- sweeps -----------------------------------------------------------------------------
+
+export interface SweepableParameter {
+  path: string;
+  label: string;
+  unit: string;
+  min: number;
+  max: number;
+  /** Present only for some scenarios (e.g. giant.reachAU needs giant.kind = fixedReach). */
+  requires?: string;
+}
+
+const SWEEP_DEFINITIONS: Omit<SweepableParameter, 'min' | 'max'>[] = [
+  { path: 'companions.multiplier', label: 'Occurrence multiplier', unit: '' },
+  { path: 'envelope.alpha', label: 'Common-envelope efficiency α_CE', unit: '' },
+  { path: 'envelope.lambda', label: 'Envelope binding parameter λ', unit: '' },
+  { path: 'disruption.eta', label: 'Tidal-radius factor η', unit: '' },
+  { path: 'field.thresholdMG', label: 'Magnetic detection threshold', unit: 'MG' },
+  { path: 'giant.reachAU', label: 'Engulfment reach', unit: 'AU', requires: 'giant.kind = fixedReach' },
+  { path: 'giant.reimersEta', label: 'Reimers mass-loss efficiency η_R', unit: '', requires: 'giant.kind = track' },
+  { path: 'primaries.history.ageGyr', label: 'Population age', unit: 'Gyr' },
+];
+
+const SWEEP_SAMPLE_INPUT: Record<string, unknown> = {
+  'giant.reachAU': { giant: { kind: 'fixedReach' } },
+  'giant.reimersEta': { giant: { kind: 'track' } },
+};
+
+/**
+ * The numeric fields a sweep may vary, with bounds read from the schema itself. Sweeping any
+ * of the first six keeps common random numbers (the kernel's draws do not depend on them).
+ */
+export const SWEEPABLE_PARAMETERS: readonly SweepableParameter[] = SWEEP_DEFINITIONS.map((d) => {
+  const node = schemaAt(scenarioSchema, d.path.split('.'), SWEEP_SAMPLE_INPUT[d.path] ?? {});
+  const bounds = node ? numberBounds(node) : null;
+  if (!bounds || bounds.min === null || bounds.max === null) throw new Error(`sweep parameter ${d.path} has no numeric bounds in the schema`);
+  return { ...d, min: bounds.min, max: bounds.max };
+});
+
+/** A new scenario with the numeric field at `path` set to `value`, validated again. */
+export function withParameter(scenario: Scenario, path: string, value: number): Scenario {
+  const known = SWEEPABLE_PARAMETERS.find((p) => p.path === path);
+  if (!known) {
+    throw new ScenarioValidationError([
+      { field: path, message: `${path} is not a sweepable parameter (allowed: ${SWEEPABLE_PARAMETERS.map((p) => p.path).join(', ')})` },
+    ]);
+  }
+  const copy = structuredClone(scenario) as Record<string, unknown>;
+  const keys = path.split('.');
+  let node = copy;
+  for (const key of keys.slice(0, -1)) {
+    const next = node[key];
+    if (next === null || typeof next !== 'object') {
+      throw new ScenarioValidationError([{ field: path, message: `${path} does not exist in this scenario` }]);
+    }
+    node = next as Record<string, unknown>;
+  }
+  const last = keys[keys.length - 1];
+  if (!(last in node)) {
+    throw new ScenarioValidationError([{ field: path, message: `${path} does not apply to this scenario (needs ${known.requires ?? 'a different scenario'})` }]);
+  }
+  node[last] = value;
+  return parseScenario(copy);
+}

@@ -1,0 +1,198 @@
+import type { CompanionRow } from '../../contracts/occurrence-table.ts';
+import type { Scenario } from '../../contracts/scenario.ts';
+import { MJUP_MSUN } from '../constants.ts';
+import { EngineError } from '../errors.ts';
+import { standardNormalCdf } from '../numerics/normal-cdf.ts';
+import type { IfmrSegments } from '../physics/ifmr-piecewise.ts';
+import { powerLawQuantileTable, type PowerLawQuantileTable } from '../physics/imf-power-law.ts';
+import { buildImfSampler, type ImfSampler } from '../physics/imf-sampler.ts';
+import { ENGINE_VERSION } from '../version.ts';
+import { planChunks } from './chunks.ts';
+import { buildTrackGiant, type EngulfmentGrid, type PreparedTrack } from './engulfment.ts';
+import { scenarioHash } from './scenario-hash.ts';
+import {
+  heaviestWhiteDwarfMsun,
+  ifmrSegments,
+  lifetimeGyr,
+  lightestWhiteDwarfProgenitorMsun,
+  multiplierMaxFor,
+  preparedLifetime,
+  resolvedRows,
+  type PreparedLifetime,
+} from './scenario-physics.ts';
+
+/** A companion row reduced to the numbers the hot loop needs. */
+export interface PreparedRow {
+  occurrence: number;
+  /** Presence uniforms below this draw the companion's mass and period: occurrence · m_max. */
+  drawThreshold: number;
+  /** Presence uniforms below this make the companion present: occurrence · multiplier. */
+  presentThreshold: number;
+  /** true: the mass range is a mass ratio q = M2/M1; false: masses in Msun. */
+  massIsRatio: boolean;
+  massLo: number;
+  massHi: number;
+  /** Inverse-CDF constants of dN ∝ x^massSlope dln x; null for a flat mass distribution. */
+  massQuantile: PowerLawQuantileTable | null;
+  periodLoDays: number;
+  periodHiDays: number;
+  /** Inverse-CDF constants of dN ∝ P^periodSlope dln P; null for the log-normal shape. */
+  periodQuantile: PowerLawQuantileTable | null;
+  meanLog10PeriodDays: number;
+  sigmaLog10Period: number;
+  /** Φ at the lower truncation point and Φ(hi) − Φ(lo), for the log-normal shape. */
+  cdfLo: number;
+  cdfSpan: number;
+}
+
+export type PreparedGiant = { kind: 'fixedReach'; reachAU: number } | PreparedTrack;
+
+export type PreparedSelection =
+  | { kind: 'volume' }
+  | { kind: 'magnitudeLimited'; floorGyr: number; referenceMassMsun: number; referenceCoolingAgeGyr: number };
+
+/** Everything runChunk needs, as plain structured-clone-able data. */
+export interface PreparedScenario {
+  engineVersion: string;
+  scenarioHash: string;
+  seed: string;
+  systems: number;
+  chunkCount: number;
+  imf: ImfSampler;
+  massRangeMsun: [number, number];
+  constantHistory: boolean;
+  ageGyr: number;
+  lifetime: PreparedLifetime;
+  ifmr: IfmrSegments;
+  rows: PreparedRow[];
+  multiplier: number;
+  /** Largest multiplier the rows allow, 1 / max(occurrence) (1 if no row has any). */
+  multiplierMax: number;
+  giant: PreparedGiant;
+  alphaCE: number;
+  lambda: number;
+  eta: number;
+  field: Scenario['field'];
+  disruptionMakesField: boolean;
+  coreMergerMakesField: boolean;
+  fossil: { enabled: boolean; fraction: number; loMsun: number; hiMsun: number; medianKG: number; widthDex: number };
+  selection: PreparedSelection;
+}
+
+/**
+ * Reduces a parsed scenario to plain data for the kernel. For `giant.kind = "track"` the
+ * engulfment grid is built here unless one is passed in (the server caches grids by
+ * engulfmentGridKey(engulfmentGridInputFor(scenario))).
+ */
+export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: EngulfmentGrid } = {}): PreparedScenario {
+  const rows = resolvedRows(scenario);
+  const { chunkCount } = planChunks(scenario.systems);
+  const p = scenario.primaries;
+  const ifmr = ifmrSegments(scenario);
+  const lifetime = preparedLifetime(scenario);
+  const maxOccurrence = rows.reduce((m, r) => Math.max(m, r.occurrence), 0);
+  const multiplierMax = multiplierMaxFor(rows);
+  const multiplier = scenario.companions.multiplier;
+  if (maxOccurrence > 0 && multiplier > multiplierMax * (1 + 1e-12)) {
+    throw new EngineError('companions.multiplier', multiplier, `[0, ${multiplierMax}] (1 / the largest row occurrence)`);
+  }
+  const preparedRows = rows.map((row) => prepareRow(row, maxOccurrence, multiplierMax, multiplier));
+  const fossil = scenario.channels.fossil;
+  return {
+    engineVersion: ENGINE_VERSION,
+    scenarioHash: scenarioHash(scenario),
+    seed: scenario.seed,
+    systems: scenario.systems,
+    chunkCount,
+    imf: buildImfSampler(p.imf, p.massRangeMsun),
+    massRangeMsun: [p.massRangeMsun[0], p.massRangeMsun[1]],
+    constantHistory: p.history.kind === 'constant',
+    ageGyr: p.history.ageGyr,
+    lifetime,
+    ifmr,
+    rows: preparedRows,
+    multiplier,
+    multiplierMax,
+    giant: scenario.giant.kind === 'fixedReach' ? { kind: 'fixedReach', reachAU: scenario.giant.reachAU } : buildTrackGiant(scenario, options.engulfmentGrid),
+    alphaCE: scenario.envelope.alpha,
+    lambda: scenario.envelope.lambda,
+    eta: scenario.disruption.eta,
+    field: scenario.field,
+    disruptionMakesField: scenario.channels.disruption,
+    coreMergerMakesField: scenario.channels.coreMerger,
+    fossil: {
+      enabled: fossil.enabled,
+      fraction: fossil.fraction,
+      loMsun: fossil.massRangeMsun[0],
+      hiMsun: fossil.massRangeMsun[1],
+      medianKG: fossil.msField.medianKG,
+      widthDex: fossil.msField.widthDex,
+    },
+    selection: preparedSelection(scenario, lifetime, ifmr),
+  };
+}
+
+function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: number, multiplier: number): PreparedRow {
+  // The most frequent row is always drawn; rounding must never let "present" exceed "drawn".
+  const drawThreshold = row.occurrence === maxOccurrence ? 1 : Math.min(1, row.occurrence * multiplierMax);
+  const presentThreshold = Math.min(drawThreshold, row.occurrence * multiplier);
+  const [massLo, massHi] = row.massRatio ?? (row.massMsun ? row.massMsun : [row.massMJup![0] * MJUP_MSUN, row.massMJup![1] * MJUP_MSUN]);
+  const [periodLoDays, periodHiDays] = row.periodDays;
+  const shape = row.shape;
+  const base = {
+    occurrence: row.occurrence,
+    drawThreshold,
+    presentThreshold,
+    massIsRatio: row.massRatio !== undefined,
+    massLo,
+    massHi,
+    periodLoDays,
+    periodHiDays,
+  };
+  if (shape.kind === 'powerlaw') {
+    return {
+      ...base,
+      massQuantile: powerLawQuantileTable(massLo, massHi, shape.massSlope),
+      periodQuantile: powerLawQuantileTable(periodLoDays, periodHiDays, shape.periodSlope),
+      meanLog10PeriodDays: 0,
+      sigmaLog10Period: 1,
+      cdfLo: 0,
+      cdfSpan: 1,
+    };
+  }
+  const mean = shape.meanLog10PeriodDays;
+  const sigma = shape.sigmaLog10Period;
+  const cdfLo = standardNormalCdf((Math.log10(periodLoDays) - mean) / sigma);
+  const cdfHi = standardNormalCdf((Math.log10(periodHiDays) - mean) / sigma);
+  if (!(cdfHi - cdfLo > 1e-12)) {
+    throw new EngineError('companions.rows[].periodDays', row.periodDays, `a range holding more than 1e-12 of the log-normal (mean ${mean}, sigma ${sigma})`);
+  }
+  return {
+    ...base,
+    massQuantile: null,
+    periodQuantile: null,
+    meanLog10PeriodDays: mean,
+    sigmaLog10Period: sigma,
+    cdfLo,
+    cdfSpan: cdfHi - cdfLo,
+  };
+}
+
+function preparedSelection(scenario: Scenario, lifetime: PreparedLifetime, ifmr: IfmrSegments): PreparedSelection {
+  const selection = scenario.selection;
+  if (selection.kind === 'volume') return { kind: 'volume' };
+  const p = scenario.primaries;
+  const [lo, hi] = p.massRangeMsun;
+  const age = p.history.ageGyr;
+  const lightest = lightestWhiteDwarfProgenitorMsun(lifetime, p.massRangeMsun, age) ?? lo;
+  const referenceMassMsun = heaviestWhiteDwarfMsun(ifmr, lightest, hi);
+  // The youngest cooling age any white dwarf can have: zero for constant star formation, and
+  // age − t_MS(heaviest primary) for a burst. Normalising to it keeps the acceptance ≤ 1.
+  const youngest = p.history.kind === 'burst' ? Math.max(0, age - lifetimeGyr(lifetime, hi)) : 0;
+  return {
+    kind: 'magnitudeLimited',
+    floorGyr: selection.coolingAgeFloorGyr,
+    referenceMassMsun,
+    referenceCoolingAgeGyr: Math.max(selection.coolingAgeFloorGyr, youngest),
+  };
+}

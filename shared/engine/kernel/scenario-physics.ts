@@ -1,0 +1,85 @@
+import type { CompanionRow } from '../../contracts/occurrence-table.ts';
+import type { Scenario } from '../../contracts/scenario.ts';
+import { EngineError } from '../errors.ts';
+import { CUMMINGS_2018 } from '../physics/ifmr-cummings2018.ts';
+import { KALIRAI_2008 } from '../physics/ifmr-kalirai2008.ts';
+import { finalMassMsun, type IfmrSegments } from '../physics/ifmr-piecewise.ts';
+import { ifmrFromTable } from '../physics/ifmr-table.ts';
+import { scalingLifetimeGyr } from '../physics/lifetime-scaling.ts';
+import { tabulatedLifetimeGyr } from '../physics/lifetime-table.ts';
+
+/** Scenario-level physics shared by preparation and the engulfment grid: IFMR, lifetimes, rows. */
+
+export type PreparedLifetime =
+  | { kind: 'scaling'; t0Gyr: number; exponent: number }
+  | { kind: 'table'; log10Mass: number[]; log10Gyr: number[] };
+
+/** The scenario's inline rows; a stored table must have been resolved to rows before a run. */
+export function resolvedRows(scenario: Scenario): CompanionRow[] {
+  const rows = scenario.companions.rows;
+  if (rows === undefined) {
+    throw new EngineError('companions.tableId', scenario.companions.tableId, 'resolved to inline rows before a run (the server or CLI replaces a stored table reference by its rows)');
+  }
+  return rows;
+}
+
+/** The scenario's IFMR as piecewise-linear segments. */
+export function ifmrSegments(scenario: Scenario): IfmrSegments {
+  const ifmr = scenario.primaries.ifmr;
+  switch (ifmr.relation) {
+    case 'kalirai2008':
+      return KALIRAI_2008;
+    case 'cummings2018':
+      return CUMMINGS_2018[ifmr.calibration];
+    case 'table':
+      return ifmrFromTable(ifmr.points);
+  }
+}
+
+export function preparedLifetime(scenario: Scenario): PreparedLifetime {
+  const lifetime = scenario.primaries.lifetime;
+  if (lifetime.kind === 'scaling') return { kind: 'scaling', t0Gyr: lifetime.t0Gyr, exponent: lifetime.exponent };
+  return {
+    kind: 'table',
+    log10Mass: lifetime.points.map((pt) => Math.log10(pt.massMsun)),
+    log10Gyr: lifetime.points.map((pt) => Math.log10(pt.lifetimeGyr)),
+  };
+}
+
+/** Main-sequence lifetime (Gyr) under the prepared relation. */
+export function lifetimeGyr(lifetime: PreparedLifetime, massMsun: number): number {
+  return lifetime.kind === 'scaling'
+    ? scalingLifetimeGyr(massMsun, lifetime.t0Gyr, lifetime.exponent)
+    : tabulatedLifetimeGyr(massMsun, lifetime.log10Mass, lifetime.log10Gyr);
+}
+
+/**
+ * The lightest primary in the scenario's mass range that can be a white dwarf today (the
+ * turn-off mass at the oldest age), or null if none can. Lifetimes fall with mass, so bisect.
+ */
+export function lightestWhiteDwarfProgenitorMsun(lifetime: PreparedLifetime, massRangeMsun: readonly [number, number], maxAgeGyr: number): number | null {
+  const [lo, hi] = massRangeMsun;
+  if (!(lifetimeGyr(lifetime, hi) < maxAgeGyr)) return null;
+  if (lifetimeGyr(lifetime, lo) < maxAgeGyr) return lo;
+  let a = lo;
+  let b = hi;
+  for (let i = 0; i < 100; i++) {
+    const mid = 0.5 * (a + b);
+    if (lifetimeGyr(lifetime, mid) < maxAgeGyr) b = mid;
+    else a = mid;
+  }
+  return b;
+}
+
+/** Largest white-dwarf mass over [lo, hi] (the IFMR is piecewise linear: check ends and knots). */
+export function heaviestWhiteDwarfMsun(ifmr: IfmrSegments, loMsun: number, hiMsun: number): number {
+  const candidates = [loMsun, hiMsun, ...ifmr.loMsun.filter((m) => m > loMsun && m < hiMsun)];
+  return Math.max(...candidates.map((m) => finalMassMsun(ifmr, m)));
+}
+
+
+/** The largest multiplier the rows allow, 1 / max(occurrence); 1 when no row has any occurrence. */
+export function multiplierMaxFor(rows: readonly { occurrence: number }[]): number {
+  const maxOccurrence = rows.reduce((m, r) => Math.max(m, r.occurrence), 0);
+  return maxOccurrence > 0 ? 1 / maxOccurrence : 1;
+}

@@ -1,0 +1,117 @@
+import type { ImfOptions } from '../../contracts/scenario.ts';
+import { EngineError } from '../errors.ts';
+import { CHABRIER_2003, chabrierLognormalPerLog } from './imf-chabrier2003.ts';
+import { KROUPA_2001 } from './imf-kroupa2001.ts';
+import { brokenPowerLawPieces, powerLawPieceIntegral, powerLawQuantile, powerLawQuantileTable, type PowerLawQuantileTable } from './imf-power-law.ts';
+import { SALPETER_1955 } from './imf-salpeter1955.ts';
+
+/** A power-law piece (sampled exactly) or a tabulated piece (log10 M at u = i/(n−1)). */
+export type ImfPiece =
+  | { kind: 'powerlaw'; loMsun: number; hiMsun: number; slope: number; quantile: PowerLawQuantileTable }
+  | { kind: 'table'; loMsun: number; hiMsun: number; log10MassAtU: number[] };
+
+/** Plain-data sampler for one IMF over one mass range; `cumulative[i]` is P(M ≤ piece i's top). */
+export interface ImfSampler {
+  pieces: ImfPiece[];
+  cumulative: number[];
+}
+
+/** Nodes of the quadrature behind the tabulated log-normal CDF, and of its inverse table. */
+const CDF_NODES = 4097;
+const INVERSE_NODES = 2049;
+
+/**
+ * Builds the sampler of the scenario's IMF restricted to [lo, hi]: exact inverse CDF for every
+ * power-law piece, and for the log-normal part of Chabrier (2003) a CDF tabulated by trapezoidal
+ * quadrature in log M (4096 intervals) and inverted onto a uniform grid in u (2048 intervals;
+ * linear interpolation between nodes). Example: kroupa2001 on [0.8, 8] gives one piece of slope 2.3.
+ */
+export function buildImfSampler(imf: ImfOptions, massRangeMsun: readonly [number, number]): ImfSampler {
+  const [lo, hi] = massRangeMsun;
+  if (!(lo > 0 && hi > lo)) throw new EngineError('primaries.massRangeMsun', massRangeMsun, '0 < low < high');
+  const weighted: { piece: ImfPiece; weight: number }[] = [];
+  if (imf.law === 'chabrier2003') {
+    const split = CHABRIER_2003.lognormal.upperMsun;
+    if (lo < split) {
+      const top = Math.min(hi, split);
+      const { table, total } = tabulateLognormal(lo, top);
+      weighted.push({ piece: { kind: 'table', loMsun: lo, hiMsun: top, log10MassAtU: table }, weight: total });
+    }
+    if (hi > split) {
+      const bottom = Math.max(lo, split);
+      const slope = CHABRIER_2003.powerLaw.slopePerLog + 1; // per dM: ξ(log M)/(M ln 10)
+      const weight = (CHABRIER_2003.powerLaw.amplitude / Math.LN10) * powerLawPieceIntegral(bottom, hi, slope);
+      weighted.push({ piece: powerLawPiece(bottom, hi, slope), weight });
+    }
+  } else {
+    const law = brokenLaw(imf);
+    for (const p of brokenPowerLawPieces(law.breaksMsun, law.slopes, lo, hi)) {
+      weighted.push({
+        piece: powerLawPiece(p.loMsun, p.hiMsun, p.slope),
+        weight: p.coefficient * powerLawPieceIntegral(p.loMsun, p.hiMsun, p.slope),
+      });
+    }
+  }
+  const total = weighted.reduce((s, w) => s + w.weight, 0);
+  let running = 0;
+  const cumulative = weighted.map((w) => (running += w.weight) / total);
+  cumulative[cumulative.length - 1] = 1;
+  return { pieces: weighted.map((w) => w.piece), cumulative };
+}
+
+function powerLawPiece(loMsun: number, hiMsun: number, slope: number): ImfPiece {
+  return { kind: 'powerlaw', loMsun, hiMsun, slope, quantile: powerLawQuantileTable(loMsun, hiMsun, 1 - slope) };
+}
+
+function brokenLaw(imf: Exclude<ImfOptions, { law: 'chabrier2003' }>): { breaksMsun: readonly number[]; slopes: readonly number[] } {
+  switch (imf.law) {
+    case 'powerlaw':
+      return { breaksMsun: [], slopes: [imf.slope] };
+    case 'brokenPowerlaw':
+      return { breaksMsun: imf.breaksMsun, slopes: imf.slopes };
+    case 'salpeter1955':
+      return SALPETER_1955;
+    case 'kroupa2001':
+      return KROUPA_2001;
+  }
+}
+
+function tabulateLognormal(lo: number, hi: number): { table: number[]; total: number } {
+  const x0 = Math.log10(lo);
+  const dx = (Math.log10(hi) - x0) / (CDF_NODES - 1);
+  const cdf = new Float64Array(CDF_NODES);
+  let previous = chabrierLognormalPerLog(lo);
+  for (let j = 1; j < CDF_NODES; j++) {
+    const current = chabrierLognormalPerLog(Math.pow(10, x0 + j * dx));
+    cdf[j] = cdf[j - 1] + 0.5 * (previous + current) * dx;
+    previous = current;
+  }
+  const total = cdf[CDF_NODES - 1];
+  const table = new Array<number>(INVERSE_NODES);
+  let j = 0;
+  for (let i = 0; i < INVERSE_NODES; i++) {
+    const target = (i / (INVERSE_NODES - 1)) * total;
+    while (j < CDF_NODES - 2 && cdf[j + 1] < target) j++;
+    const span = cdf[j + 1] - cdf[j];
+    const t = span > 0 ? Math.min(1, Math.max(0, (target - cdf[j]) / span)) : 0;
+    table[i] = x0 + (j + t) * dx;
+  }
+  table[0] = x0;
+  table[INVERSE_NODES - 1] = Math.log10(hi);
+  return { table, total };
+}
+
+/** Draws one initial mass (Msun) from the sampler with one uniform u in [0, 1). */
+export function sampleImfMsun(sampler: ImfSampler, u: number): number {
+  const { pieces, cumulative } = sampler;
+  let i = 0;
+  while (i < pieces.length - 1 && u >= cumulative[i]) i++;
+  const below = i === 0 ? 0 : cumulative[i - 1];
+  const v = (u - below) / (cumulative[i] - below); // rescaled uniform inside the piece
+  const piece = pieces[i];
+  if (piece.kind === 'powerlaw') return powerLawQuantile(piece.quantile, v);
+  const table = piece.log10MassAtU;
+  const position = v * (table.length - 1);
+  const k = Math.min(table.length - 2, Math.floor(position));
+  return Math.exp((table[k] + (position - k) * (table[k + 1] - table[k])) * Math.LN10); // 10^x without Math.pow's cost
+}

@@ -1,0 +1,37 @@
+import { describe, expect, it } from 'vitest';
+import { paths } from '../config/paths.ts';
+import { NAV_GROUPS, navigationFor } from './nav-items.ts';
+
+const labels = (role: Parameters<typeof navigationFor>[0]) => navigationFor(role).flatMap((g) => g.items.map((i) => i.label));
+
+const EVERYONE = [
+  'Overview',
+  'Scenarios',
+  'Runs',
+  'Sweeps',
+  'Implied occurrence',
+  'Compare',
+  'Samples',
+  'Occurrence tables',
+  'API tokens',
+  'Settings',
+];
+
+describe('navigation by role', () => {
+  it('shows observers and modellers the shared pages only', () => {
+    expect(labels('observer')).toEqual(EVERYONE);
+    expect(labels('modeller')).toEqual(EVERYONE);
+    expect(navigationFor('observer').map((g) => g.label)).not.toContain('Department');
+  });
+
+  it('adds Members and Credits for admins', () => {
+    expect(labels('admin')).toEqual([...EVERYONE, 'Members', 'Credits']);
+  });
+
+  it('links every app page exactly once, and nothing else', () => {
+    const keys = NAV_GROUPS.flatMap((g) => g.items.map((i) => i.key));
+    expect(new Set(keys).size).toBe(keys.length);
+    const appPages = Object.keys(paths).filter((key) => key !== 'signIn' && key !== 'signUp');
+    expect([...keys].sort()).toEqual(appPages.sort());
+  });
+});

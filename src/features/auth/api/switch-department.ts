@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { meResponseSchema } from '../../../../shared/contracts/auth.ts';
+import { api } from '../../../lib/api-client.ts';
+import { getMeQueryOptions, isMeQuery } from './get-me.ts';
+
+/** Makes another of the user's departments the active one; answers the new MeResponse. */
+export function switchDepartment(departmentId: string) {
+  return api.post('/api/me/department', { body: { departmentId }, schema: meResponseSchema });
+}
+
+export function useSwitchDepartment() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: switchDepartment,
+    onSuccess: (me) => {
+      queryClient.setQueryData(getMeQueryOptions().queryKey, me);
+      // Everything else belonged to the previous department: load it afresh.
+      return queryClient.resetQueries({ predicate: (query) => !isMeQuery(query) });
+    },
+  });
+}

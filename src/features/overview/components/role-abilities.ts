@@ -1,0 +1,35 @@
+import type { Role } from '../../../../shared/contracts/roles.ts';
+import type { PathKey } from '../../../config/paths.ts';
+
+export interface Ability {
+  text: string;
+  /** The page where it is done. */
+  page?: { key: PathKey; label: string };
+}
+
+/** What each role adds to the one before it (the server decides; this only explains). */
+export const ROLE_ABILITIES: Record<Role, readonly Ability[]> = {
+  observer: [
+    { text: "Read the department's scenarios, runs and sweeps, and start small runs.", page: { key: 'runs', label: 'Runs' } },
+    {
+      text: 'Keep observed samples and test them against a predicted magnetic fraction.',
+      page: { key: 'compare', label: 'Compare' },
+    },
+    {
+      text: 'Find the companion occurrence that a measured magnetic fraction would require.',
+      page: { key: 'impliedOccurrence', label: 'Implied occurrence' },
+    },
+    { text: 'Upload occurrence tables of planets, brown dwarfs and stellar companions.', page: { key: 'occurrenceTables', label: 'Occurrence tables' } },
+  ],
+  modeller: [
+    {
+      text: 'Write scenarios: IMF, star-formation history, companions, giant-branch and common-envelope physics.',
+      page: { key: 'scenarios', label: 'Scenarios' },
+    },
+    { text: 'Start heavy runs and parameter sweeps.', page: { key: 'sweeps', label: 'Sweeps' } },
+  ],
+  admin: [
+    { text: 'Set the roles of members and remove them.', page: { key: 'members', label: 'Members' } },
+    { text: 'Buy compute credit for heavy runs; see usage and receipts.', page: { key: 'credits', label: 'Credits' } },
+  ],
+};

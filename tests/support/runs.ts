@@ -1,0 +1,26 @@
+import { readFileSync } from 'node:fs';
+import type request from 'supertest';
+
+/** The example scenario of the engine's contract (shared/scenarios/check-1.json). */
+export function checkScenario(overrides: Record<string, unknown> = {}): Record<string, unknown> {
+  const doc = JSON.parse(readFileSync(new URL('../../shared/scenarios/check-1.json', import.meta.url), 'utf8')) as Record<string, unknown>;
+  return { ...doc, ...overrides };
+}
+
+/** Polls a run until it reaches a final state (or the timeout passes) and returns its summary. */
+export async function waitForRun(agent: request.Agent, runId: string, timeoutMs = 60_000): Promise<Record<string, unknown>> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const res = await agent.get(`/api/runs/${runId}`);
+    if (res.status !== 200) throw new Error(`GET run ${runId}: ${res.status} ${JSON.stringify(res.body)}`);
+    if (['succeeded', 'failed', 'cancelled'].includes(res.body.status)) return res.body;
+    if (Date.now() > deadline) throw new Error(`run ${runId} still ${res.body.status} after ${timeoutMs} ms`);
+    await new Promise((r) => setTimeout(r, 100));
+  }
+}
+
+export async function createScenario(agent: request.Agent, document: Record<string, unknown>, name = 'Check scenario'): Promise<string> {
+  const res = await agent.post('/api/scenarios').send({ name, document });
+  if (res.status !== 201) throw new Error(`create scenario: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body.id as string;
+}

@@ -1,0 +1,13 @@
+import fs from 'node:fs';
+import { parseScenario } from './shared/contracts/scenario.ts';
+import { prepareScenario, runChunk, addTally, emptyTally, buildResult } from './shared/engine/index.ts';
+const s = parseScenario(JSON.parse(fs.readFileSync('shared/scenarios/check-1.json','utf8')));
+const p = prepareScenario(s);
+let t = emptyTally(p);
+const t0 = performance.now();
+for (let i = 0; i < p.chunkCount; i++) t = addTally(t, runChunk(p, i));
+const dt = performance.now() - t0;
+const r = buildResult(s, t, { prepared: p });
+console.log(dt.toFixed(0), 'ms', (s.systems / dt * 1000 / 1e6).toFixed(2), 'M/s');
+console.log(JSON.stringify({counts: r.counts, fraction: r.fraction, fs: r.fractionBySetting}, null, 0));
+console.log(r.multiplierResponse.magneticAt.filter((_, j) => j % 32 === 0), r.multiplierResponse.multiplierEdges[77]);

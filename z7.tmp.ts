@@ -1,0 +1,14 @@
+import fs from 'node:fs';
+import { chunkUniform } from './shared/engine/random.ts';
+import { parseScenario } from './shared/contracts/scenario.ts';
+import { prepareScenario, runChunk } from './shared/engine/index.ts';
+const rng = chunkUniform('x', 0);
+let acc = 0; let t0 = performance.now();
+for (let i = 0; i < 5e7; i++) acc += rng();
+let dt = performance.now() - t0; console.log('draws/s', (5e7 / dt * 1000 / 1e6).toFixed(1), 'M', acc > 0);
+const s = parseScenario(JSON.parse(fs.readFileSync('shared/scenarios/check-1.json','utf8')));
+const p = prepareScenario({ ...s, systems: 65536 * 40 });
+for (let i = 0; i < 5; i++) runChunk(p, i);
+t0 = performance.now();
+for (let i = 5; i < 40; i++) runChunk(p, i);
+dt = performance.now() - t0; console.log('systems/s', (35 * 65536 / dt * 1000 / 1e6).toFixed(2), 'M');
