@@ -30,6 +30,9 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       res.end();
       return;
     }
+    // A handler may have set another type (CSV, text) before it failed.
+    res.removeHeader('Content-Disposition');
+    res.type('application/json');
     if (error instanceof ZodError) {
       const first = error.issues[0];
       const { field, message } = first ? describeIssue(first) : { field: undefined, message: 'Invalid input' };

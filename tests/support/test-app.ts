@@ -57,6 +57,13 @@ export async function createTestApp(overrides: Partial<Config> = {}, deps: Parti
   };
 }
 
+/** A second app (as after a restart) on the same database as ctx. The caller closes it. */
+export async function restartApp(ctx: TestContext, deps: Partial<Omit<AppDeps, 'config' | 'database' | 'logger'>> = {}): Promise<TidefieldApp> {
+  const tidefield = createApp({ config: ctx.config, database: ctx.database, logger: createLogger(ctx.config), ...deps });
+  await tidefield.scheduler.start();
+  return tidefield;
+}
+
 let counter = 0;
 /** A unique e-mail for this test run. */
 export function uniqueEmail(label = 'user'): string {

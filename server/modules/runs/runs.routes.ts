@@ -107,8 +107,8 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
     method: 'get', path: '/runs/:id/methods.txt', tag, access: 'observer',
     summary: 'A methods paragraph citing every published method used, the engine version, scenario hash and seed', params: idParamsSchema, produces: 'text/plain',
   }, async ({ auth, params, res }) => {
-    res.setHeader('Content-Type', 'text/plain; charset=utf-8');
-    res.send(await runs.methods(auth, params.id));
+    const text = await runs.methods(auth, params.id);
+    res.type('text/plain; charset=utf-8').send(text);
   });
 
   defineRoute(router, registry, mount, {

@@ -64,6 +64,14 @@ describe('compareWithObserved', () => {
     expect(below.predictedInside68).toBe(ci68.lower <= 0.1 && 0.1 <= ci68.upper);
   });
 
+  it('gives sigma = +∞ only when a prediction of exactly 0 meets a magnetic white dwarf', () => {
+    const result = compareWithObserved({ value: 0, se: 0 }, { magnetic: 1, total: 10 });
+    expect(result.pValue).toBe(0);
+    expect(result.sigma).toBe(Infinity);
+    expect(result.summary).toMatch(/rules out the predicted 0% \(p = 0, ∞σ\)\.$/);
+    expect(compareWithObserved({ value: 0, se: 0 }, { magnetic: 0, total: 10 }).pValue).toBe(1);
+  });
+
   it('returns plain data and does not touch its inputs', () => {
     const predicted = { value: 0.1, se: 0.01 };
     const observed = { magnetic: 3, total: 20 };

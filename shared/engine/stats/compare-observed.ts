@@ -59,6 +59,8 @@ function interval(k: number, n: number, confidence: number): [number, number] {
  * Clopper & Pearson (1934, Biometrika 26, 404) 68% and 95% intervals of the observed fraction,
  * and whether the Monte Carlo error could change the verdict (MC_ERROR_NEGLIGIBLE_RATIO).
  * The test treats the prediction as exact; `mcErrorMatters` says when that is not safe.
+ * A prediction of exactly 0 (or 1) that the data contradict gives pValue 0 and sigma = +∞, the
+ * only non-finite output (JSON has no infinity, so a caller sending it over HTTP must map it).
  * Fractions are dimensionless. Valid for 0 ≤ value ≤ 1, 0 ≤ se ≤ 1, integers
  * 0 ≤ magnetic ≤ total, total ≥ 1. Inputs are not modified.
  * Example: predicted { value: 0.021, se: 0.001 } against 0 of 37 → p = 1 (0 is the most likely

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatPValue, formatPercent, formatPercentRange, formatPercentWithError, formatSigma, formatSignificant } from './format.ts';
+import { formatAtResolution, formatPValue, formatPercent, formatPercentRange, formatPercentWithError, formatSigma, formatSignificant } from './format.ts';
 
 describe('summary number formatting', () => {
   it('rounds a value and its error by the Particle Data Group rule (PDG Introduction; examples from memory)', () => {
@@ -20,9 +20,12 @@ describe('summary number formatting', () => {
   });
 
   it('gives observed ranges enough digits to keep their ends apart', () => {
-    expect(formatPercentRange(0.15, 0.0321, 0.3789)).toEqual(['15', '3', '38']);
+    expect(formatPercentRange(0.15, 0.0321, 0.3789)).toEqual(['15', '3.2', '38']);
     expect(formatPercentRange(0.1005, 0.09991, 0.10109)).toEqual(['10.05', '9.99', '10.11']);
     expect(formatPercentRange(0, 0, 0.0949)).toEqual(['0', '0', '9.5']);
+    expect(formatAtResolution(2.4137, 0.0213)).toBe('2.414');
+    expect(formatAtResolution(2.4137, 3)).toBe('2.4'); // never coarser than two significant figures
+    expect(formatAtResolution(0.0848, 3)).toBe('0.085');
   });
 
   it('writes p-values from their logs, also below the smallest double', () => {

@@ -37,14 +37,27 @@ export function formatPercent(fraction: number): string {
 }
 
 /**
- * An observed fraction and its interval as percentages, all rounded at the decimal place that
- * gives the interval's width two significant figures, so that the ends stay distinct for any n.
- * Example: formatPercentRange(0.15, 0.0321, 0.3789) = ["15", "3", "38"] (to be read as 15%, 3–38%).
+ * x rounded at the decimal place that gives `resolution` (an interval's width, say) two
+ * significant figures, but never coarser than x's own second significant figure; so that the
+ * ends of a narrow interval stay distinct. Example: formatAtResolution(2.4137, 0.0213) = "2.414".
+ */
+export function formatAtResolution(x: number, resolution: number): string {
+  if (x === 0) return '0';
+  if (!(resolution > 0)) return formatSignificant(x, 2);
+  const fromResolution = Math.floor(Math.log10(resolution)) - 1;
+  const fromValue = Math.floor(Math.log10(Math.abs(x))) - 1;
+  // toFixed stops at 100 decimals; such widths only occur for absurd inputs.
+  return toFixedAtPlace(x, Math.max(-15, Math.min(fromResolution, fromValue)));
+}
+
+/**
+ * An observed fraction and its interval as percentages at the resolution of the interval's
+ * width (formatAtResolution). Example: formatPercentRange(0.15, 0.0321, 0.3789) = ["15", "3.2", "38"]
+ * (to be read as 15%, 3.2–38%).
  */
 export function formatPercentRange(fraction: number, lower: number, upper: number): [string, string, string] {
   const width = 100 * (upper - lower);
-  const place = Math.max(-15, Math.floor(Math.log10(width)) - 1);
-  const text = (x: number) => (x === 0 ? '0' : toFixedAtPlace(100 * x, place));
+  const text = (x: number) => formatAtResolution(100 * x, width);
   return [text(fraction), text(lower), text(upper)];
 }
 

@@ -61,7 +61,7 @@ describe('impliedMultiplier', () => {
     expect(result.interval68).toBeNull();
     expect(result.interval95).not.toBeNull();
     expect(result.interval95![1]).toBe(4);
-    expect(result.summary).toMatch(/implies no multiplier at 68% and between 3\.\d and 4\.0 \(95%; upper end at the edge\)/);
+    expect(result.summary).toMatch(/implies no multiplier at 68% and between 3\.\d+ and 4\.0+ \(95%; upper end at the edge\)/);
   });
 
   it('handles flat stretches and uneven edges', () => {
@@ -109,6 +109,17 @@ describe('impliedMultiplier', () => {
       expect(result.bestFit).toBeGreaterThanOrEqual(0);
       expect(result.bestFit).toBeLessThanOrEqual(edges[edges.length - 1]);
     }
+  });
+
+  it('says so in the method when the accepted fractions have a gap (1 of 30 at 95%)', () => {
+    // See the test-inversion tests: the exact test accepts ~0.0018–0.163 and again ~0.175–0.177.
+    // f(m) = 0.04 m up to m = 5 (f = 20%), so the outer pocket maps to m ≈ 4.4–4.43.
+    const wider = { whiteDwarfs: 1000, multiplierEdges: [0, 1, 2, 3, 4, 5], magneticAt: [0, 40, 80, 120, 160, 200] };
+    const result = impliedMultiplier(wider, { magnetic: 1, total: 30 });
+    expect(result.method).toMatch(/accepted fractions have gaps, so each interval is their hull/);
+    expect(result.interval95![1]).toBeGreaterThan(0.175 / 0.04);
+    expect(result.interval95![1]).toBeLessThan(0.178 / 0.04);
+    expect(impliedMultiplier(linear, { magnetic: 3, total: 20 }).method).not.toMatch(/gaps/);
   });
 
   it('states the method, resolution and the Monte Carlo error of the curve', () => {

@@ -1,7 +1,7 @@
 import { EngineError } from '../errors.ts';
 import { clopperPearson } from './clopper-pearson.ts';
 import { MC_ERROR_NEGLIGIBLE_RATIO, type ObservedCounts } from './compare-observed.ts';
-import { formatPercent, formatSignificant } from './format.ts';
+import { formatAtResolution, formatPercent, formatSignificant } from './format.ts';
 import { monteCarloStandardError } from './mc-error.ts';
 import { acceptedFractionRanges } from './test-inversion.ts';
 import { requireCount, requireSuccesses } from './validate.ts';
@@ -208,13 +208,13 @@ function impliedFromCurve(
   const last = curve[curve.length - 1].multiplier;
 
   const atEdge = (m: number) => m === first || m === last;
+  // Multipliers are written at the resolution of the widest interval, so narrow ones stay legible.
+  const widest = interval95 ?? interval68;
+  const m = (x: number) => formatAtResolution(x, widest ? widest[1] - widest[0] : 0);
   const range = (r: [number, number] | null, label: string) => {
     if (r === null) return `no multiplier at ${label}`;
     const edges = atEdge(r[0]) && atEdge(r[1]) ? '; both ends' : atEdge(r[0]) ? '; lower end' : atEdge(r[1]) ? '; upper end' : '';
-    return (
-      `a multiplier between ${formatSignificant(r[0], 2)} and ${formatSignificant(r[1], 2)} ` +
-      `(${label}${edges ? `${edges} at the edge` : ''})`
-    );
+    return `a multiplier between ${m(r[0])} and ${m(r[1])} (${label}${edges ? `${edges} at the edge` : ''})`;
   };
   const opening = `The observed ${k} of ${n} (${formatPercent(target)})`;
   const summary =
@@ -224,7 +224,7 @@ function impliedFromCurve(
         `${formatPercent(Math.min(...curve.map((p) => p.fraction)))}–${formatPercent(Math.max(...curve.map((p) => p.fraction)))}, ` +
         `and the closest, m = ${formatSignificant(bestFit, 2)}, predicts ${formatPercent(best.fraction)}.`
       : `${opening} implies ${range(interval68, '68%')} and ${range(interval95, '95%').replace(/^a multiplier /, '')}, ` +
-        `best fit ${formatSignificant(bestFit, 2)}${atEdge(bestFit) ? ' (at the edge)' : ''}.`;
+        `best fit ${m(bestFit)}${atEdge(bestFit) ? ' (at the edge)' : ''}.`;
 
   const { se, text } = describeCurve(best);
   const observed68 = clopperPearson(k, n, 0.68);

@@ -5,7 +5,7 @@
 
 /**
  * ln(1 − e^l) for l ≤ 0 without cancellation: expm1 near 0, log1p far from it
- * (Mächler 2012, "Accurately Computing log(1 − exp(−|a|))", Rmpfr package vignette, eq. 7).
+ * (Mächler 2012, "Accurately Computing log(1 − exp(−|a|))", Rmpfr package vignette).
  * Example: log1mExp(ln 0.25) = ln 0.75.
  */
 export function log1mExp(l: number): number {

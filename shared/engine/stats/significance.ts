@@ -8,8 +8,9 @@ const LN_SQRT_2PI = 0.5 * Math.log(2 * Math.PI);
  * Gaussian-equivalent significance of a two-sided p-value given by its natural log:
  * the z > 0 with 2 Q(z) = p, i.e. z = Φ⁻¹(1 − p/2), solved in log space so that it stays finite
  * and increasing for any p > 0 (ln p = −1e6 gives z ≈ 1414). Newton's method on ln Q(z), which is
- * concave (the normal density is log-concave; Bagnoli & Bergstrom 2005, Economic Theory 26, 445,
- * Theorem 2), so after the first step the iterates fall monotonically onto the root.
+ * concave (the survival function of a log-concave density is log-concave; Bagnoli & Bergstrom
+ * 2005, Economic Theory 26, 445). The start √(−2 ln Q) lies above the root (Q(z) < e^(−z²/2)),
+ * and from there the iterates fall monotonically onto it.
  * Valid for ln p in [−∞, 0]; ln p = 0 gives 0 and ln p = −∞ gives +∞.
  * Example: sigmaFromLogTwoSidedP(Math.log(5.733031437583878e-7)) = 5.
  */
@@ -18,7 +19,7 @@ export function sigmaFromLogTwoSidedP(logP: number): number {
   if (logP === 0) return 0;
   if (logP === -Infinity) return Infinity;
   const target = logP - Math.LN2; // ln Q(z) for the one-sided tail
-  // Start from the leading asymptotic z ≈ √(−2 ln Q); any start converges, this one in ~5 steps.
+  // Start from the leading asymptotic z ≈ √(−2 ln Q), above the root; ~5 Newton steps follow.
   let z = Math.sqrt(-2 * target);
   for (let iteration = 0; iteration < 100; iteration++) {
     const logQ = logNormalUpperTail(z);

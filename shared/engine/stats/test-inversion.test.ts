@@ -39,6 +39,19 @@ describe('acceptedFractionRanges (inversion of the exact two-sided binomial test
     }
   });
 
+  it('reports the hull and the gap when the accepted set is not an interval (Fay 2010)', () => {
+    // A 20 001-point scan shows that for 1 of 30 at 95% the test accepts p up to ~0.163, rejects
+    // ~0.164–0.175 and accepts again up to ~0.177; 3 of 21 at 68% has a pocket near 0.26–0.27.
+    // The hull must reach the outer pocket (within one scan step) and flag the gap.
+    for (const [k, n, confidence] of [[1, 30, 0.95], [3, 21, 0.68]] as const) {
+      const [range] = acceptedFractionRanges(k, n, [confidence]);
+      const [, hi] = scan(k, n, 1 - confidence, 0, 0.5);
+      expect(Math.abs(range.upper - hi)).toBeLessThanOrEqual(0.5 / 20000);
+      expect(range.gaps).toBe(true);
+    }
+    expect(acceptedFractionRanges(3, 20, [0.95])[0].gaps).toBe(false);
+  });
+
   it('puts the ends at 0 for k = 0 and at 1 for k = n, and contains k/n', () => {
     const [zero] = acceptedFractionRanges(0, 37, [0.95]);
     expect(zero.lower).toBe(0);

@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
-import { Link, Outlet, useLocation, useNavigation } from 'react-router-dom';
+import { Link, Outlet, ScrollRestoration, useLocation, useNavigation } from 'react-router-dom';
 import type { ActiveMe } from '../../lib/active-me.ts';
 import { CloseIcon, MenuIcon, TidefieldMark } from '../../components/ui/icons.tsx';
 import { paths } from '../../config/paths.ts';
@@ -28,15 +28,13 @@ export function AppShell({ me }: { me: ActiveMe }) {
   const location = useLocation();
   const navigation = useNavigation();
   const mainRef = useRef<HTMLElement>(null);
-  const firstRender = useRef(true);
+  const shownPath = useRef(location.pathname);
 
   // After a navigation, focus the new page so that screen readers start reading there.
   useEffect(() => {
-    if (firstRender.current) {
-      firstRender.current = false;
-      return;
-    }
-    mainRef.current?.focus();
+    if (shownPath.current === location.pathname) return;
+    shownPath.current = location.pathname;
+    mainRef.current?.focus({ preventScroll: true });
   }, [location.pathname]);
 
   useEffect(() => {
@@ -60,6 +58,7 @@ export function AppShell({ me }: { me: ActiveMe }) {
       >
         Skip to content
       </a>
+      <ScrollRestoration />
       {navigation.state === 'loading' && (
         <div aria-hidden="true" className="fixed inset-x-0 top-0 z-40 h-1 animate-pulse bg-lantern-400" />
       )}

@@ -19,9 +19,9 @@ export function UserPanel({ me, layout }: UserPanelProps) {
   return (
     <section
       aria-label="Your account"
-      className={cx(bar ? 'flex min-w-0 items-center justify-end gap-5' : 'flex flex-col gap-3 border-t border-ink-700 p-4')}
+      className={cx(bar ? 'flex w-full min-w-0 items-center gap-5' : 'flex flex-col gap-3 border-t border-ink-700 p-4')}
     >
-      <div className={cx('min-w-0', bar && 'max-w-md')}>
+      <div className={cx('min-w-0', bar && 'mr-auto max-w-md')}>
         <DepartmentSwitcher me={me} compact={bar} />
       </div>
       <div className={cx('flex min-w-0 gap-2', bar ? 'items-center' : 'flex-col items-start')}>

@@ -62,3 +62,16 @@ export const TidefieldMark = ({ className }: IconProps) => (
     <circle cx="16" cy="16" r="3.4" className="fill-foam-50" />
   </svg>
 );
+
+export const CheckIcon = ({ className }: IconProps) => (
+  <Icon className={className}>
+    <path d="m5 12.5 4.5 4.5L19 7.5" />
+  </Icon>
+);
+
+export const InfoIcon = ({ className }: IconProps) => (
+  <Icon className={className}>
+    <circle cx="12" cy="12" r="9" />
+    <path d="M12 11v5.5M12 7.5v.01" />
+  </Icon>
+);

@@ -74,7 +74,7 @@ export function Table<T>({ caption, hideCaption, columns, rows, rowKey, initialS
   }, [rows, columns, sort]);
 
   return (
-    <div role="region" aria-labelledby={captionId} tabIndex={0} className="overflow-x-auto rounded-md border border-ink-700">
+    <div role="region" aria-labelledby={captionId} tabIndex={0} className="relative overflow-x-auto rounded-md border border-ink-700">
       <table className="w-full border-collapse text-left">
         <caption id={captionId} className={hideCaption ? 'sr-only' : 'px-4 py-3 text-left font-bold text-foam-50'}>
           {caption}

@@ -85,7 +85,7 @@ export function MembersPanel({ departmentId, departmentName, currentUserId, onOw
         </span>
       ),
     },
-    { id: 'email', header: 'E-mail', sortValue: (m) => m.email, cell: (m) => <span className="break-all">{m.email}</span> },
+    { id: 'email', header: 'E-mail', sortValue: (m) => m.email, cell: (m) => m.email },
     {
       id: 'role',
       header: 'Role',
