@@ -21,6 +21,8 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'unit',
+          // Projects run one after another: fast unit suites, then API, then browser.
+          sequence: { groupOrder: 0 },
           include: [
             'shared/**/*.test.ts',
             'src/**/*.test.{ts,tsx}',
@@ -35,6 +37,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'api',
+          sequence: { groupOrder: 1 },
           include: ['server/**/*.test.ts', 'tests/api/**/*.test.ts'],
           exclude: ['server/engine-pool/**', 'server/cli/**', '**/node_modules/**'],
           environment: 'node',
@@ -50,9 +53,10 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'browser',
+          sequence: { groupOrder: 2 },
           include: ['tests/browser/**/*.test.ts'],
           environment: 'node',
-          globalSetup: ['tests/support/global-setup.ts'],
+          globalSetup: ['tests/support/global-setup.ts', 'tests/support/browser-global-setup.ts'],
           testTimeout: 120_000,
           hookTimeout: 240_000,
           fileParallelism: false,

@@ -2,6 +2,7 @@
 import { connectDatabase, migrateDatabase } from '../server/db/client.ts';
 import { loadConfig } from '../server/config.ts';
 import { DEMO_DEPARTMENT, seedDemo } from '../server/seed/demo.ts';
+import { ensurePublishedLibrary } from '../server/modules/samples/samples.service.ts';
 import { DEFAULT_STATE_DIR, devDbPort, ensureMariaDb } from './mariadb.ts';
 
 const conn = await ensureMariaDb({ stateDir: DEFAULT_STATE_DIR, port: devDbPort(), database: 'tidefield', appUser: 'tidefield' });
@@ -9,6 +10,7 @@ const config = loadConfig({ ...process.env, DB_PORT: String(conn.port), DB_PASSW
 const database = connectDatabase(config);
 try {
   await migrateDatabase(database);
+  await ensurePublishedLibrary(database.db);
   const result = await seedDemo(database.db, config.DEMO_PASSWORD);
   console.log(result.created ? `Seeded the demo department "${DEMO_DEPARTMENT}".` : `The demo department "${DEMO_DEPARTMENT}" was already there; missing demo rows were added.`);
 } finally {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { DEFAULT_FREE_SYSTEMS_PER_MONTH } from '../shared/contracts/pricing.ts';
 
 /**
  * The server's configuration, parsed from the environment once at start-up. Nothing else in
@@ -43,6 +44,27 @@ export const configSchema = z.object({
   RUNS_PER_DEPARTMENT: z.coerce.number().int().min(1).max(64).default(2),
   /** Shortest time between two checkpoints of a run's running totals. */
   CHECKPOINT_INTERVAL_MS: z.coerce.number().int().min(10).max(600_000).default(1000),
+
+  // Payments through the stripe SDK. The defaults point at the local stand-in (server/fakes),
+  // which `npm start` runs beside the app; the hosted service is host api.stripe.com, port 443,
+  // protocol https, with that account's secret key and webhook signing secret.
+  STRIPE_SECRET_KEY: z.string().min(1).default('sk_test_tidefield_local'),
+  STRIPE_WEBHOOK_SECRET: z.string().min(1).default('whsec_tidefield_local'),
+  STRIPE_API_HOST: z.string().min(1).default('127.0.0.1'),
+  STRIPE_API_PORT: port(3101),
+  STRIPE_API_PROTOCOL: z.enum(['http', 'https']).default('http'),
+  // E-mail through nodemailer over SMTP; the default is the local stand-in (server/fakes).
+  SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+  SMTP_PORT: port(2525),
+  /** Implicit TLS (port 465); otherwise STARTTLS is used whenever the server offers it. */
+  SMTP_SECURE: bool(false),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().min(3).default('Tidefield <no-reply@tidefield.localhost>'),
+  /** The local SMTP stand-in's message list, shown to admins as the development outbox; empty turns it off. */
+  DEV_OUTBOX_URL: z.union([z.url(), z.literal('')]).default('http://127.0.0.1:2526'),
+  /** Systems each department may run free each month before credit is used (shared/contracts/pricing.ts). */
+  FREE_SYSTEMS_PER_MONTH: z.coerce.number().int().min(0).max(1e13).default(DEFAULT_FREE_SYSTEMS_PER_MONTH),
 });
 
 export type Config = z.output<typeof configSchema>;
@@ -59,4 +81,11 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
 /** A configuration for tests: defaults plus overrides, never read from the environment. */
 export function testConfig(overrides: Partial<Config> = {}): Config {
   return { ...configSchema.parse({ NODE_ENV: 'test', LOG_LEVEL: 'silent' }), ...overrides };
+}
+
+/** The address links in e-mails and payment redirects point at: PUBLIC_URL, else this server's own. */
+export function publicBaseUrl(config: Pick<Config, 'PUBLIC_URL' | 'HOST' | 'PORT'>): string {
+  if (config.PUBLIC_URL) return config.PUBLIC_URL.replace(/\/+$/, '');
+  const host = config.HOST === '0.0.0.0' || config.HOST === '::' ? '127.0.0.1' : config.HOST;
+  return `http://${host.includes(':') ? `[${host}]` : host}:${config.PORT}`;
 }

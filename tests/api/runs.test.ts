@@ -160,16 +160,18 @@ describe('resume after the server stops', () => {
 
 describe('a worker that throws', () => {
   it('fails that run with the error, and the pool keeps serving other runs', async () => {
-    const pool = createEnginePool({ workers: 2, filename: new URL('../support/failing-task.mjs', import.meta.url).href });
+    // The engine's own test fixture: the real chunk task, except that a batch holding chunk 3 throws.
+    const pool = createEnginePool({ workers: 2, filename: new URL('../../server/engine-pool/failing-chunk-task.fixture.mjs', import.meta.url).href });
     const faulty = await createTestApp({}, { pool });
     try {
       const admin = await signUp(faulty.app);
       const id = await createScenario(admin.agent, checkScenario({ systems: 400_000 }));
-      const bad = await admin.agent.post('/api/runs').send({ scenarioId: id, seed: 'explode-now' }).expect(201);
+      const bad = await admin.agent.post('/api/runs').send({ scenarioId: id }).expect(201);
       const failed = await waitForRun(admin.agent, bad.body.id);
       expect(failed.status).toBe('failed');
-      expect(failed.error).toMatch(/worker exploded on chunk 2/);
-      const good = await admin.agent.post('/api/runs').send({ scenarioId: id, seed: 'calm' }).expect(201);
+      expect(failed.error).toMatch(/deliberate failure in chunk 3/);
+      // Two chunks (0 and 1) never reach the failing chunk: the same pool serves this run.
+      const good = await admin.agent.post('/api/runs').send({ scenarioId: id, systems: 100_000 }).expect(201);
       expect((await waitForRun(admin.agent, good.body.id)).status).toBe('succeeded');
     } finally {
       await faulty.close();

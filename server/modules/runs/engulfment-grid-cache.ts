@@ -23,7 +23,7 @@ export function createGridResolver(db: Db, pool: Piscina | undefined) {
       pending = (async () => {
         const started = performance.now();
         const grid = pool
-          ? ((await pool.run({ kind: 'buildEngulfmentGrid', input }, { name: 'buildEngulfmentGrid' })) as EngulfmentGrid)
+          ? ((await pool.run({ input }, { name: 'buildEngulfmentGrid' })) as EngulfmentGrid)
           : buildEngulfmentGrid(input);
         await saveGrid(db, key, JSON.stringify(grid), Math.round(performance.now() - started));
         return grid;

@@ -25,7 +25,7 @@ const MJUP_MSUN = 1 / 1047.3486;
 
 /** Initial period (days) of a circular orbit of semi-major axis a (AU) around total mass M (Msun). */
 const periodAt = (aAU: number, mTot: number) => ((2 * Math.PI) / K_GAUSS) * Math.sqrt((aAU * aAU * aAU) / mTot);
-/** Nauenberg (1972) eq. 27 with M_Ch = 1.44. */
+/** Nauenberg (1972) zero-temperature mass–radius fit with M_Ch = 1.44. */
 const wdRadius = (m: number) => 0.0112 * Math.sqrt(Math.pow(m / 1.44, -2 / 3) - Math.pow(m / 1.44, 2 / 3));
 /** Eggleton (1983). */
 const roche = (q: number) => (0.49 * Math.pow(q, 2 / 3)) / (0.6 * Math.pow(q, 2 / 3) + Math.log(1 + Math.cbrt(q)));

@@ -169,3 +169,24 @@ describe('other options run and respond as they should', () => {
     expect(r.bins.logField.counts.reduce((a, b) => a + b, 0)).toBeGreaterThanOrEqual(r.counts.magnetic);
   });
 });
+
+describe('scenario hash, methods and assumptions', () => {
+  it('hashes the meaning of a scenario: key order, written-out defaults and labels do not matter', () => {
+    const raw = JSON.parse(readFileSync(new URL('../../scenarios/check-1.json', import.meta.url), 'utf8'));
+    const reordered = Object.fromEntries(Object.entries(raw).reverse());
+    const h = scenarioHash(parseScenario(raw));
+    expect(h).toMatch(/^[0-9a-f]{64}$/);
+    expect(scenarioHash(parseScenario(reordered))).toBe(h);
+    expect(scenarioHash(parseScenario({ ...raw, title: 'a label' }))).toBe(h);
+    expect(scenarioHash(parseScenario({ ...raw, channels: { ...raw.channels, fossil: { enabled: false, fraction: 0.05 } } }))).toBe(h);
+    expect(scenarioHash(parseScenario({ ...raw, envelope: { alpha: 0.2, lambda: 0.5 } }))).not.toBe(h);
+  });
+
+  it('lists every published method the scenario uses, with references, and its caveats', () => {
+    const result = buildResult(checkOne({ systems: 1000 }), sum(checkOne({ systems: 1000 }), tallies(checkOne({ systems: 1000 }))));
+    const references = result.methods.map((m) => m.reference).join(' | ');
+    for (const author of ['Kalirai', 'Webbink', 'Eggleton', 'Nauenberg', 'Cumming', 'Rees', 'Demircan', 'Jeans']) expect(references).toContain(author);
+    expect(result.assumptions.some((a) => a.startsWith('fixedReach'))).toBe(true);
+    expect(result.assumptions.some((a) => a.includes('extended linearly'))).toBe(true); // Kalirai's fit ends at 6.5 Msun, the range at 8
+  });
+});

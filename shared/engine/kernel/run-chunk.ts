@@ -48,6 +48,8 @@ const HALF_STEP = 2 ** -33;
  */
 const fateOut = new Float64Array(4);
 const envelopeOut = new Float64Array(3);
+/** Per-system cache (a typed array, so storing a double does not box it): 0 the white dwarf's radius. */
+const scratch = new Float64Array(1);
 
 /**
  * Runs chunk `chunkIndex` of the prepared scenario: draws its systems from the generator
@@ -108,7 +110,7 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
     whiteDwarfs++;
     const z = normalQuantile(rng() + HALF_STEP);
     // The white dwarf's radius is needed only for a fossil field or a common envelope: computed lazily.
-    rwdCache = 0;
+    scratch[0] = 0;
 
     let bestField = 0;
     let bestChannel = -1;
@@ -235,11 +237,10 @@ function companionFate(prepared: PreparedScenario, m1: number, mwd: number, m2: 
   }
 }
 
-/** Radius of the current system's white dwarf (Rsun), computed at most once per system. */
-let rwdCache = 0;
+/** Radius of the current system's white dwarf (Rsun) in scratch[0], computed at most once per system. */
 function whiteDwarfRadiusOf(mwd: number): number {
-  if (rwdCache === 0) rwdCache = whiteDwarfRadiusRsun(mwd);
-  return rwdCache;
+  if (scratch[0] === 0) scratch[0] = whiteDwarfRadiusRsun(mwd);
+  return scratch[0];
 }
 
 function survivor(fate: number, separationAU: number): void {

@@ -85,15 +85,24 @@ export function emptyTallyFor(scenarioHash: string): ChunkTally {
 
 /** Exact element-wise sum of two tallies of the same scenario and engine version (inputs untouched). */
 export function addTally(a: ChunkTally, b: ChunkTally): ChunkTally {
-  if (a.engineVersion !== b.engineVersion) throw new Error(`cannot add tallies of engine ${a.engineVersion} and ${b.engineVersion}`);
-  if (a.scenarioHash !== b.scenarioHash) throw new Error(`cannot add tallies of scenarios ${a.scenarioHash} and ${b.scenarioHash}`);
-  const sum = { ...a } as ChunkTally;
-  for (const key of SCALAR_FIELDS) sum[key] = a[key] + b[key];
+  return addTallyInto(structuredClone(a), b);
+}
+
+/**
+ * Adds `b` into `target` in place and returns `target`: the allocation-free form of addTally for
+ * running sums that the caller owns (the pool runner and the workers' batch sums).
+ */
+export function addTallyInto(target: ChunkTally, b: ChunkTally): ChunkTally {
+  if (target.engineVersion !== b.engineVersion) throw new Error(`cannot add tallies of engine ${target.engineVersion} and ${b.engineVersion}`);
+  if (target.scenarioHash !== b.scenarioHash) throw new Error(`cannot add tallies of scenarios ${target.scenarioHash} and ${b.scenarioHash}`);
   for (const key of ARRAY_FIELDS) {
-    const x = a[key];
-    const y = b[key];
-    if (x.length !== y.length) throw new Error(`cannot add tallies: ${key} has ${x.length} and ${y.length} entries`);
-    sum[key] = x.map((v, i) => v + y[i]);
+    if (target[key].length !== b[key].length) throw new Error(`cannot add tallies: ${key} has ${target[key].length} and ${b[key].length} entries`);
   }
-  return sum;
+  for (const key of SCALAR_FIELDS) target[key] += b[key];
+  for (const key of ARRAY_FIELDS) {
+    const x = target[key];
+    const y = b[key];
+    for (let i = 0; i < x.length; i++) x[i] += y[i];
+  }
+  return target;
 }

@@ -7,7 +7,7 @@ import { rocheLobeFraction } from './roche-lobe-eggleton1983.ts';
 import { tidalRadiusRsun } from './tidal-disruption.ts';
 import { whiteDwarfRadiusRsun } from './white-dwarf-radius-nauenberg1972.ts';
 
-describe('Roche lobe (Eggleton 1983, ApJ 268, 368, eq. 2)', () => {
+describe('Roche lobe (Eggleton 1983, ApJ 268, 368)', () => {
   it.each([
     [0.1, 0.2068],
     [0.5, 0.3208],
@@ -23,7 +23,7 @@ describe('Roche lobe (Eggleton 1983, ApJ 268, 368, eq. 2)', () => {
   });
 });
 
-describe('white-dwarf radius (Nauenberg 1972, ApJ 175, 417, eq. 27, M_Ch = 1.44)', () => {
+describe('white-dwarf radius (Nauenberg 1972, ApJ 175, 417, M_Ch = 1.44)', () => {
   it('gives about 0.0125 Rsun at 0.6 Msun', () => {
     // DESIGN.md quotes R(0.6) ≈ 0.0125 Rsun; the formula gives 0.01244, so 1% covers the rounding.
     expect(Math.abs(whiteDwarfRadiusRsun(0.6) / 0.0125 - 1)).toBeLessThan(0.01);

@@ -1,7 +1,7 @@
 import { requireInRange } from '../errors.ts';
 
 /**
- * Separation after a common envelope, energy formalism (Webbink 1984, ApJ 277, 355, eq. 3,
+ * Separation after a common envelope, energy formalism (Webbink 1984, ApJ 277, 355,
  * with the envelope structure parameter λ of de Kool 1990, ApJ 358, 189):
  *   α_CE [G M_core M2/(2 a_f) − G M_giant M2/(2 a_i)] = G M_giant M_env/(λ R),
  * solved for a_f:  a_f = M_core M2 / [2 M_giant M_env/(α_CE λ R) + M_giant M2/a_i].

@@ -1,7 +1,7 @@
 /**
  * Log-normal field prescription: log10 B = log10 B_median + widthDex · z with z a standard
  * normal deviate (the usual description of the spread of white-dwarf fields, e.g. the
- * log-normal fits of Ferrario, de Martino & Gänsicke 2015, SSRv 191, 111, §3). Units: MG.
+ * log-normal fits of Ferrario, de Martino & Gänsicke 2015, SSRv 191, 111). Units: MG.
  * Example: median 50 MG, width 0.5 dex, z = −1 gives 50 · 10^-0.5 ≈ 15.8 MG.
  */
 export function lognormalFieldMG(medianMG: number, widthDex: number, z: number): number {

@@ -1,7 +1,7 @@
 import type { IfmrSegments } from './ifmr-piecewise.ts';
 
 /**
- * Kalirai et al. (2008, ApJ 676, 594, eq. 1) semi-empirical IFMR from cluster white dwarfs:
+ * Kalirai et al. (2008, ApJ 676, 594; their linear fit) semi-empirical IFMR from cluster white dwarfs:
  * Mf = (0.109 ± 0.007) Mi + (0.394 ± 0.025) Msun, calibrated for Mi ≈ 1.16–6.5 Msun.
  * Example: Mi = 1.16 gives 0.52 Msun; Mi = 3 gives 0.721 Msun.
  */

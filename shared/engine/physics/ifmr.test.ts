@@ -5,7 +5,7 @@ import { finalMassMsun, MAX_WHITE_DWARF_MSUN } from './ifmr-piecewise.ts';
 import { ifmrFromTable } from './ifmr-table.ts';
 
 describe('initial–final mass relations', () => {
-  it('Kalirai et al. 2008 eq. 1 (Mf = 0.109 Mi + 0.394) at the cluster masses', () => {
+  it('Kalirai et al. 2008 linear fit (Mf = 0.109 Mi + 0.394) at the cluster masses', () => {
     // Hand-evaluated from the printed coefficients; 1e-12 is rounding.
     for (const [mi, mf] of [[1.16, 0.52044], [2, 0.612], [3, 0.721], [4, 0.83], [6.5, 1.1025]]) {
       expect(finalMassMsun(KALIRAI_2008, mi)).toBeCloseTo(mf, 12);
@@ -15,7 +15,7 @@ describe('initial–final mass relations', () => {
     expect(Math.abs(finalMassMsun(KALIRAI_2008, 1.16) - 0.53)).toBeLessThan(0.025);
   });
 
-  it('Cummings et al. 2018 MIST-based relation (eq. 4) on each branch and continuous at the breaks', () => {
+  it('Cummings et al. 2018 MIST-based relation on each branch and continuous at the breaks', () => {
     const mist = CUMMINGS_2018.mist;
     for (const [mi, mf] of [[1, 0.569], [2.85, 0.717], [3.2, 0.7824], [5, 1.006], [7.2, 1.2414]]) {
       expect(finalMassMsun(mist, mi)).toBeCloseTo(mf, 3); // printed coefficients have 3 decimals
@@ -25,7 +25,7 @@ describe('initial–final mass relations', () => {
     expect(Math.abs(0.187 * 3.6 + 0.184 - (0.107 * 3.6 + 0.471))).toBeLessThan(2e-3);
   });
 
-  it('Cummings et al. 2018 PARSEC-based relation (eq. 5)', () => {
+  it('Cummings et al. 2018 PARSEC-based relation', () => {
     const parsec = CUMMINGS_2018.parsec;
     for (const [mi, mf] of [[1, 0.5633], [3, 0.753], [5, 0.9825], [8.2, 1.2497]]) {
       expect(finalMassMsun(parsec, mi)).toBeCloseTo(mf, 3);

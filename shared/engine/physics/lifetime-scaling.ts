@@ -3,7 +3,7 @@ import { requireInRange } from '../errors.ts';
 /**
  * Main-sequence lifetime from the power-law scaling t_MS = t0 (M/Msun)^-x, which follows
  * from L ∝ M^(x+1) and a fixed burned fraction of the hydrogen (e.g. Kippenhahn, Weigert &
- * Weiss 2012, §30; Hansen, Kawaler & Trimble 2004 §1.2 quote t ≈ 10^10 yr (M/Msun)^-2.5).
+ * Weiss 2012; Hansen, Kawaler & Trimble 2004 quote t ≈ 10^10 yr (M/Msun)^-2.5).
  * Units: Gyr and Msun. Valid roughly for 0.5–10 Msun with x ≈ 2.5; outside that the
  * exponent changes and a table is better.
  * Example: t0 = 10 Gyr, x = 2.5, M = 2 Msun gives 10 · 2^-2.5 ≈ 1.77 Gyr.

@@ -4,7 +4,7 @@ import { requireInRange } from '../errors.ts';
 export const NAUENBERG_CHANDRASEKHAR_MSUN = 1.44;
 
 /**
- * Zero-temperature white-dwarf radius (Nauenberg 1972, ApJ 175, 417, eq. 27):
+ * Zero-temperature white-dwarf radius (Nauenberg 1972, ApJ 175, 417; the fit as usually quoted, equation number not checked):
  * R = 0.0112 Rsun [(M/M_Ch)^(-2/3) − (M/M_Ch)^(2/3)]^(1/2), with M_Ch = 1.44 Msun.
  * Units: Msun in, Rsun out. Valid for 0 < M < M_Ch (cold carbon–oxygen or helium interiors).
  * Example: M = 0.6 Msun gives 0.01244 Rsun (≈ 8660 km).

@@ -33,7 +33,7 @@ const REF = {
   chabrierBaraffe: 'Chabrier, G. & Baraffe, I. 2000, ARA&A, 38, 337',
   demircan: 'Demircan, O. & Kahraman, G. 1991, Ap&SS, 181, 313',
   ferrario: 'Ferrario, L., de Martino, D. & Gänsicke, B. T. 2015, Space Sci. Rev., 191, 111',
-  fkr: 'Frank, J., King, A. & Raine, D. 2002, Accretion Power in Astrophysics, 3rd ed. (Cambridge University Press), eqs. 5.9 and 6.3',
+  fkr: 'Frank, J., King, A. & Raine, D. 2002, Accretion Power in Astrophysics, 3rd ed. (Cambridge University Press), chs. 5 and 6',
   shakura: 'Shakura, N. I. & Sunyaev, R. A. 1973, A&A, 24, 337',
   wickramasinghe: 'Wickramasinghe, D. T. & Ferrario, L. 2005, MNRAS, 356, 1576',
   mestel: 'Mestel, L. 1952, MNRAS, 112, 583',
@@ -58,7 +58,7 @@ export function methodsUsed(scenario: Scenario): MethodEntry[] {
   if (p.lifetime.kind === 'scaling') add('Main-sequence lifetime', `t_MS = ${p.lifetime.t0Gyr} Gyr (M/Msun)^-${p.lifetime.exponent}`, REF.kippenhahn);
   else add('Main-sequence lifetime', `user table of ${p.lifetime.points.length} points, log-log interpolation`, 'user supplied');
   const ifmr = p.ifmr;
-  if (ifmr.relation === 'kalirai2008') add('Initial–final mass relation', 'Mf = 0.109 Mi + 0.394 Msun', `${REF.kalirai}, eq. 1`);
+  if (ifmr.relation === 'kalirai2008') add('Initial–final mass relation', 'Mf = 0.109 Mi + 0.394 Msun', REF.kalirai);
   else if (ifmr.relation === 'cummings2018') add('Initial–final mass relation', `piecewise-linear, ${ifmr.calibration.toUpperCase()}-based`, REF.cummings);
   else add('Initial–final mass relation', `user table of ${ifmr.points.length} points, linear interpolation`, 'user supplied');
 
@@ -89,7 +89,7 @@ export function methodsUsed(scenario: Scenario): MethodEntry[] {
   add('Common envelope', `energy formalism, α_CE = ${scenario.envelope.alpha}, λ = ${scenario.envelope.lambda}`, `${REF.webbink}; ${REF.dekool}`);
   add('Common envelope', 'survival requires the companion to fit its Roche lobe after the spiral-in', REF.eggleton);
   add('Companion destruction', `tidal radius r_t = ${scenario.disruption.eta} R2 (M_core/M2)^(1/3)`, `${REF.rees}; ${REF.ryu}`);
-  add('White-dwarf radius', 'zero-temperature mass–radius relation, M_Ch = 1.44 Msun', `${REF.nauenberg}, eq. 27`);
+  add('White-dwarf radius', 'zero-temperature mass–radius relation, M_Ch = 1.44 Msun', REF.nauenberg);
   add('Companion radius', '1 Jupiter radius below 0.08 Msun; main-sequence power law above', `${REF.chabrierBaraffe}; ${REF.demircan}`);
 
   const f = scenario.field;

@@ -1,16 +1,12 @@
-import { Link, Navigate, useNavigate, useSearchParams } from 'react-router-dom';
-import { paths, redirectTargetFrom } from '../../config/paths.ts';
-import { useMe } from '../../features/auth/api/get-me.ts';
+import { Link, Navigate } from 'react-router-dom';
+import { paths } from '../../config/paths.ts';
 import { AuthLayout } from '../../features/auth/components/auth-layout.tsx';
 import { SignInForm } from '../../features/auth/components/sign-in-form.tsx';
+import { useAuthRedirect } from '../../features/auth/hooks/use-auth-redirect.ts';
 
 export function Component() {
-  const me = useMe();
-  const navigate = useNavigate();
-  const [search] = useSearchParams();
-  const target = redirectTargetFrom(search);
-
-  if (me.data) return <Navigate to={target} replace />;
+  const { target, signedIn, proceed } = useAuthRedirect();
+  if (signedIn) return <Navigate to={target} replace />;
   return (
     <AuthLayout
       title="Sign in"
@@ -21,7 +17,7 @@ export function Component() {
         </>
       }
     >
-      <SignInForm onSignedIn={() => navigate(target, { replace: true })} />
+      <SignInForm onSignedIn={proceed} />
     </AuthLayout>
   );
 }

@@ -1,4 +1,4 @@
-import { hashKey, queryOptions, useQuery, type Query } from '@tanstack/react-query';
+import { hashKey, queryOptions, useQuery, useQueryClient, type Query } from '@tanstack/react-query';
 import { meResponseSchema, type MeResponse } from '../../../../shared/contracts/auth.ts';
 import { api, isApiError } from '../../../lib/api-client.ts';
 
@@ -26,4 +26,10 @@ export function useMe() {
 /** For cache sweeps that must spare the session itself (sign-out, department switch). */
 export function isMeQuery(query: Query): boolean {
   return query.queryHash === hashKey(getMeQueryOptions().queryKey);
+}
+
+/** Stores a MeResponse that a mutation answered (sign-in, sign-up, department switch) as the session. */
+export function useSetMe() {
+  const queryClient = useQueryClient();
+  return (me: MeResponse | null) => queryClient.setQueryData(getMeQueryOptions().queryKey, me);
 }

@@ -1,7 +1,7 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import { meResponseSchema, type SignInBody } from '../../../../shared/contracts/auth.ts';
 import { api } from '../../../lib/api-client.ts';
-import { getMeQueryOptions } from './get-me.ts';
+import { useSetMe } from './get-me.ts';
 
 /** 401 on wrong credentials, 429 after too many attempts (the message says when to retry). */
 export function signIn(body: SignInBody) {
@@ -9,9 +9,5 @@ export function signIn(body: SignInBody) {
 }
 
 export function useSignIn() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: signIn,
-    onSuccess: (me) => queryClient.setQueryData(getMeQueryOptions().queryKey, me),
-  });
+  return useMutation({ mutationFn: signIn, onSuccess: useSetMe() });
 }

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, isApiError } from '../../../lib/api-client.ts';
-import { getMeQueryOptions, isMeQuery } from './get-me.ts';
+import { isMeQuery, useSetMe } from './get-me.ts';
 
 /** Ends the session (204). A 401 means it had already ended, which is just as good. */
 export async function signOut(): Promise<void> {
@@ -13,12 +13,13 @@ export async function signOut(): Promise<void> {
 
 export function useSignOut() {
   const queryClient = useQueryClient();
+  const setMe = useSetMe();
   return useMutation({
     mutationFn: signOut,
     onSuccess: () => {
       // Nothing of the previous user's stays in memory for the next one.
       queryClient.removeQueries({ predicate: (query) => !isMeQuery(query) });
-      queryClient.setQueryData(getMeQueryOptions().queryKey, null);
+      setMe(null);
     },
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { meResponseSchema } from '../../../../shared/contracts/auth.ts';
 import { api } from '../../../lib/api-client.ts';
-import { getMeQueryOptions, isMeQuery } from './get-me.ts';
+import { isMeQuery, useSetMe } from './get-me.ts';
 
 /** Makes another of the user's departments the active one; answers the new MeResponse. */
 export function switchDepartment(departmentId: string) {
@@ -10,10 +10,11 @@ export function switchDepartment(departmentId: string) {
 
 export function useSwitchDepartment() {
   const queryClient = useQueryClient();
+  const setMe = useSetMe();
   return useMutation({
     mutationFn: switchDepartment,
     onSuccess: (me) => {
-      queryClient.setQueryData(getMeQueryOptions().queryKey, me);
+      setMe(me);
       // Everything else belonged to the previous department: load it afresh.
       return queryClient.resetQueries({ predicate: (query) => !isMeQuery(query) });
     },

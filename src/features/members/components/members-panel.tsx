@@ -7,11 +7,12 @@ import { Button } from '../../../components/ui/button.tsx';
 import { Card } from '../../../components/ui/card.tsx';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog.tsx';
 import { EmptyState } from '../../../components/ui/empty-state.tsx';
-import { ErrorState, errorMessage } from '../../../components/ui/error-state.tsx';
-import { LoadingState } from '../../../components/ui/loading-state.tsx';
+import { errorMessage } from '../../../components/ui/error-state.tsx';
+import { QueryState } from '../../../components/ui/query-state.tsx';
 import { Select } from '../../../components/ui/select.tsx';
 import { Table, type TableColumn } from '../../../components/ui/table.tsx';
 import { formatDate } from '../../../lib/format.ts';
+import { roleWithArticle } from '../../../lib/role-text.ts';
 import { useChangeMemberRole } from '../api/change-member-role.ts';
 import { useMembers } from '../api/get-members.ts';
 import { useRemoveMember } from '../api/remove-member.ts';
@@ -43,7 +44,7 @@ export function MembersPanel({ departmentId, departmentName, currentUserId, onOw
       { userId: member.userId, role },
       {
         onSuccess: () => {
-          setNotice({ tone: 'success', text: `${member.name} is now ${ROLE_LABELS[role].toLowerCase()}.` });
+          setNotice({ tone: 'success', text: `${member.name} is now ${roleWithArticle(role)}.` });
           setConfirming(null);
           afterOwnChange(member.userId);
         },
@@ -98,7 +99,7 @@ export function MembersPanel({ departmentId, departmentName, currentUserId, onOw
           disabled={changeRole.isPending}
           onChange={(event) => requestRole(m, event.target.value as Role)}
           options={roleOptions}
-          className="min-w-40"
+          className="min-w-40 max-md:min-w-0"
         />
       ),
     },
@@ -111,6 +112,7 @@ export function MembersPanel({ departmentId, departmentName, currentUserId, onOw
     {
       id: 'actions',
       header: <span className="sr-only">Actions</span>,
+      stackedLabel: false,
       align: 'end',
       cell: (m) => (
         <Button
@@ -131,21 +133,20 @@ export function MembersPanel({ departmentId, departmentName, currentUserId, onOw
   return (
     <Card title="People in this department" description="Every department keeps at least one admin.">
       <Alert message={notice?.text} tone={notice?.tone} className={notice ? 'mb-4' : undefined} />
-      {members.isPending ? (
-        <LoadingState label="Loading members…" />
-      ) : members.isError ? (
-        <ErrorState error={members.error} title="The member list could not be loaded" onRetry={() => void members.refetch()} retrying={members.isFetching} />
-      ) : (
-        <Table
-          caption={`Members of ${departmentName}`}
-          hideCaption
-          columns={columns}
-          rows={members.data.members}
-          rowKey={(m) => m.userId}
-          initialSort={{ columnId: 'name', direction: 'ascending' }}
-          empty={<EmptyState title="No members yet">Invite colleagues once e-mail invitations arrive.</EmptyState>}
-        />
-      )}
+      <QueryState query={members} loadingLabel="Loading members…" errorTitle="The member list could not be loaded">
+        {(list) => (
+          <Table
+            caption={`Members of ${departmentName}`}
+            hideCaption
+            columns={columns}
+            rows={list.members}
+            rowKey={(m) => m.userId}
+            initialSort={{ columnId: 'name', direction: 'ascending' }}
+            stackOnNarrow
+            empty={<EmptyState title="No members yet">Invite colleagues once e-mail invitations arrive.</EmptyState>}
+          />
+        )}
+      </QueryState>
 
       <ConfirmDialog
         open={confirming?.kind === 'remove'}

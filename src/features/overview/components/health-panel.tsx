@@ -1,58 +1,56 @@
+import type { HealthResponse } from '../../../../shared/contracts/auth.ts';
 import { Badge } from '../../../components/ui/badge.tsx';
 import { Button } from '../../../components/ui/button.tsx';
 import { Card } from '../../../components/ui/card.tsx';
 import { DescriptionList } from '../../../components/ui/description-list.tsx';
-import { ErrorState } from '../../../components/ui/error-state.tsx';
-import { LoadingState } from '../../../components/ui/loading-state.tsx';
+import { QueryState } from '../../../components/ui/query-state.tsx';
 import { formatDateTimeUtc } from '../../../lib/format.ts';
 import { useHealth } from '../api/get-health.ts';
 
+function HealthReport({ report }: { report: HealthResponse }) {
+  const { database } = report;
+  return (
+    <DescriptionList
+      items={[
+        {
+          term: 'Status',
+          description: report.status === 'ok' ? <Badge tone="success">Working</Badge> : <Badge tone="warning">Degraded</Badge>,
+        },
+        {
+          term: 'Database',
+          description: database.reachable ? (
+            <>
+              Reachable
+              {database.latencyMs !== undefined && <span className="text-foam-400"> · {Math.round(database.latencyMs)} ms</span>}
+            </>
+          ) : (
+            <span className="text-coral-300">Not reachable{database.error && `: ${database.error}`}</span>
+          ),
+        },
+        { term: 'Version', description: <span className="font-mono">{report.version}</span> },
+        { term: 'Server time', description: formatDateTimeUtc(report.time) },
+      ]}
+    />
+  );
+}
+
 export function HealthPanel() {
   const health = useHealth();
-  const refetch = () => void health.refetch();
-
   return (
     <Card
       title="Service health"
       description="The server and its database, checked every minute."
       actions={
         health.data && (
-          <Button variant="secondary" size="sm" onClick={refetch} pending={health.isFetching}>
+          <Button variant="secondary" size="sm" onClick={() => void health.refetch()} pending={health.isFetching}>
             Check again
           </Button>
         )
       }
     >
-      {health.isPending ? (
-        <LoadingState label="Checking the server…" />
-      ) : health.isError ? (
-        <ErrorState error={health.error} title="The health check did not answer" onRetry={refetch} retrying={health.isFetching} />
-      ) : (
-        <DescriptionList
-          items={[
-            {
-              term: 'Status',
-              description:
-                health.data.status === 'ok' ? <Badge tone="success">Working</Badge> : <Badge tone="warning">Degraded</Badge>,
-            },
-            {
-              term: 'Database',
-              description: health.data.database.reachable ? (
-                <>
-                  Reachable
-                  {health.data.database.latencyMs !== undefined && (
-                    <span className="text-foam-400"> · {Math.round(health.data.database.latencyMs)} ms</span>
-                  )}
-                </>
-              ) : (
-                <span className="text-coral-300">Not reachable{health.data.database.error && `: ${health.data.database.error}`}</span>
-              ),
-            },
-            { term: 'Version', description: <span className="font-mono">{health.data.version}</span> },
-            { term: 'Server time', description: formatDateTimeUtc(health.data.time) },
-          ]}
-        />
-      )}
+      <QueryState query={health} loadingLabel="Checking the server…" errorTitle="The health check did not answer">
+        {(report) => <HealthReport report={report} />}
+      </QueryState>
     </Card>
   );
 }

@@ -3,12 +3,13 @@ import { ROLE_LABELS, ROLES, roleAtLeast, type Role } from '../../../../shared/c
 import { Card } from '../../../components/ui/card.tsx';
 import { paths } from '../../../config/paths.ts';
 import { cx } from '../../../lib/class-names.ts';
+import { roleWithArticle } from '../../../lib/role-text.ts';
 import { ROLE_ABILITIES } from './role-abilities.ts';
 
 /** The abilities of the user's role and, dimmed, what the higher roles would add. */
 export function WhatYouCanDo({ role }: { role: Role }) {
   return (
-    <Card title="What you can do here" description={`As ${role === 'admin' ? 'an' : 'a'} ${ROLE_LABELS[role].toLowerCase()} in this department:`}>
+    <Card title="What you can do here" description={`As ${roleWithArticle(role)} in this department:`}>
       <div className="flex flex-col gap-6">
         {ROLES.map((level, index) => {
           const granted = roleAtLeast(role, level);

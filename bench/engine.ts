@@ -1,0 +1,108 @@
+import { execFileSync } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { parseScenario, type Scenario } from '../shared/contracts/scenario.ts';
+import { engulfmentGridInputFor } from '../shared/engine/kernel/engulfment.ts';
+import { prepareScenario, type PreparedScenario } from '../shared/engine/kernel/prepare.ts';
+import { runChunk } from '../shared/engine/kernel/run-chunk.ts';
+import { buildEngulfmentGrid } from '../shared/engine/physics/engulfment-grid.ts';
+import { chunkUniform } from '../shared/engine/random.ts';
+import { CHUNK_SYSTEMS } from '../shared/engine/version.ts';
+import { createEnginePool } from '../server/engine-pool/engine-pool.ts';
+import { runScenario } from '../server/engine-pool/run-scenario.ts';
+
+/**
+ * `npm run bench`: the engine's figures from one run on this machine. It prints, it does not
+ * assert. Figures: raw generator draws per second; kernel systems per second per thread for
+ * the baseline with fixedReach and with track; the track grid build time; the 2-worker versus
+ * 1-worker speed-up on a warm pool; peak RSS at 1e6 and 1e8 systems (child processes); and the
+ * ratios the targets are stated in.
+ */
+
+const load = (name: string, overrides: Record<string, unknown> = {}): Scenario =>
+  parseScenario({ ...JSON.parse(readFileSync(new URL(`../shared/scenarios/${name}.json`, import.meta.url), 'utf8')), ...overrides });
+
+const line = (label: string, value: string) => process.stdout.write(`${label.padEnd(52)} ${value}\n`);
+const fmt = (x: number, digits = 3) => x.toPrecision(digits);
+
+function drawsPerSecond(): number {
+  const u = chunkUniform('bench', 0);
+  let sink = 0;
+  for (let i = 0; i < 1e7; i++) sink += u(); // warm-up
+  const n = 1e8;
+  const t = performance.now();
+  for (let i = 0; i < n; i++) sink += u();
+  const seconds = (performance.now() - t) / 1000;
+  if (sink < 0) throw new Error('unreachable');
+  return n / seconds;
+}
+
+function kernelSystemsPerSecond(prepared: PreparedScenario, chunks: number): number {
+  for (let i = 0; i < 3; i++) runChunk(prepared, i); // warm-up (JIT)
+  const t = performance.now();
+  for (let i = 3; i < 3 + chunks; i++) runChunk(prepared, i);
+  return (chunks * CHUNK_SYSTEMS) / ((performance.now() - t) / 1000);
+}
+
+async function poolSeconds(workers: number, systems: number): Promise<number> {
+  const pool = createEnginePool({ workers });
+  try {
+    await runScenario(load('baseline-fixed-reach', { systems: workers * 4 * CHUNK_SYSTEMS }), { pool }); // start and warm every worker
+    const t = performance.now();
+    await runScenario(load('baseline-fixed-reach', { systems, seed: 'speed-up' }), { pool });
+    return (performance.now() - t) / 1000;
+  } finally {
+    await pool.destroy();
+  }
+}
+
+function childRun(systems: number, workers: number): { seconds: number; maxRssMB: number } {
+  const script = fileURLToPath(new URL('./rss-child.ts', import.meta.url));
+  const out = execFileSync(process.execPath, ['--import', 'tsx', script, String(systems), String(workers)], { encoding: 'utf8' });
+  return JSON.parse(out.trim().split('\n').pop()!);
+}
+
+const draws = drawsPerSecond();
+line('raw generator (seedrandom xor4096) draws / s', fmt(draws));
+
+const fixed = prepareScenario(load('baseline-fixed-reach', { systems: 64 * CHUNK_SYSTEMS }));
+const fixedRate = kernelSystemsPerSecond(fixed, 60);
+line('kernel, baseline fixedReach, systems / s / thread', fmt(fixedRate));
+
+const trackScenario = load('baseline-track', { systems: 64 * CHUNK_SYSTEMS });
+const gridStart = performance.now();
+const grid = buildEngulfmentGrid(engulfmentGridInputFor(trackScenario));
+const gridSeconds = (performance.now() - gridStart) / 1000;
+line('track boundary grid (24 × 16) build time, s', fmt(gridSeconds));
+const trackRate = kernelSystemsPerSecond(prepareScenario(trackScenario, { engulfmentGrid: grid }), 60);
+line('kernel, baseline track, systems / s / thread', fmt(trackRate));
+
+const speedSystems = 150 * CHUNK_SYSTEMS;
+const one = await poolSeconds(1, speedSystems);
+const two = await poolSeconds(2, speedSystems);
+line(`pool, ${fmt(speedSystems)} systems, 1 worker, s`, fmt(one));
+line(`pool, ${fmt(speedSystems)} systems, 2 workers, s`, fmt(two));
+
+const small = childRun(1e6, 2);
+const big = childRun(1e8, 2);
+line('peak RSS at 1e6 systems (2 workers), MB', fmt(small.maxRssMB));
+line('peak RSS at 1e8 systems (2 workers), MB', fmt(big.maxRssMB));
+line('1e8 baseline systems on 2 workers, s', fmt(big.seconds));
+
+process.stdout.write('\nratios\n');
+const drawsPerSystem = draws / fixedRate;
+const speedUp = one / two;
+const rssGrowth = big.maxRssMB - small.maxRssMB;
+line('generator draws per kernel system (fixedReach)', fmt(drawsPerSystem));
+line('generator draws per kernel system (track)', fmt(draws / trackRate));
+line('track / fixedReach kernel speed', fmt(trackRate / fixedRate));
+line('grid build time in fixedReach kernel systems', fmt(gridSeconds * fixedRate));
+line('2-worker speed-up', fmt(speedUp));
+line('RSS growth 1e6 → 1e8 systems, MB', fmt(rssGrowth));
+
+process.stdout.write('\ntargets\n');
+const target = (label: string, met: boolean, detail: string) => line(label, `${met ? 'met' : 'NOT met'} (${detail})`);
+target('≤ 10 generator draws per kernel system', drawsPerSystem <= 10, `${fmt(drawsPerSystem)} draws' worth of time per system`);
+target('2-worker speed-up ≥ 1.8', speedUp >= 1.8, fmt(speedUp));
+target('RSS growth 1e6 → 1e8 < 20 MB', rssGrowth < 20, `${fmt(rssGrowth)} MB`);
+target('1e8 baseline systems < 60 s on 2 cores', big.seconds < 60, `${fmt(big.seconds)} s`);
