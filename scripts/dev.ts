@@ -4,7 +4,8 @@
  */
 import { spawn } from 'node:child_process';
 import path from 'node:path';
-import { loadConfig } from '../server/config.ts';
+import { loadConfig, publicBaseUrl } from '../server/config.ts';
+import { startLocalFakes } from '../server/fakes/local-fakes.ts';
 import { startServer } from '../server/index.ts';
 import { countDepartments } from '../server/modules/departments/departments.repository.ts';
 import { seedDemo } from '../server/seed/demo.ts';
@@ -20,6 +21,7 @@ const config = loadConfig({
   DB_PASSWORD: conn.password,
   DB_NAME: conn.database,
 });
+const fakes = await startLocalFakes(config, `${publicBaseUrl(config)}/api/billing/webhook`);
 const running = await startServer(config);
 if ((await countDepartments(running.database.db)) === 0) await seedDemo(running.database.db, config.DEMO_PASSWORD);
 console.log(`API at ${running.url}; starting Vite …`);
@@ -32,6 +34,7 @@ const vite = spawn(process.execPath, [path.join(PROJECT_ROOT, 'node_modules/vite
 const stop = async () => {
   vite.kill('SIGTERM');
   await running.stop();
+  await fakes.close();
   process.exit(0);
 };
 process.once('SIGINT', () => void stop());

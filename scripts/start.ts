@@ -2,8 +2,11 @@
  * `npm start`: the whole app on this machine. Starts Tidefield's private MariaDB (installing
  * it when missing), builds the client when its sources changed, applies migrations, seeds the
  * demo department into an empty database, and serves everything on http://127.0.0.1:3000.
+ * Beside it run the local stand-ins for payments and e-mail (server/fakes) whenever the
+ * configuration points at loopback addresses, as it does by default.
  */
-import { loadConfig } from '../server/config.ts';
+import { loadConfig, publicBaseUrl } from '../server/config.ts';
+import { startLocalFakes } from '../server/fakes/local-fakes.ts';
 import { startServer } from '../server/index.ts';
 import { countDepartments } from '../server/modules/departments/departments.repository.ts';
 import { DEMO_DEPARTMENT, DEMO_USERS, seedDemo } from '../server/seed/demo.ts';
@@ -24,7 +27,11 @@ async function main() {
     DB_PASSWORD: conn.password,
     DB_NAME: conn.database,
   });
-  const running = await startServer(config);
+  const fakes = await startLocalFakes(config, `${publicBaseUrl(config)}/api/billing/webhook`);
+  const running = await startServer(config).catch(async (error: unknown) => {
+    await fakes.close();
+    throw error;
+  });
 
   const empty = (await countDepartments(running.database.db)) === 0;
   if (empty) await seedDemo(running.database.db, config.DEMO_PASSWORD);
@@ -38,6 +45,13 @@ async function main() {
     ...DEMO_USERS.map((u) => `    ${u.role.padEnd(9)} ${u.email}`),
     `  Demo password: ${config.DEMO_PASSWORD}  (for the local demo only; set DEMO_PASSWORD to change it before the first start)`,
     '',
+    fakes.payment
+      ? `  Payments: local stand-in at ${fakes.payment.url} (test cards 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined)`
+      : `  Payments: ${config.STRIPE_API_PROTOCOL}://${config.STRIPE_API_HOST}:${config.STRIPE_API_PORT}`,
+    fakes.mail
+      ? `  E-mail: local SMTP stand-in on ${fakes.mail.host}:${fakes.mail.smtpPort}; admins read it at ${running.url}/outbox`
+      : `  E-mail: SMTP ${config.SMTP_HOST}:${config.SMTP_PORT}`,
+    '',
     '  Press Ctrl+C to stop the app (MariaDB keeps running for the next start).',
     '',
   ];
@@ -46,6 +60,7 @@ async function main() {
   const shutdown = async (signal: string) => {
     console.log(`\n${signal}: stopping Tidefield …`);
     await running.stop();
+    await fakes.close();
     process.exit(0);
   };
   process.once('SIGINT', () => void shutdown('SIGINT'));

@@ -25,7 +25,7 @@ import { openApiRoutes } from './modules/openapi/openapi.routes.ts';
 import { RunEvents } from './modules/runs/run-events.ts';
 import { createRunScheduler, type RunEngine, type RunSettledHook } from './modules/runs/run-scheduler.ts';
 import { runsRoutes } from './modules/runs/runs.routes.ts';
-import { createRunsService, noBilling, type RunBilling } from './modules/runs/runs.service.ts';
+import { createRunsService, type RunBilling } from './modules/runs/runs.service.ts';
 import { samplesRoutes } from './modules/samples/samples.routes.ts';
 import { createSamplesService } from './modules/samples/samples.service.ts';
 import { scenariosRoutes } from './modules/scenarios/scenarios.routes.ts';
@@ -35,6 +35,16 @@ import { createSweepsService } from './modules/sweeps/sweeps.service.ts';
 import { tokensRoutes } from './modules/tokens/tokens.routes.ts';
 import { createTokensService } from './modules/tokens/tokens.service.ts';
 import { createGridResolver } from './modules/runs/engulfment-grid-cache.ts';
+import { accountRoutes } from './modules/account/account.routes.ts';
+import { createAccountService } from './modules/account/account.service.ts';
+import { billingRoutes, WEBHOOK_PATH } from './modules/billing/billing.routes.ts';
+import { createBillingService, type BillingService } from './modules/billing/billing.service.ts';
+import { createPaymentGateway } from './modules/billing/payment-gateway.ts';
+import { invitationsRoutes } from './modules/invitations/invitations.routes.ts';
+import { createInvitationsService } from './modules/invitations/invitations.service.ts';
+import { createMailer } from './modules/mail/mailer.ts';
+import { outboxRoutes } from './modules/mail/outbox.routes.ts';
+import { createRunNotices } from './modules/mail/run-notices.ts';
 
 export interface AppDeps {
   config: Config;
@@ -44,7 +54,9 @@ export interface AppDeps {
   pool?: Piscina;
   /** How runs execute (default: runScenario on the pool). Tests inject faults here. */
   engine?: RunEngine;
+  /** How runs are charged (default: the credit ledger of server/modules/billing). */
   billing?: RunBilling;
+  /** Called after billing and e-mail notices when a run reaches a final state. */
   onRunSettled?: RunSettledHook;
 }
 
@@ -52,6 +64,8 @@ export interface TidefieldApp {
   app: Express;
   registry: RouteRegistry;
   scheduler: ReturnType<typeof createRunScheduler>;
+  /** The credit ledger (operators' adjustments and tests use it directly). */
+  billing: BillingService;
   /** Stops the scheduler (runs checkpoint and resume on the next start) and the pool made here. */
   close(): Promise<void>;
 }
@@ -74,7 +88,12 @@ export function createApp(deps: AppDeps): TidefieldApp {
     engine,
     events,
     logger,
-    onSettled: deps.onRunSettled,
+    onSettled: async (run, outcome) => {
+      // Settle or refund the reservation (idempotent), then tell the owner.
+      const settled = await billing.settleRun(run, outcome);
+      await runNotices(run, outcome, settled?.refundedCredits ?? 0);
+      await deps.onRunSettled?.(run, outcome);
+    },
     options: {
       maxConcurrentRuns: config.RUNS_MAX_CONCURRENT,
       maxRunsPerDepartment: config.RUNS_PER_DEPARTMENT,
@@ -89,7 +108,12 @@ export function createApp(deps: AppDeps): TidefieldApp {
   const tables = createOccurrenceTablesService(db);
   const scenarios = createScenariosService(db, (departmentId, tableId) => tables.exists(departmentId, tableId));
   const samples = createSamplesService(db);
-  const runs = createRunsService({ db, scheduler, scenarios, tables, samples, billing: deps.billing ?? noBilling });
+  const mailer = createMailer(config, logger);
+  const billing = createBillingService({ db, config, payments: createPaymentGateway(config), mailer, logger });
+  const runNotices = createRunNotices({ db, config, mailer });
+  const account = createAccountService({ db, config, mailer, sessions, logger });
+  const invitations = createInvitationsService({ db, config, mailer, sessions, logger });
+  const runs = createRunsService({ db, scheduler, scenarios, tables, samples, billing: deps.billing ?? billing.runBilling });
   const sweeps = createSweepsService({ db, runs, scenarios, samples, scheduler });
 
   const app = express();
@@ -112,8 +136,10 @@ export function createApp(deps: AppDeps): TidefieldApp {
   );
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
+  // The payment webhook is verified on its exact bytes: it gets the raw body, before the JSON parser.
+  app.use(WEBHOOK_PATH, express.raw({ type: 'application/json', limit: '1mb' }));
   app.use('/api', express.json({ limit: config.JSON_BODY_LIMIT }));
-  app.use('/api', originCheck());
+  app.use('/api', originCheck([WEBHOOK_PATH.slice('/api'.length)]));
   app.use('/api', authenticate(db, sessions, tokens.resolver()));
 
   app.use('/api', healthRoutes(registry, db));
@@ -125,6 +151,10 @@ export function createApp(deps: AppDeps): TidefieldApp {
   app.use('/api/samples', samplesRoutes(registry, samples));
   app.use('/api', runsRoutes(registry, runs, events));
   app.use('/api/sweeps', sweepsRoutes(registry, sweeps));
+  app.use('/api', accountRoutes(registry, config, account));
+  app.use('/api/invitations', invitationsRoutes(registry, invitations, sessions));
+  app.use('/api/billing', billingRoutes(registry, billing));
+  app.use('/api', outboxRoutes(registry, config, db));
   app.use('/api', openApiRoutes(registry));
   app.use('/api', apiNotFound);
 
@@ -140,9 +170,11 @@ export function createApp(deps: AppDeps): TidefieldApp {
     app,
     registry,
     scheduler,
+    billing,
     async close() {
       await scheduler.stop();
       if (ownPool && pool) await pool.destroy();
+      mailer.close();
     },
   };
 }

@@ -90,13 +90,14 @@ function collect(part: Part, found: { text?: string; html?: string }): void {
     // The first section is the preamble; the one after the closing "--boundary--" the epilogue.
     for (const section of sections.slice(1)) {
       if (section.startsWith('--')) break;
-      collect(splitPart(section.replace(/^\r?\n/, '')), found);
+      // The line break before a boundary belongs to the boundary (RFC 2046 §5.1.1).
+      collect(splitPart(section.replace(/^\r?\n/, '').replace(/\r?\n$/, '')), found);
     }
     return;
   }
   if ((part.headers.get('content-disposition') ?? '').toLowerCase().startsWith('attachment')) return;
   if (type.startsWith('text/html')) found.html ??= decodeBody(part);
-  else if (type.startsWith('text/plain')) found.text ??= decodeBody(part).replace(/\n$/, '');
+  else if (type.startsWith('text/plain')) found.text ??= decodeBody(part);
 }
 
 function addresses(value: string | undefined): string[] {
@@ -109,6 +110,8 @@ function addresses(value: string | undefined): string[] {
 
 export function parseMessage(raw: string): ParsedMessage {
   const top = splitPart(raw);
+  // The message's own final line break (before the SMTP end of data) is not part of a single-part body.
+  if (!(top.headers.get('content-type') ?? '').toLowerCase().startsWith('multipart/')) top.body = top.body.replace(/\n$/, '');
   const found: { text?: string; html?: string } = {};
   collect(top, found);
   return {

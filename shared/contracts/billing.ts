@@ -49,6 +49,8 @@ export const checkoutSchema = z.object({
   createdByName: z.string(),
 });
 export type Checkout = z.infer<typeof checkoutSchema>;
+/** One checkout; `paymentReceived` is true once the payment service reports it paid (credit follows with its webhook). */
+export const checkoutStatusResponseSchema = checkoutSchema.extend({ paymentReceived: z.boolean() });
 export const receiptListResponseSchema = z.object({ receipts: z.array(checkoutSchema) });
 
 export const LEDGER_KINDS = ['purchase', 'reservation', 'settlement', 'refund', 'allowance', 'adjustment'] as const;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { paths } from '../config/paths.ts';
+import { PUBLIC_PAGE_KEYS, paths } from '../config/paths.ts';
 import { NAV_GROUPS, navigationFor } from './nav-items.ts';
 
 const labels = (role: Parameters<typeof navigationFor>[0]) => navigationFor(role).flatMap((g) => g.items.map((i) => i.label));
@@ -15,6 +15,7 @@ const EVERYONE = [
   'Occurrence tables',
   'API tokens',
   'Settings',
+  'E-mail notices',
 ];
 
 describe('navigation by role', () => {
@@ -25,13 +26,13 @@ describe('navigation by role', () => {
   });
 
   it('adds Members and Credits for admins', () => {
-    expect(labels('admin')).toEqual([...EVERYONE, 'Members', 'Credits']);
+    expect(labels('admin')).toEqual([...EVERYONE, 'Members', 'Credits', 'Outbox']);
   });
 
   it('links every app page exactly once, and nothing else', () => {
     const keys = NAV_GROUPS.flatMap((g) => g.items.map((i) => i.key));
     expect(new Set(keys).size).toBe(keys.length);
-    const appPages = Object.keys(paths).filter((key) => key !== 'signIn' && key !== 'signUp');
+    const appPages = Object.keys(paths).filter((key) => !PUBLIC_PAGE_KEYS.includes(key as keyof typeof paths));
     expect([...keys].sort()).toEqual(appPages.sort());
   });
 });

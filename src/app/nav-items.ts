@@ -58,7 +58,7 @@ export const NAV_GROUPS: readonly NavGroup[] = [
       {
         key: 'compare',
         label: 'Compare',
-        summary: "A run's prediction against an observed sample: exact binomial test, p-value and Gaussian-equivalent significance.",
+        summary: 'Two to four finished runs side by side on the same axes: fractions with their errors, mass and field distributions, differences in σ.',
         minimumRole: 'observer',
       },
       {
@@ -80,6 +80,7 @@ export const NAV_GROUPS: readonly NavGroup[] = [
     items: [
       { key: 'apiTokens', label: 'API tokens', summary: 'Tokens for the REST API and the command line.', minimumRole: 'observer' },
       { key: 'settings', label: 'Settings', summary: 'Your name, e-mail address and password.', minimumRole: 'observer' },
+      { key: 'notifications', label: 'E-mail notices', summary: 'Whether you get an e-mail when a run of yours finishes or fails.', minimumRole: 'observer' },
     ],
   },
   {
@@ -87,6 +88,7 @@ export const NAV_GROUPS: readonly NavGroup[] = [
     items: [
       { key: 'members', label: 'Members', summary: 'Who belongs to the department, with which role.', minimumRole: 'admin' },
       { key: 'credits', label: 'Credits', summary: 'Compute credit for heavy runs: buy it, see usage and receipts.', minimumRole: 'admin' },
+      { key: 'outbox', label: 'Outbox', summary: 'E-mail this Tidefield sent through the local mail stand-in (development).', minimumRole: 'admin' },
     ],
   },
 ];

@@ -19,6 +19,9 @@ export const routes: RouteObject[] = [
     children: [
       { path: paths.signIn.path, lazy: () => import('./routes/sign-in.tsx') },
       { path: paths.signUp.path, lazy: () => import('./routes/sign-up.tsx') },
+      { path: paths.forgotPassword.path, lazy: () => import('./routes/forgot-password.tsx') },
+      { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password.tsx') },
+      { path: paths.acceptInvitation.path, lazy: () => import('./routes/accept-invitation.tsx') },
       {
         lazy: () => import('./routes/app-root.tsx'),
         children: [
@@ -28,11 +31,20 @@ export const routes: RouteObject[] = [
             children: [
               { index: true, lazy: () => import('./routes/overview.tsx') },
               ...(
-                ['scenarios', 'runs', 'sweeps', 'impliedOccurrence', 'compare', 'samples', 'occurrenceTables', 'apiTokens', 'settings'] as const
+                ['scenarios', 'sweeps', 'impliedOccurrence', 'samples', 'occurrenceTables', 'apiTokens', 'settings'] as const
               ).map(comingSoon),
+              { path: paths.runs.path, lazy: () => import('./routes/runs.tsx') },
+              { path: paths.runs.new.path, lazy: () => import('./routes/runs-new.tsx') },
+              { path: paths.runs.detail.path, lazy: () => import('./routes/runs-detail.tsx') },
+              { path: paths.compare.path, lazy: () => import('./routes/compare.tsx') },
+              { path: paths.notifications.path, lazy: () => import('./routes/notifications.tsx') },
               {
                 element: <RequireRole minimum="admin" />,
-                children: [{ path: paths.members.path, lazy: () => import('./routes/members.tsx') }, comingSoon('credits')],
+                children: [
+                  { path: paths.members.path, lazy: () => import('./routes/members.tsx') },
+                  { path: paths.credits.path, lazy: () => import('./routes/credits.tsx') },
+                  { path: paths.outbox.path, lazy: () => import('./routes/outbox.tsx') },
+                ],
               },
               { path: '*', lazy: () => import('./routes/not-found.tsx') },
             ],

@@ -24,20 +24,50 @@ function authPage(path: string) {
 export const paths = {
   signIn: authPage('/sign-in'),
   signUp: authPage('/sign-up'),
+  forgotPassword: page('/forgot-password'),
+  // Opened from e-mailed links, which carry ?token=….
+  resetPassword: page('/reset-password'),
+  acceptInvitation: page('/accept-invitation'),
 
   overview: page('/'),
   scenarios: page('/scenarios'),
-  runs: page('/runs'),
-  sweeps: page('/sweeps'),
-  impliedOccurrence: page('/implied-occurrence'),
-  compare: page('/compare'),
-  samples: page('/samples'),
+  runs: {
+    ...page('/runs'),
+    /** The start form, with the scenario chosen when one is given. */
+    new: { path: '/runs/new', getHref: (scenarioId?: string) => (scenarioId ? `/runs/new?scenario=${encodeURIComponent(scenarioId)}` : '/runs/new') },
+    detail: { path: '/runs/:id', getHref: (id: string) => `/runs/${encodeURIComponent(id)}` },
+  },
+  sweeps: {
+    ...page('/sweeps'),
+    detail: { path: '/sweeps/:id', getHref: (id: string) => `/sweeps/${encodeURIComponent(id)}` },
+  },
+  impliedOccurrence: {
+    ...page('/implied-occurrence'),
+    /** A question already asked: the run that answers it and the sample it was asked for. */
+    withRun: (runId: string, sampleId: string) =>
+      `/implied-occurrence?${new URLSearchParams({ run: runId, sample: sampleId })}`,
+  },
+  compare: {
+    ...page('/compare'),
+    /** Two to four runs side by side: /compare?runs=a,b. */
+    withRuns: (ids: readonly string[]) => `/compare?runs=${ids.map(encodeURIComponent).join(',')}`,
+  },
+  samples: {
+    ...page('/samples'),
+    new: page('/samples/new'),
+    detail: { path: '/samples/:id', getHref: (id: string) => `/samples/${encodeURIComponent(id)}` },
+  },
   occurrenceTables: page('/occurrence-tables'),
   apiTokens: page('/api-tokens'),
   settings: page('/settings'),
   members: page('/members'),
   credits: page('/credits'),
+  notifications: page('/notifications'),
+  outbox: page('/outbox'),
 } as const;
+
+/** Pages outside the signed-in app (no navigation entry). */
+export const PUBLIC_PAGE_KEYS: readonly PathKey[] = ['signIn', 'signUp', 'forgotPassword', 'resetPassword', 'acceptInvitation'];
 
 export type PathKey = keyof typeof paths;
 

@@ -66,6 +66,27 @@ export const EXPECTED_ACCESS: Record<string, Minimum> = {
   'GET /api/sweeps': 'observer',
   'GET /api/sweeps/:id': 'observer',
   'POST /api/sweeps/:id/cancel': 'modeller',
+  // Credit: members see the balance and what a run would cost; only admins buy and read the ledger.
+  'GET /api/billing/balance': 'observer',
+  'GET /api/billing/quote': 'observer',
+  'GET /api/billing/packs': 'observer',
+  'POST /api/billing/checkout': 'admin',
+  'GET /api/billing/checkouts/:id': 'admin',
+  'GET /api/billing/receipts': 'admin',
+  'GET /api/billing/ledger': 'admin',
+  // Called by the payment service; the signature, not a session, is its credential.
+  'POST /api/billing/webhook': 'public',
+  'POST /api/auth/password-reset': 'public',
+  'POST /api/auth/password-reset/confirm': 'public',
+  'GET /api/me/notifications': 'signedIn',
+  'PUT /api/me/notifications': 'signedIn',
+  'POST /api/invitations': 'admin',
+  'GET /api/invitations': 'admin',
+  'DELETE /api/invitations/:id': 'admin',
+  // The link token is the credential of these two.
+  'GET /api/invitations/preview/:token': 'public',
+  'POST /api/invitations/accept': 'public',
+  'GET /api/outbox': 'admin',
 };
 
 const RANK: Record<Who, number> = { anonymous: -1, observer: 0, modeller: 1, admin: 2 };

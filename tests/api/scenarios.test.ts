@@ -19,7 +19,7 @@ describe('scenarios', () => {
     expect(detail.body).toMatchObject({ name: 'Planets only', currentVersion: 1 });
     expect(detail.body.documentHash).toMatch(/^[0-9a-f]{64}$/);
     expect(detail.body.resolved.envelope).toEqual({ alpha: 0.1, lambda: 0.5 });
-    // 1e6 systems at one credit per 1e7 systems, rounded up (shared/contracts/pricing.ts).
+    // The list price: 1e6 systems at one credit per 1e7 systems, rounded up, before any free allowance (shared/contracts/pricing.ts).
     expect(detail.body.costCredits).toBe(1);
 
     const changed = await agent.patch(`/api/scenarios/${id}`).send({ document: checkScenario({ systems: 2000 }), note: 'smaller' }).expect(200);

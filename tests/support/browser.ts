@@ -11,6 +11,7 @@ import { CHROMIUM_ARGS } from '../../scripts/chromium.ts';
 import { PROJECT_ROOT } from '../../scripts/mariadb.ts';
 import { startServer, type RunningServer } from '../../server/index.ts';
 import { DEMO_USERS, seedDemo } from '../../server/seed/demo.ts';
+import type { Config } from '../../server/config.ts';
 import { createTestDatabase } from './test-app.ts';
 
 export const ARTIFACTS = path.join(PROJECT_ROOT, 'tests/artifacts');
@@ -28,7 +29,8 @@ export interface BrowserStack {
   stop(): Promise<void>;
 }
 
-export async function startBrowserStack(): Promise<BrowserStack> {
+/** `overrides` go last into the server's configuration (e.g. a fixed PORT and the payment and mail stand-ins). */
+export async function startBrowserStack(overrides: Partial<Config> = {}): Promise<BrowserStack> {
   const { config: dbConfig, database, drop } = await createTestDatabase();
   await seedDemo(database.db, DEMO_PASSWORD);
   const server = await startServer({
@@ -40,6 +42,7 @@ export async function startBrowserStack(): Promise<BrowserStack> {
     WORKER_THREADS: 2,
     LOG_LEVEL: 'warn',
     DEMO_PASSWORD,
+    ...overrides,
   });
   const browser = await chromium.launch({ executablePath: inject('chromiumPath'), args: CHROMIUM_ARGS, headless: true });
   mkdirSync(ARTIFACTS, { recursive: true });

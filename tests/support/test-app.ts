@@ -1,4 +1,6 @@
 import { randomBytes } from 'node:crypto';
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
 import mysql from 'mysql2/promise';
 import request from 'supertest';
 import { inject } from 'vitest';
@@ -8,13 +10,37 @@ import { ensurePublishedLibrary } from '../../server/modules/samples/samples.ser
 import { testConfig, type Config } from '../../server/config.ts';
 import { connectDatabase, migrateDatabase, type Database } from '../../server/db/client.ts';
 import { createLogger } from '../../server/logger.ts';
+import { startFakesOnFreePorts, type FakesOnFreePorts } from '../../server/fakes/local-fakes.ts';
 
 export interface TestContext {
   app: Express;
   tidefield: TidefieldApp;
   database: Database;
   config: Config;
+  /** The payment and mail stand-ins this app is pointed at (shared by the test file's apps). */
+  fakes: FakesOnFreePorts;
+  /** Where the app listens for real (the payment stand-in posts its webhooks here). */
+  url: string;
   close(): Promise<void>;
+}
+
+// The stand-ins are started once per test file, on free ports, and stopped with its last app.
+let fakes: Promise<FakesOnFreePorts> | null = null;
+let fakeUsers = 0;
+export const TEST_STRIPE_SECRETS = { apiKey: 'sk_test_tidefield_tests', webhookSecret: 'whsec_tidefield_tests' };
+
+async function acquireFakes(): Promise<FakesOnFreePorts> {
+  fakeUsers += 1;
+  fakes ??= startFakesOnFreePorts(TEST_STRIPE_SECRETS);
+  return fakes;
+}
+
+async function releaseFakes(): Promise<void> {
+  fakeUsers -= 1;
+  if (fakeUsers > 0 || !fakes) return;
+  const running = fakes;
+  fakes = null;
+  await (await running).close();
 }
 
 /** A fresh, migrated database on the throwaway server and an app wired to it. */
@@ -41,17 +67,30 @@ export async function createTestDatabase(): Promise<{ database: Database; config
 
 export async function createTestApp(overrides: Partial<Config> = {}, deps: Partial<Omit<AppDeps, 'config' | 'database' | 'logger'>> = {}): Promise<TestContext> {
   const { database, config: base, drop } = await createTestDatabase();
-  const config = { ...base, WORKER_THREADS: 2, CHECKPOINT_INTERVAL_MS: 50, ...overrides };
+  const stands = await acquireFakes();
+  // The app also listens on a real port: webhooks and e-mailed links need an address.
+  const server = http.createServer();
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  const port = (server.address() as AddressInfo).port;
+  const url = `http://127.0.0.1:${port}`;
+  const config = { ...base, WORKER_THREADS: 2, CHECKPOINT_INTERVAL_MS: 50, PORT: port, PUBLIC_URL: url, ...stands.config, ...overrides };
   await ensurePublishedLibrary(database.db);
   const tidefield = createApp({ config, database, logger: createLogger(config), ...deps });
+  server.on('request', tidefield.app);
+  stands.payment.setWebhookUrl(`${url}/api/billing/webhook`);
   await tidefield.scheduler.start();
   return {
     app: tidefield.app,
     tidefield,
     database,
     config,
+    fakes: stands,
+    url,
     async close() {
+      server.closeAllConnections();
+      await new Promise<void>((resolve) => server.close(() => resolve()));
       await tidefield.close();
+      await releaseFakes();
       await drop();
     },
   };

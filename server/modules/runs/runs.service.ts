@@ -1,7 +1,7 @@
 import type { ScenarioResult } from '../../../shared/contracts/result.ts';
 import type { CreateRunBody, RunListQuery, RunSummary } from '../../../shared/contracts/runs.ts';
 import { parseScenario, type Scenario } from '../../../shared/contracts/scenario.ts';
-import { OBSERVER_MAX_SYSTEMS, runCostCredits } from '../../../shared/contracts/pricing.ts';
+import { listPriceCredits, OBSERVER_MAX_SYSTEMS } from '../../../shared/contracts/pricing.ts';
 import { roleAtLeast } from '../../../shared/contracts/roles.ts';
 import { impliedMultiplier } from '../../../shared/engine/stats/implied-occurrence.ts';
 import type { Db } from '../../db/client.ts';
@@ -23,12 +23,17 @@ export const runNotFound = () => notFound('That run');
 const notFinished = (status: string) =>
   new AppError({ code: 'run_not_finished', status: 409, message: `The run has no result yet (it is ${status}); results exist once it has succeeded.` });
 
-/** Charging for runs (issue: billing). Reserve is called before a run is queued, inside its transaction. */
+/**
+ * Charging for runs (server/modules/billing). Reserve is called before a run is queued, inside
+ * its transaction: it reserves the cost (free systems first, shared/contracts/pricing.ts) and
+ * returns the credits reserved, or throws a 402 so that nothing is queued.
+ */
 export interface RunBilling {
-  reserve(tx: Parameters<Parameters<Db['transaction']>[0]>[0], run: { id: string; departmentId: string; userId: string; systems: number; costCredits: number }): Promise<void>;
+  reserve(tx: Parameters<Parameters<Db['transaction']>[0]>[0], run: { id: string; departmentId: string; userId: string; systems: number }): Promise<{ costCredits: number }>;
 }
 
-export const noBilling: RunBilling = { reserve: async () => {} };
+/** Charges nothing; records the list price (tests that inject their own billing). */
+export const noBilling: RunBilling = { reserve: async (_tx, run) => ({ costCredits: listPriceCredits(run.systems) }) };
 
 export function toRunSummary(run: RunRow, ownerName: string, live?: { chunksDone: number; etaSeconds: number | null } | null): RunSummary {
   const chunksDone = live?.chunksDone ?? run.chunksDone;
@@ -116,9 +121,8 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
     const department = departmentOf(auth);
     checkSize(auth, snapshot.systems);
     const id = newId();
-    const costCredits = runCostCredits(snapshot.systems);
     const insert = async (tx: Parameters<Parameters<Db['transaction']>[0]>[0]) => {
-      await billing.reserve(tx, { id, departmentId: department.id, userId: auth.user.id, systems: snapshot.systems, costCredits });
+      const { costCredits } = await billing.reserve(tx, { id, departmentId: department.id, userId: auth.user.id, systems: snapshot.systems });
       await insertRun(tx, {
         id,
         departmentId: department.id,

@@ -5,7 +5,7 @@ import type {
   UpdateScenarioBody,
 } from '../../../shared/contracts/scenarios-api.ts';
 import { parseScenario, ScenarioValidationError, type Scenario } from '../../../shared/contracts/scenario.ts';
-import { runCostCredits } from '../../../shared/contracts/pricing.ts';
+import { listPriceCredits } from '../../../shared/contracts/pricing.ts';
 import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { scenarioHash } from '../../engine.ts';
@@ -70,7 +70,8 @@ export function createScenariosService(db: Db, tableExists: TableExists) {
       ...summary(row),
       document: row.version.document,
       resolved: resolved as unknown as Record<string, unknown>,
-      costCredits: runCostCredits(resolved.systems),
+      // List price: the credits when no free allowance is left (GET /api/billing/quote gives the department's own figure).
+      costCredits: listPriceCredits(resolved.systems),
     };
   }
 

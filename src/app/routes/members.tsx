@@ -4,10 +4,13 @@ import { getMeQueryOptions } from '../../features/auth/api/get-me.ts';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
 import { InviteMemberForm } from '../../features/members/components/invite-member-form.tsx';
 import { MembersPanel } from '../../features/members/components/members-panel.tsx';
+import { useCreateInvitation } from '../../features/invitations/api/create-invitation.ts';
+import { PendingInvitations } from '../../features/invitations/components/pending-invitations.tsx';
 
 export function Component() {
   const me = useSignedInMe();
   const queryClient = useQueryClient();
+  const invite = useCreateInvitation(me.department.id);
   return (
     <>
       <PageHeader
@@ -22,7 +25,8 @@ export function Component() {
           currentUserId={me.user.id}
           onOwnMembershipChanged={() => void queryClient.invalidateQueries({ queryKey: getMeQueryOptions().queryKey })}
         />
-        <InviteMemberForm />
+        <InviteMemberForm onInvite={(values) => invite.mutateAsync(values)} />
+        <PendingInvitations departmentId={me.department.id} />
       </div>
     </>
   );

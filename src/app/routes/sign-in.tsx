@@ -14,6 +14,9 @@ export function Component() {
       footer={
         <>
           New to Tidefield? <Link to={paths.signUp.getHref(target)}>Create an account</Link>
+          <span className="mt-2 block">
+            <Link to={paths.forgotPassword.getHref()}>Forgot your password?</Link>
+          </span>
         </>
       }
     >

@@ -143,7 +143,7 @@ export function MembersPanel({ departmentId, departmentName, currentUserId, onOw
             rowKey={(m) => m.userId}
             initialSort={{ columnId: 'name', direction: 'ascending' }}
             stackOnNarrow
-            empty={<EmptyState title="No members yet">Invite colleagues once e-mail invitations arrive.</EmptyState>}
+            empty={<EmptyState title="No members yet">Invite colleagues by e-mail below.</EmptyState>}
           />
         )}
       </QueryState>

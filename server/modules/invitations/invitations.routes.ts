@@ -1,0 +1,53 @@
+import { Router } from 'express';
+import { meResponseSchema } from '../../../shared/contracts/auth.ts';
+import { idParamsSchema } from '../../../shared/contracts/common.ts';
+import {
+  acceptInvitationBodySchema,
+  createInvitationBodySchema,
+  createInvitationResponseSchema,
+  invitationListResponseSchema,
+  invitationPreviewSchema,
+  tokenParamsSchema,
+} from '../../../shared/contracts/invitations.ts';
+import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
+import type { SessionStore } from '../auth/session.ts';
+import type { InvitationsService } from './invitations.service.ts';
+
+export function invitationsRoutes(registry: RouteRegistry, invitations: InvitationsService, sessions: SessionStore): Router {
+  const router = Router();
+  const mount = '/api/invitations';
+  const tag = 'Members';
+
+  defineRoute(router, registry, mount, {
+    method: 'post', path: '/', tag, access: 'admin', status: 201, body: createInvitationBodySchema, response: createInvitationResponseSchema,
+    summary: 'Invite an address to the department with a role; the e-mailed link works once, for 7 days',
+  }, ({ auth, body }) => invitations.create(auth, body));
+
+  defineRoute(router, registry, mount, {
+    method: 'get', path: '/', tag, access: 'admin', response: invitationListResponseSchema,
+    summary: "The department's open invitations",
+  }, async ({ auth }) => ({ invitations: await invitations.list(auth) }));
+
+  defineRoute(router, registry, mount, {
+    method: 'delete', path: '/:id', tag, access: 'admin', status: 204, params: idParamsSchema,
+    summary: 'Withdraw an open invitation (its link stops working)',
+  }, async ({ auth, params }) => {
+    await invitations.revoke(auth, params.id);
+  });
+
+  defineRoute(router, registry, mount, {
+    method: 'get', path: '/preview/:token', tag, access: 'public', params: tokenParamsSchema, response: invitationPreviewSchema,
+    summary: 'What an invitation link offers (department, role, address), before it is accepted',
+  }, ({ params }) => invitations.preview(params.token));
+
+  defineRoute(router, registry, mount, {
+    method: 'post', path: '/accept', tag, access: 'public', body: acceptInvitationBodySchema, response: meResponseSchema,
+    summary: 'Accept an invitation: as the signed-in owner of the address, or with a name and password for a new account (signs you in)',
+  }, async ({ body, req, res }) => {
+    const { me, session } = await invitations.accept(body, res.locals.auth);
+    if (session) res.append('Set-Cookie', sessions.cookieFor(session, req.secure));
+    return me;
+  });
+
+  return router;
+}

@@ -1,0 +1,72 @@
+import type { VisualizationSpec } from 'vega-embed';
+import { formatPercent, formatPercentWithError } from '../../../../shared/engine/stats/format.ts';
+import { chartInk, seriesColour } from '../../../components/ui/chart-palette.ts';
+
+export interface ComparedRow {
+  label: string;
+  observed: { magnetic: number; total: number; fraction: number; interval68: [number, number]; interval95: [number, number] };
+  predicted: { value: number; se: number };
+}
+
+export const OBSERVED_KIND = 'Observed: 68% and 95% Clopper–Pearson intervals';
+export const PREDICTED_KIND = 'Predicted: ±1 and ±2 Monte Carlo errors';
+
+/** Sentence case for axis labels: "all white dwarfs" → "All white dwarfs". */
+const capitalised = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+
+export function comparisonRows(rows: readonly ComparedRow[]) {
+  const clip = (x: number) => Math.min(1, Math.max(0, x));
+  return rows.flatMap((r) => {
+    const label = capitalised(r.label);
+    const { value, se } = r.predicted;
+    return [
+      {
+        label,
+        kind: OBSERVED_KIND,
+        value: r.observed.fraction,
+        inner: r.observed.interval68,
+        outer: r.observed.interval95,
+        text: `${r.observed.magnetic} of ${r.observed.total} (${formatPercent(r.observed.fraction)})`,
+      },
+      { label, kind: PREDICTED_KIND, value, inner: [clip(value - se), clip(value + se)], outer: [clip(value - 2 * se), clip(value + 2 * se)], text: formatPercentWithError(value, se) },
+    ].map((row) => ({ ...row, innerLo: row.inner[0], innerHi: row.inner[1], outerLo: row.outer[0], outerHi: row.outer[1] }));
+  });
+}
+
+/** Observed fractions with their intervals beside the predicted fractions with their errors, one row per (sub)sample. */
+export function comparisonChartSpec(rows: readonly ComparedRow[]): VisualizationSpec {
+  const values = comparisonRows(rows);
+  const colour = {
+    field: 'kind',
+    type: 'nominal',
+    title: null,
+    scale: { domain: [OBSERVED_KIND, PREDICTED_KIND], range: [seriesColour(4), seriesColour(1)] },
+  };
+  const x = (field: string) => ({ field, type: 'quantitative', title: 'Magnetic fraction (% of white dwarfs)', axis: { format: '.2~%', tickCount: 6 }, scale: { zero: true, nice: true } });
+  return {
+    autosize: { type: 'fit-x', contains: 'padding' },
+    height: { step: 56 },
+    data: { values },
+    encoding: {
+      y: { field: 'label', type: 'nominal', title: null, sort: null, axis: { labelLimit: 180 } },
+      yOffset: { field: 'kind', type: 'nominal', sort: [OBSERVED_KIND, PREDICTED_KIND] },
+      color: colour,
+    },
+    layer: [
+      { mark: { type: 'rule', strokeWidth: 1.5 }, encoding: { x: x('outerLo'), x2: { field: 'outerHi' } } },
+      { mark: { type: 'rule', strokeWidth: 6 }, encoding: { x: x('innerLo'), x2: { field: 'innerHi' } } },
+      {
+        mark: { type: 'point', filled: true, size: 120, stroke: chartInk.background, strokeWidth: 1.5 },
+        encoding: {
+          x: x('value'),
+          shape: { field: 'kind', type: 'nominal', scale: { domain: [OBSERVED_KIND, PREDICTED_KIND], range: ['circle', 'diamond'] }, title: null },
+          tooltip: [
+            { field: 'label', title: 'White dwarfs' },
+            { field: 'kind', title: 'What' },
+            { field: 'text', title: 'Value' },
+          ],
+        },
+      },
+    ],
+  } as VisualizationSpec;
+}

@@ -1,0 +1,31 @@
+import { Link } from 'react-router-dom';
+import type { RunSummary } from '../../../../shared/contracts/runs.ts';
+import { Card } from '../../../components/ui/card.tsx';
+import { DescriptionList } from '../../../components/ui/description-list.tsx';
+import { paths } from '../../../config/paths.ts';
+import { formatDateTimeUtc } from '../../../lib/format.ts';
+import { formatComputeTime, formatCount } from './run-text.ts';
+
+/** What reproduces the run and what it cost. */
+export function RunDetails({ run }: { run: RunSummary }) {
+  const items = [
+    { term: 'Scenario', description: <Link to={paths.scenarios.getHref()}>{run.scenarioName}</Link> },
+    { term: 'Version', description: `version ${run.scenarioVersion}` },
+    { term: 'Scenario hash', description: <code className="font-mono text-sm break-all">{run.scenarioHash}</code> },
+    { term: 'Seed', description: <code className="font-mono">{run.seed}</code> },
+    { term: 'Systems', description: `${formatCount(run.systems)} primaries in ${formatCount(run.chunkCount)} chunks` },
+    { term: 'Engine', description: <code className="font-mono text-sm">{run.engineVersion}</code> },
+    { term: 'Started by', description: run.ownerName },
+    { term: 'Queued', description: formatDateTimeUtc(run.createdAt) },
+    { term: 'Started', description: run.startedAt ? formatDateTimeUtc(run.startedAt) : 'not yet' },
+    { term: 'Finished', description: run.finishedAt ? formatDateTimeUtc(run.finishedAt) : 'not yet' },
+    { term: 'Compute time', description: `${formatComputeTime(run.computeMs)}${run.resumes > 0 ? ` (resumed ${run.resumes} time${run.resumes === 1 ? '' : 's'} after a server restart)` : ''}` },
+    { term: 'Cost', description: run.costCredits === 0 ? 'no credits (free systems)' : `${formatCount(run.costCredits)} credit${run.costCredits === 1 ? '' : 's'}` },
+  ];
+  if (run.sweepId) items.splice(2, 0, { term: 'Sweep', description: `point ${(run.sweepPointIndex ?? 0) + 1} of a sweep` });
+  return (
+    <Card title="Run details" description="The scenario hash, seed and engine version reproduce the counts exactly.">
+      <DescriptionList items={items} />
+    </Card>
+  );
+}

@@ -1,0 +1,93 @@
+import { useState } from 'react';
+import type { RunSummary } from '../../../../shared/contracts/runs.ts';
+import { Button } from '../../../components/ui/button.tsx';
+import { Card } from '../../../components/ui/card.tsx';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog.tsx';
+import { errorMessage } from '../../../components/ui/error-state.tsx';
+import { Spinner } from '../../../components/ui/spinner.tsx';
+import { useCancelRun } from '../api/cancel-run.ts';
+import type { ProgressSource } from '../hooks/use-live-run.ts';
+import { formatCount, formatDuration } from './run-text.ts';
+
+export interface RunProgressCardProps {
+  departmentId: string;
+  run: RunSummary;
+  source: ProgressSource;
+  /** The run's owner or a modeller. */
+  canCancel: boolean;
+}
+
+function etaText(run: RunSummary): string {
+  if (run.status === 'queued') return 'Waiting for a free worker; it starts by itself.';
+  if (run.etaSeconds === null) return 'Working out the time left…';
+  return `About ${formatDuration(run.etaSeconds)} left.`;
+}
+
+/** A queued or running run: a progress bar with chunks done and the time left, and a way to cancel. */
+export function RunProgressCard({ departmentId, run, source, canCancel }: RunProgressCardProps) {
+  const cancel = useCancelRun(departmentId);
+  const [confirming, setConfirming] = useState(false);
+  const percent = Math.floor(run.progress * 100);
+  const label = run.status === 'queued' ? 'Queued' : `Running: ${percent}%`;
+
+  return (
+    <Card
+      title={run.status === 'queued' ? 'Queued' : 'Running'}
+      description="You can leave this page: the run carries on, and its results appear here when it ends."
+      actions={
+        canCancel && (
+          <Button
+            variant="danger"
+            onClick={() => {
+              cancel.reset();
+              setConfirming(true);
+            }}
+          >
+            Cancel the run
+          </Button>
+        )
+      }
+    >
+      <div className="flex flex-col gap-3">
+        <div className="flex flex-wrap items-baseline justify-between gap-2">
+          <p className="text-2xl font-bold tabular-nums" aria-hidden="true">
+            {percent}%
+          </p>
+          <p className="text-foam-300" aria-live="polite">
+            {etaText(run)}
+          </p>
+        </div>
+        <div
+          role="progressbar"
+          aria-label="Run progress"
+          aria-valuemin={0}
+          aria-valuemax={100}
+          aria-valuenow={percent}
+          aria-valuetext={`${label}, ${run.chunksDone} of ${run.chunkCount} chunks`}
+          className="h-4 overflow-hidden rounded-full border border-ink-500 bg-ink-900"
+        >
+          <div className="h-full rounded-full bg-lantern-400 transition-[width] duration-500" style={{ width: `${Math.max(percent, run.status === 'running' ? 1 : 0)}%` }} />
+        </div>
+        <p className="flex flex-wrap items-center gap-2 text-sm text-foam-400">
+          <Spinner className="size-4 text-lantern-300" />
+          {formatCount(run.chunksDone)} of {formatCount(run.chunkCount)} chunks of {formatCount(run.systems)} systems ·{' '}
+          {source === 'stream' ? 'live updates' : 'updates every 2 s (the live stream is unavailable)'}
+        </p>
+      </div>
+
+      <ConfirmDialog
+        open={confirming}
+        title="Cancel this run?"
+        confirmLabel="Cancel the run"
+        cancelLabel="Keep it running"
+        tone="danger"
+        pending={cancel.isPending}
+        error={cancel.isError ? errorMessage(cancel.error) : undefined}
+        onConfirm={() => cancel.mutate(run.id, { onSuccess: () => setConfirming(false) })}
+        onCancel={() => setConfirming(false)}
+      >
+        A cancelled run keeps no result; the credits and free systems reserved for it are given back. It stays in the list as cancelled.
+      </ConfirmDialog>
+    </Card>
+  );
+}

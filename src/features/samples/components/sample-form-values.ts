@@ -1,0 +1,79 @@
+import { z } from 'zod';
+import { createSampleBodySchema, type CreateSampleBody, type Sample } from '../../../../shared/contracts/samples.ts';
+import { describeIssues } from '../../../../shared/contracts/schema-issues.ts';
+import { parseNumberText } from '../../../lib/number-input.ts';
+
+/**
+ * The sample form's inputs are named by the request body's own paths ("magnetic",
+ * "bins.0.total"), so that the schema's issues and the server's `field` land on the input
+ * that holds the value.
+ */
+export type SampleFormEntries = Record<string, unknown>;
+
+const BIN_NAME = /^bins\.(\d+)\.(kind|setting|massMinMsun|massMaxMsun|magnetic|total)$/;
+const NUMERIC = new Set(['magnetic', 'total', 'massMinMsun', 'massMaxMsun']);
+
+const text = (value: unknown) => (typeof value === 'string' ? value : '');
+
+/** A typed number, NaN for words (the schema names what is allowed), undefined for nothing. */
+function numberOf(value: unknown): number | undefined {
+  const parsed = parseNumberText(text(value), { grouping: true });
+  return parsed === null ? undefined : parsed;
+}
+
+/** The request body the inputs describe, before validation (numbers parsed, empties left out). */
+export function sampleBodyFromEntries(entries: SampleFormEntries): Record<string, unknown> {
+  const bins: Record<string, unknown>[] = [];
+  for (const [name, value] of Object.entries(entries)) {
+    const match = BIN_NAME.exec(name);
+    if (!match) continue;
+    const index = Number(match[1]);
+    const key = match[2];
+    bins[index] ??= {};
+    bins[index][key] = NUMERIC.has(key) ? numberOf(value) : text(value);
+  }
+  const threshold = numberOf(entries.fieldThresholdMG);
+  const provenance = text(entries.provenance).trim();
+  return {
+    name: text(entries.name),
+    magnetic: numberOf(entries.magnetic),
+    total: numberOf(entries.total),
+    setting: text(entries.setting) || 'all',
+    ...(threshold === undefined ? {} : { fieldThresholdMG: threshold }),
+    ...(provenance ? { provenance } : {}),
+    // Always sent: an edit that removes every split must clear them on the server too.
+    bins: bins.filter(Boolean),
+  };
+}
+
+/**
+ * The form's schema: the inputs read into a body and checked with the server's own schema.
+ * Messages come from describeIssues, so that a range message names both ends ("must be
+ * between 0.1 and 1.44 (got 2)") as the server's do.
+ */
+export const sampleFormSchema = z.unknown().transform((entries, ctx): CreateSampleBody => {
+  const body = sampleBodyFromEntries((entries ?? {}) as SampleFormEntries);
+  const parsed = createSampleBodySchema.safeParse(body, { reportInput: true });
+  if (parsed.success) return parsed.data;
+  for (const issue of parsed.error.issues) {
+    // The schema's own words for names and refinements; describeIssues for numbers and missing values.
+    const numeric = issue.code === 'invalid_type' || ((issue.code === 'too_small' || issue.code === 'too_big') && issue.origin === 'number');
+    const [described] = numeric ? describeIssues(createSampleBodySchema, body, [issue]) : [];
+    ctx.addIssue({ code: 'custom', path: issue.path, message: described?.message ?? issue.message });
+  }
+  return z.NEVER;
+});
+
+/** Initial text of every input, from a saved sample (edit) or blank (new). */
+export function sampleFormDefaults(sample?: Sample | null) {
+  const num = (x: number | null | undefined) => (x === null || x === undefined ? '' : String(x));
+  return {
+    name: sample?.name ?? '',
+    magnetic: num(sample?.magnetic),
+    total: num(sample?.total),
+    setting: sample?.setting ?? 'all',
+    fieldThresholdMG: num(sample?.fieldThresholdMG ?? (sample ? null : 1)),
+    provenance: sample?.provenance ?? '',
+    bins: sample?.bins ?? [],
+  };
+}

@@ -1,0 +1,86 @@
+import { useState } from 'react';
+import type { SweepDetail } from '../../../../shared/contracts/sweeps.ts';
+import { Badge } from '../../../components/ui/badge.tsx';
+import { Button } from '../../../components/ui/button.tsx';
+import { Card } from '../../../components/ui/card.tsx';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog.tsx';
+import { errorMessage } from '../../../components/ui/error-state.tsx';
+import { DescriptionList } from '../../../components/ui/description-list.tsx';
+import { formatDateTimeUtc } from '../../../lib/format.ts';
+import { useCancelSweep } from '../api/cancel-sweep.ts';
+import { isSweepLive } from '../api/get-sweeps.ts';
+import { parameterTitle } from './sweep-axes.ts';
+import { SWEEP_STATUS_TEXT, missingPoints, pointsProgress } from './sweep-text.ts';
+
+/** Where the sweep stands: points done out of all, its settings, and a way to cancel the rest. */
+export function SweepProgress({ departmentId, detail, canCancel, scenarioName }: { departmentId: string; detail: SweepDetail; canCancel: boolean; scenarioName: string }) {
+  const cancel = useCancelSweep(departmentId);
+  const [confirming, setConfirming] = useState(false);
+  const progress = pointsProgress(detail);
+  const live = isSweepLive(detail.status);
+  const status = SWEEP_STATUS_TEXT[detail.status];
+  const missing = missingPoints(detail);
+  const percent = Math.round(100 * progress.fraction);
+
+  return (
+    <Card
+      title="Progress"
+      actions={
+        live && canCancel ? (
+          <Button
+            variant="danger"
+            size="sm"
+            onClick={() => {
+              cancel.reset();
+              setConfirming(true);
+            }}
+          >
+            Cancel the sweep
+          </Button>
+        ) : undefined
+      }
+    >
+      <div className="flex flex-wrap items-center gap-3">
+        <Badge tone={status.tone}>{status.label}</Badge>
+        <span className="font-bold text-foam-50 tabular-nums" aria-live="polite">
+          {progress.text}
+          {missing > 0 ? ` (${missing} without a result)` : ''}
+        </span>
+      </div>
+      <div
+        role="progressbar"
+        aria-label="Points done"
+        aria-valuemin={0}
+        aria-valuemax={detail.pointCount}
+        aria-valuenow={detail.pointsDone}
+        aria-valuetext={progress.text}
+        className="mt-3 h-3 overflow-hidden rounded-full bg-ink-900"
+      >
+        <div className="h-full rounded-full bg-lantern-400 transition-[width] duration-500" style={{ width: `${percent}%` }} />
+      </div>
+      <DescriptionList
+        className="mt-4"
+        items={[
+          { term: 'Scenario', description: `${scenarioName} (version ${detail.scenarioVersion})` },
+          { term: 'Varies', description: detail.axes.map((a) => `${parameterTitle(a)}: ${a.values.join(', ')}`).join(' × ') },
+          { term: 'Systems per point', description: detail.systems.toLocaleString('en-US') },
+          { term: 'Seed', description: <code className="font-mono">{detail.seed}</code> },
+          { term: 'Created', description: formatDateTimeUtc(detail.createdAt) },
+        ]}
+      />
+      <ConfirmDialog
+        open={confirming}
+        title="Cancel the sweep?"
+        confirmLabel="Cancel the remaining points"
+        cancelLabel="Keep it running"
+        tone="danger"
+        pending={cancel.isPending}
+        error={cancel.isError ? errorMessage(cancel.error) : undefined}
+        onConfirm={() => cancel.mutate(detail.id, { onSuccess: () => setConfirming(false) })}
+        onCancel={() => setConfirming(false)}
+      >
+        Points still queued or running stop, and their reserved credit is given back. Points that have finished keep their results.
+      </ConfirmDialog>
+    </Card>
+  );
+}

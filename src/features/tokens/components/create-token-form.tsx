@@ -1,0 +1,43 @@
+import { z } from 'zod';
+import { createTokenBodySchema } from '../../../../shared/contracts/tokens.ts';
+import { Alert } from '../../../components/ui/alert.tsx';
+import { Button } from '../../../components/ui/button.tsx';
+import { NumberField, TextField } from '../../../components/ui/text-field.tsx';
+import { useSchemaForm } from '../../../hooks/use-schema-form.ts';
+import { parseNumberText } from '../../../lib/number-input.ts';
+import { useCreateToken } from '../api/create-token.ts';
+
+// The form sends text; the request schema wants a number of days or nothing.
+const tokenFormSchema = z.strictObject({
+  name: createTokenBodySchema.shape.name,
+  expiresInDays: z.preprocess((value) => (typeof value === 'string' ? (parseNumberText(value) ?? undefined) : value), createTokenBodySchema.shape.expiresInDays),
+});
+
+export interface CreatedToken {
+  name: string;
+  token: string;
+}
+
+/** Name a new token and, optionally, when it stops working. */
+export function CreateTokenForm({ departmentId, userId, onCreated }: { departmentId: string; userId: string; onCreated: (token: CreatedToken) => void }) {
+  const create = useCreateToken(departmentId, userId);
+  const form = useSchemaForm(tokenFormSchema, async (body) => {
+    const created = await create.mutateAsync(body);
+    onCreated({ name: created.name, token: created.token });
+  });
+  return (
+    <form {...form.formProps} aria-label="Create an API token">
+      <fieldset disabled={form.submitting} className="grid items-start gap-4 sm:grid-cols-[minmax(0,1fr)_16rem]">
+        <legend className="sr-only">New token</legend>
+        <Alert message={form.formError} className="sm:col-span-2" />
+        <TextField label="Name" name="name" autoComplete="off" hint="What the token is for: “laptop CLI”, “sweep script”." error={form.fieldErrors.name} />
+        <NumberField label="Expires after" name="expiresInDays" unit="days" hint="1 to 3650; empty for never." error={form.fieldErrors.expiresInDays} />
+        <div className="sm:col-span-2">
+          <Button type="submit" pending={form.submitting}>
+            Create token
+          </Button>
+        </div>
+      </fieldset>
+    </form>
+  );
+}
