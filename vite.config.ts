@@ -12,7 +12,8 @@ export default defineConfig({
   build: { outDir: 'dist/client', emptyOutDir: true, chunkSizeWarningLimit: 1500 },
   server: {
     port: 5173,
-    proxy: { '/api': { target: `http://127.0.0.1:${apiPort}`, changeOrigin: false } },
+    // '/api/' (with the slash) so client routes such as /api-tokens are not sent to the API.
+    proxy: { '/api/': { target: `http://127.0.0.1:${apiPort}`, changeOrigin: false } },
   },
   optimizeDeps: { exclude: ['@node-rs/argon2'] },
   test: {

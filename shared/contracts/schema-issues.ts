@@ -194,8 +194,10 @@ export function formatNumber(v: number): string {
   if (Number.isNaN(v)) return 'NaN';
   if (!Number.isFinite(v)) return v > 0 ? 'Infinity' : '-Infinity';
   const abs = Math.abs(v);
-  if (abs !== 0 && (abs >= 1e6 || abs < 1e-4)) return v.toExponential().replace('e+', 'e');
-  return String(v);
+  // 12 significant digits: a product such as 0.23 × 6 prints 1.38, not 1.3800000000000001.
+  const rounded = Number(v.toPrecision(12));
+  if (abs !== 0 && (abs >= 1e6 || abs < 1e-4)) return rounded.toExponential().replace('e+', 'e');
+  return String(rounded);
 }
 
 function formatValue(v: unknown): string {

@@ -31,8 +31,20 @@ export const routes: RouteObject[] = [
             children: [
               { index: true, lazy: () => import('./routes/overview.tsx') },
               ...(
-                ['scenarios', 'sweeps', 'impliedOccurrence', 'samples', 'occurrenceTables', 'apiTokens', 'settings'] as const
+                ['settings'] as const
               ).map(comingSoon),
+              { path: paths.scenarios.path, lazy: () => import('./routes/scenarios.tsx') },
+              { path: paths.scenarios.new.path, lazy: () => import('./routes/scenarios-new.tsx') },
+              { path: paths.scenarios.detail.path, lazy: () => import('./routes/scenarios-detail.tsx') },
+              { path: paths.occurrenceTables.path, lazy: () => import('./routes/occurrence-tables.tsx') },
+              { path: paths.occurrenceTables.detail.path, lazy: () => import('./routes/occurrence-tables-detail.tsx') },
+              { path: paths.sweeps.path, lazy: () => import('./routes/sweeps.tsx') },
+              { path: paths.sweeps.detail.path, lazy: () => import('./routes/sweeps-detail.tsx') },
+              { path: paths.impliedOccurrence.path, lazy: () => import('./routes/implied-occurrence.tsx') },
+              { path: paths.samples.path, lazy: () => import('./routes/samples.tsx') },
+              { path: paths.samples.new.path, lazy: () => import('./routes/samples-new.tsx') },
+              { path: paths.samples.detail.path, lazy: () => import('./routes/samples-detail.tsx') },
+              { path: paths.apiTokens.path, lazy: () => import('./routes/api-tokens.tsx') },
               { path: paths.runs.path, lazy: () => import('./routes/runs.tsx') },
               { path: paths.runs.new.path, lazy: () => import('./routes/runs-new.tsx') },
               { path: paths.runs.detail.path, lazy: () => import('./routes/runs-detail.tsx') },

@@ -30,7 +30,12 @@ export const paths = {
   acceptInvitation: page('/accept-invitation'),
 
   overview: page('/'),
-  scenarios: page('/scenarios'),
+  scenarios: {
+    ...page('/scenarios'),
+    /** The builder; with a preset key it starts from that example scenario. */
+    new: { path: '/scenarios/new', getHref: (preset?: string) => (preset ? `/scenarios/new?preset=${encodeURIComponent(preset)}` : '/scenarios/new') },
+    detail: { path: '/scenarios/:id', getHref: (id: string) => `/scenarios/${encodeURIComponent(id)}` },
+  },
   runs: {
     ...page('/runs'),
     /** The start form, with the scenario chosen when one is given. */
@@ -57,7 +62,10 @@ export const paths = {
     new: page('/samples/new'),
     detail: { path: '/samples/:id', getHref: (id: string) => `/samples/${encodeURIComponent(id)}` },
   },
-  occurrenceTables: page('/occurrence-tables'),
+  occurrenceTables: {
+    ...page('/occurrence-tables'),
+    detail: { path: '/occurrence-tables/:id', getHref: (id: string) => `/occurrence-tables/${encodeURIComponent(id)}` },
+  },
   apiTokens: page('/api-tokens'),
   settings: page('/settings'),
   members: page('/members'),

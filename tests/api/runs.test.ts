@@ -199,6 +199,14 @@ describe('sweeps', () => {
     // Common random numbers: a larger reach engulfs a superset, so the fraction cannot fall (semantics of fixedReach).
     const fractions = detail.points.map((p: { fraction: number }) => p.fraction);
     for (let i = 1; i < fractions.length; i++) expect(fractions[i]).toBeGreaterThanOrEqual(fractions[i - 1]);
+    // A sample of one setting is tested against that setting's fraction: with a single planet
+    // row no white dwarf with a surviving (wide) companion can be magnetic, so 0 of 45 fits every point.
+    const pairs = await modeller.agent.post('/api/samples').send({ name: 'Pairs (illustrative)', magnetic: 0, total: 45, setting: 'detachedCompanion' }).expect(201);
+    const against = (await modeller.agent.get(`/api/sweeps/${sweep.body.id}?sample=${pairs.body.id}`).expect(200)).body;
+    expect(against.points.map((p: { pValue: number }) => p.pValue)).toEqual([1, 1, 1, 1]);
+    expect(against.method).toMatch(/detached companion/);
+    const implied = await modeller.agent.post('/api/implied-occurrence').send({ scenarioId, sampleId: pairs.body.id }).expect(400);
+    expect(implied.body.error.message).toMatch(/Sweep companions.multiplier/);
     const runs = await modeller.agent.get(`/api/runs?includeSweepPoints=true&pageSize=100`).expect(200);
     const points = runs.body.runs.filter((r: { sweepId: string | null }) => r.sweepId === sweep.body.id);
     expect(new Set(points.map((r: { seed: string }) => r.seed))).toEqual(new Set(['crn']));

@@ -1,6 +1,12 @@
 import type { ScenarioResult } from '../../../shared/contracts/result.ts';
 import type { Sample, SampleBin } from '../../../shared/contracts/samples.ts';
-import { compareWithObserved, type ObservedComparison } from '../../../shared/engine/stats/compare-observed.ts';
+import type {
+  CountsComparison,
+  FractionConstraint as FractionConstraintComparison,
+  MeanMassComparison,
+  RunComparison,
+} from '../../../shared/contracts/comparison.ts';
+import { compareWithObserved } from '../../../shared/engine/stats/compare-observed.ts';
 import { formatPercent, formatPercentWithError, formatSigma } from '../../../shared/engine/stats/format.ts';
 import { monteCarloStandardError } from '../../../shared/engine/stats/mc-error.ts';
 import { sigmaFromTwoSidedP, twoSidedPFromSigma } from '../../../shared/engine/stats/significance.ts';
@@ -10,41 +16,6 @@ export interface PredictedCounts {
   label: string;
   magnetic: number;
   whiteDwarfs: number;
-}
-
-export interface CountsComparison extends ObservedComparison {
-  label: string;
-  predictedCounts: { magnetic: number; whiteDwarfs: number };
-}
-
-export interface FractionConstraintComparison {
-  published: { fraction: number; sigma: number | null; lowerBound: boolean };
-  predicted: { value: number; se: number };
-  /** Gaussian z of the difference (only when the paper gives an uncertainty). */
-  z: number | null;
-  pValue: number | null;
-  sigma: number | null;
-  consistent: boolean | null;
-  summary: string;
-  method: string;
-}
-
-export interface MeanMassComparison {
-  magnetic: { publishedMsun: number; publishedSigma: number; predictedMsun: number | null; predictedSdMsun: number | null; z: number | null };
-  nonMagnetic: { publishedMsun: number; publishedSigma: number; predictedMsun: number | null; predictedSdMsun: number | null; z: number | null };
-  summary: string;
-  method: string;
-}
-
-export interface RunComparison {
-  sample: { id: string; name: string; kind: Sample['kind']; library: boolean; citation: string | null; setting: Sample['setting'] };
-  /** The headline test: the sample's counts against the matching model sub-population. */
-  counts: CountsComparison | null;
-  /** One test per setting or mass-bin split of the sample. */
-  splits: CountsComparison[];
-  fraction: FractionConstraintComparison | null;
-  meanMass: MeanMassComparison | null;
-  caveats: string[];
 }
 
 /** Model counts of the white dwarfs a sample of this setting describes. */

@@ -190,7 +190,7 @@ export function createRunScheduler(deps: {
         return;
       }
       if (entry.reason === 'cancel') {
-        await updateRun(db, runId, { status: 'cancelled', finishedAt: new Date(), computeMs });
+        await updateRun(db, runId, { status: 'cancelled', finishedAt: new Date(), computeMs, chunksDone: done.size, progress: done.size / run.chunkCount });
         await deleteCheckpoint(db, runId);
         publish(runId, 'cancelled', done.size, run.chunkCount);
         await settle(runId, 'cancelled');
@@ -198,7 +198,7 @@ export function createRunScheduler(deps: {
       }
       const message = error instanceof Error ? error.message : String(error);
       logger.warn({ runId, err: error }, 'run failed');
-      await updateRun(db, runId, { status: 'failed', error: message.slice(0, 4000), finishedAt: new Date(), computeMs });
+      await updateRun(db, runId, { status: 'failed', error: message.slice(0, 4000), finishedAt: new Date(), computeMs, chunksDone: done.size, progress: done.size / run.chunkCount });
       await deleteCheckpoint(db, runId);
       publish(runId, 'failed', done.size, run.chunkCount, message);
       await settle(runId, 'failed');

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { idParamsSchema } from '../../../shared/contracts/common.ts';
+import { runComparisonResponseSchema, runComparisonSchema, runImpliedOccurrenceSchema } from '../../../shared/contracts/comparison.ts';
 import { scenarioResultSchema } from '../../../shared/contracts/result.ts';
 import {
   compareQuerySchema,
@@ -85,13 +86,13 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
   defineRoute(router, registry, mount, {
     method: 'get', path: '/runs/:id/comparison', tag, access: 'observer',
     summary: 'Set the run against an observed sample or published constraint: exact binomial test, sigma, intervals, per-setting tests',
-    params: idParamsSchema, query: sampleQuerySchema, response: z.record(z.string(), z.unknown()),
+    params: idParamsSchema, query: sampleQuerySchema, response: runComparisonSchema,
   }, ({ auth, params, query }) => runs.comparison(auth, params.id, query.sample));
 
   defineRoute(router, registry, mount, {
     method: 'get', path: '/runs/:id/implied-occurrence', tag, access: 'observer',
     summary: 'The range of the companion-occurrence multiplier a sample allows (68% and 95%), from the run\'s exact response',
-    params: idParamsSchema, query: sampleQuerySchema, response: z.record(z.string(), z.unknown()),
+    params: idParamsSchema, query: sampleQuerySchema, response: runImpliedOccurrenceSchema,
   }, ({ auth, params, query }) => runs.impliedOccurrence(auth, params.id, query.sample));
 
   defineRoute(router, registry, mount, {
@@ -113,7 +114,7 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
 
   defineRoute(router, registry, mount, {
     method: 'get', path: '/compare', tag, access: 'observer', summary: 'Two to four finished runs side by side on the same axes',
-    query: compareQuerySchema, response: z.record(z.string(), z.unknown()),
+    query: compareQuerySchema, response: runComparisonResponseSchema,
   }, ({ auth, query }) => runs.compare(auth, query.runs));
 
   defineRoute(router, registry, mount, {

@@ -28,6 +28,20 @@ const notFinished = (status: string) =>
  * its transaction: it reserves the cost (free systems first, shared/contracts/pricing.ts) and
  * returns the credits reserved, or throws a 402 so that nothing is queued.
  */
+/**
+ * The one-run response to the multiplier is exact for the fraction among all white dwarfs
+ * only (a white dwarf's setting itself changes with the multiplier), so a sample of one
+ * setting is sent to a multiplier sweep instead.
+ */
+function requireAllWhiteDwarfs(sample: { setting: string }, field: string) {
+  if (sample.setting !== 'all') {
+    throw badRequest(
+      `This sample counts only ${sample.setting === 'single' ? 'single white dwarfs' : 'white dwarfs with a detached companion'}; implied occurrence from one run is exact only for a sample of all white dwarfs. Sweep companions.multiplier and compare with this sample instead.`,
+      field,
+    );
+  }
+}
+
 export interface RunBilling {
   reserve(tx: Parameters<Parameters<Db['transaction']>[0]>[0], run: { id: string; departmentId: string; userId: string; systems: number }): Promise<{ costCredits: number }>;
 }
@@ -231,6 +245,7 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       if (sample.kind !== 'counts' || sample.magnetic === null || sample.total === null) {
         throw badRequest('Implied occurrence needs a sample with counts (magnetic of total); this one states only a fraction or mean masses.', 'sample');
       }
+      requireAllWhiteDwarfs(sample, 'sample');
       if (result.counts.whiteDwarfs === 0) throw badRequest('The run has no white dwarfs, so no occurrence is implied.', 'runId');
       return {
         runId: id,
@@ -290,6 +305,7 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       const department = departmentOf(auth);
       const sample = await samples.visible(department.id, body.sampleId);
       if (sample.kind !== 'counts') throw badRequest('Implied occurrence needs a sample with counts (magnetic of total).', 'sampleId');
+      requireAllWhiteDwarfs(sample, 'sampleId');
       const source = await scenarios.resolve(department.id, body.scenarioId);
       const snapshot = await snapshotOf(department.id, source.scenario, { systems: body.systems, seed: body.seed });
       const id = await enqueue(auth, { scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: source.name }, snapshot);

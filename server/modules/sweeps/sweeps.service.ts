@@ -9,7 +9,9 @@ import { AppError, notFound } from '../../lib/errors.ts';
 import { recordAudit } from '../audit/audit.service.ts';
 import { departmentOf, type RequestAuth } from '../auth/auth.context.ts';
 import type { RunScheduler } from '../runs/run-scheduler.ts';
-import { runsOfSweep } from '../runs/runs.repository.ts';
+import { predictedFor } from '../runs/comparison.ts';
+import { loadResult, runsOfSweep } from '../runs/runs.repository.ts';
+import type { ScenarioResult } from '../../../shared/contracts/result.ts';
 import type { RunsService } from '../runs/runs.service.ts';
 import type { SamplesService } from '../samples/samples.service.ts';
 import type { ScenariosService } from '../scenarios/scenarios.service.ts';
@@ -51,10 +53,9 @@ function summary(row: SweepRow, points: RunRow[]): SweepSummary {
   };
 }
 
-/** Contiguous range of axis values whose points are all consistent, around the most consistent one. */
-function allowedRange(values: number[], consistent: (boolean | null)[], pValues: (number | null)[]): [number, number] | null {
-  const ok = values.map((v, i) => ({ v, ok: consistent[i] === true, p: pValues[i] ?? -1 })).sort((a, b) => a.v - b.v);
-  const okValues = ok.filter((x) => x.ok).map((x) => x.v);
+/** The smallest and largest axis values whose points the sample does not reject. */
+function allowedRange(values: number[], consistent: (boolean | null)[]): [number, number] | null {
+  const okValues = values.filter((_, i) => consistent[i] === true);
   if (okValues.length === 0) return null;
   return [Math.min(...okValues), Math.max(...okValues)];
 }
@@ -122,8 +123,21 @@ export function createSweepsService(deps: { db: Db; runs: RunsService; scenarios
       const sample: Sample | null = sampleId ? await samples.visible(department.id, sampleId) : null;
       const counts = sample?.kind === 'counts' && sample.magnetic !== null && sample.total !== null ? { k: sample.magnetic, n: sample.total } : null;
       const grid = gridPoints(row.axes);
+      // A sample of one setting (e.g. white dwarfs with a detached companion) is tested against
+      // the predicted fraction of that setting, read from each point's stored result.
+      const settingFraction = new Map<string, number | null>();
+      if (counts && sample && sample.setting !== 'all') {
+        for (const run of points) {
+          if (run.status !== 'succeeded') continue;
+          const text = await loadResult(db, run.id);
+          const predicted = text ? predictedFor(JSON.parse(text) as ScenarioResult, sample.setting) : null;
+          settingFraction.set(run.id, predicted && predicted.whiteDwarfs > 0 ? predicted.magnetic / predicted.whiteDwarfs : null);
+        }
+      }
+      const testedFraction = (run: RunRow) => (settingFraction.size > 0 ? (settingFraction.get(run.id) ?? null) : run.fraction);
       const pointRows = points.map((run) => {
-        const pValue = counts && run.status === 'succeeded' && run.fraction !== null ? binomialTestTwoSided(counts.k, counts.n, run.fraction) : null;
+        const tested = testedFraction(run);
+        const pValue = counts && run.status === 'succeeded' && tested !== null ? binomialTestTwoSided(counts.k, counts.n, tested) : null;
         return {
           index: run.sweepPointIndex ?? 0,
           values: grid[run.sweepPointIndex ?? 0] ?? [],
@@ -148,12 +162,12 @@ export function createSweepsService(deps: { db: Db; runs: RunsService; scenarios
         allowedRange:
           counts && oneD
             ? {
-                level68: allowedRange(pointRows.map((p) => p.values[0]), pointRows.map((p) => p.consistent68), pointRows.map((p) => p.pValue)),
-                level95: allowedRange(pointRows.map((p) => p.values[0]), pointRows.map((p) => p.consistent95), pointRows.map((p) => p.pValue)),
+                level68: allowedRange(pointRows.map((p) => p.values[0]), pointRows.map((p) => p.consistent68)),
+                level95: allowedRange(pointRows.map((p) => p.values[0]), pointRows.map((p) => p.consistent95)),
                 note: 'The smallest and largest grid values whose prediction the sample does not reject (exact two-sided binomial test); the true limits lie between grid values, and each point carries its own Monte Carlo error.',
               }
             : null,
-        method: 'Every point is a separate run with the same seed, so the points share their random numbers (common random numbers) and the curve is smooth; p-values are exact two-sided binomial tests of the sample against each point.',
+        method: `Every point is a separate run with the same seed, so the points share their random numbers (common random numbers) and the curve is smooth; p-values are exact two-sided binomial tests of the sample against each point's predicted fraction${sample && sample.setting !== 'all' ? ` among ${sample.setting === 'single' ? 'single white dwarfs' : 'white dwarfs with a detached companion'} (the sample's setting)` : ' among all white dwarfs'}.`,
       };
     },
 

@@ -40,7 +40,7 @@ function LibraryPage({ sample, eyebrow }: { sample: Sample; eyebrow: ReactNode }
     <>
       <PageHeader eyebrow={eyebrow} title={sample.name} description="A published constraint from the library: read-only, the same for every department." />
       <div className="flex flex-col gap-6">
-        <LibraryEntry entry={sample} headingLevel={2} />
+        <LibraryEntry entry={sample} standalone />
         {sample.bins.length > 0 && <SampleSplitsTable bins={sample.bins} caption="Splits as published" />}
         <Alert tone="info" message={<>Library entries cannot be changed. To use other numbers, <Link to={paths.samples.new.getHref()}>record your own sample</Link>.</>} />
       </div>

@@ -37,6 +37,7 @@ export function Component() {
   const me = useSignedInMe();
   const navigate = useNavigate();
   const [search] = useSearchParams();
+  const canStart = roleAtLeast(me.role, 'modeller');
   return (
     <>
       <PageHeader
@@ -45,15 +46,18 @@ export function Component() {
         description="One scenario across a grid of one or two parameters, with the same seed at every point, to see how the predicted fraction moves and which values an observed sample allows."
       />
       <div className="flex flex-col gap-6">
-        <Card title="New sweep" description="Every grid point is a run of the scenario with the parameter set to that value.">
-          <SweepForm
-            departmentId={me.department.id}
-            canStart={roleAtLeast(me.role, 'modeller')}
-            initialScenarioId={search.get('scenario')}
-            onStarted={(id) => navigate(paths.sweeps.detail.getHref(id))}
-            renderCost={(systems, points) => <SweepCost departmentId={me.department.id} systems={systems} points={points} />}
-          />
-        </Card>
+        {canStart ? (
+          <Card title="New sweep" description="Every grid point is a run of the scenario with the parameter set to that value.">
+            <SweepForm
+              departmentId={me.department.id}
+              initialScenarioId={search.get('scenario')}
+              onStarted={(id) => navigate(paths.sweeps.detail.getHref(id))}
+              renderCost={(systems, points) => <SweepCost departmentId={me.department.id} systems={systems} points={points} />}
+            />
+          </Card>
+        ) : (
+          <Alert tone="info" message="Sweeps are set up by modellers and admins. You can open every sweep of the department below and set it against any sample." />
+        )}
         <SweepsTable departmentId={me.department.id} />
       </div>
     </>

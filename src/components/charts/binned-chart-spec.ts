@@ -131,6 +131,8 @@ export function binnedChartSpec(input: BinnedChartInput): VisualizationSpec {
     field: 'series',
     type: 'nominal' as const,
     title: null,
+    // One entry per line, so that long run names are not cut short.
+    legend: { columns: input.series.length > 2 ? 1 : undefined, labelLimit: 360 },
     scale: { domain: input.series.map((s) => s.name), range: input.series.map((s) => s.colour) },
   };
   const x = {
@@ -151,15 +153,14 @@ export function binnedChartSpec(input: BinnedChartInput): VisualizationSpec {
   return {
     height: input.height ?? 260,
     layer: [
+      // One fill layer per series with a fixed colour: an encoded one would merge into the legend and switch it off.
       ...(input.fill
-        ? [
-            {
-              // Areas are drawn in x order, so they get the bins' own step points rather than the outline.
-              data: { values: input.series.flatMap((s) => stepFill(rows.filter((r) => r.series === s.name))) },
-              mark: { type: 'area' as const, opacity: 0.22, interpolate: 'step-after' as const },
-              encoding: { x, y: { ...y, stack: null }, color: { ...colour, legend: null } },
-            },
-          ]
+        ? input.series.map((s) => ({
+            // Areas are drawn in x order, so they get the bins' own step points rather than the outline.
+            data: { values: stepFill(rows.filter((r) => r.series === s.name)) },
+            mark: { type: 'area' as const, opacity: 0.22, interpolate: 'step-after' as const, color: s.colour },
+            encoding: { x, y: { ...y, stack: null } },
+          }))
         : []),
       {
         data: { values: outline },

@@ -28,7 +28,7 @@ export interface FractionChartInput {
   categoryColours?: readonly { name: string; colour: string }[];
   /** Print "9.6% ± 0.11%" beside each point (single series only). */
   labels?: boolean;
-  /** Height per category row, in px. */
+  /** Height per category row in px (per run within a row when there are several). */
   rowHeight?: number;
 }
 
@@ -59,7 +59,8 @@ export function fractionChartSpec(input: FractionChartInput): VisualizationSpec 
   const rows = fractionRows(input.points);
   const categories = input.categories ?? [...new Set(rows.map((r) => r.category))];
   const grouped = Boolean(input.series && input.series.length > 1);
-  const rowHeight = input.rowHeight ?? (grouped ? 22 * (input.series?.length ?? 1) + 14 : 44);
+  // With several runs the step is per run within a row (yOffset), else per row.
+  const rowHeight = input.rowHeight ?? (grouped ? 20 : 44);
   const y = { field: 'category', type: 'nominal' as const, title: null, sort: categories, axis: { labelLimit: 220 } };
   const yOffset = grouped ? { yOffset: { field: 'series', type: 'nominal' as const, sort: input.series!.map((s) => s.name) } } : {};
   const colour = grouped
@@ -68,6 +69,7 @@ export function fractionChartSpec(input: FractionChartInput): VisualizationSpec 
           field: 'series',
           type: 'nominal' as const,
           title: null,
+          legend: { columns: 1, labelLimit: 360 },
           scale: { domain: input.series!.map((s) => s.name), range: input.series!.map((s) => s.colour) },
         },
       }
@@ -96,7 +98,7 @@ export function fractionChartSpec(input: FractionChartInput): VisualizationSpec 
     field,
     type: 'quantitative' as const,
     title: input.valueTitle,
-    axis: { format: '.2~%', tickCount: 5 },
+    axis: { format: '.2~%', tickCount: 4, labelOverlap: 'greedy' as const },
     scale: { domain: [0, top], nice: true },
   });
 

@@ -95,6 +95,12 @@ export function responseRows(points: readonly ResponsePoint[]): ResponseRow[] {
     });
 }
 
+/** A long axis title on two lines, broken before its unit, so that it fits a phone's width. */
+export function titleLines(title: string): string | string[] {
+  const at = title.lastIndexOf(' (');
+  return title.length > 32 && at > 0 ? [title.slice(0, at), title.slice(at + 1)] : title;
+}
+
 /** Whether a log x axis reads better: positive values spanning at least a factor of ten. */
 export function prefersLogAxis(xs: readonly number[]): boolean {
   if (xs.length < 2 || xs.some((x) => !(x > 0))) return false;
@@ -107,8 +113,9 @@ export function responseCurveSpec(input: ResponseCurveInput): VisualizationSpec 
   const x = {
     field: 'x',
     type: 'quantitative' as const,
-    title: input.xTitle,
-    scale: { type: input.logX ? ('log' as const) : ('linear' as const), zero: false, nice: !input.logX },
+    title: titleLines(input.xTitle),
+    // A log axis is not rounded out to whole decades, which would squeeze a short grid into a corner.
+    scale: input.logX ? { type: 'log' as const, nice: false, padding: 16 } : { type: 'linear' as const, zero: false, nice: true },
     axis: { format: '~g' },
   };
   const y = (field: string) => ({
@@ -139,6 +146,15 @@ export function responseCurveSpec(input: ResponseCurveInput): VisualizationSpec 
   };
 
   const layers: unknown[] = [];
+  // A range of one grid value has no width: it is drawn as a broad line instead.
+  const points = allowed.filter((a) => a.lo === a.hi);
+  if (points.length > 0) {
+    layers.push({
+      data: { values: points },
+      mark: { type: 'rule', strokeWidth: 8, color: RESPONSE_CURVE_COLOURS.allowed, opacity: 0.45 },
+      encoding: { x: { ...x, field: 'lo' }, tooltip: [{ field: 'level', title: 'Allowed only at' }, { field: 'lo', title: 'value', format: '~g' }] },
+    });
+  }
   if (allowed.length > 0) {
     layers.push({
       data: { values: allowed },

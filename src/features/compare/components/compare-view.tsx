@@ -14,7 +14,7 @@ import { QueryState } from '../../../components/ui/query-state.tsx';
 import { Select } from '../../../components/ui/select.tsx';
 import { Table, type TableColumn } from '../../../components/ui/table.tsx';
 import { paths } from '../../../config/paths.ts';
-import { formatDateTimeUtc } from '../../../lib/format.ts';
+import { formatDate } from '../../../lib/format.ts';
 import { useComparison, type ComparedRun, type RunsComparison } from '../api/get-comparison.ts';
 import { COMPARE_MIN_RUNS, differenceInWords, percentagePoints } from './compare-text.ts';
 
@@ -46,11 +46,20 @@ function RunsTable({ runs, onRemove }: { runs: Labelled[]; onRemove: (id: string
         </span>
       ),
     },
-    { id: 'fraction', header: 'Magnetic fraction ± MC error', align: 'end', cell: (r) => <span className="whitespace-nowrap tabular-nums">{fractionText(r.entry.fraction)}</span> },
+    { id: 'fraction', header: 'Fraction ± MC error', align: 'end', cell: (r) => <span className="whitespace-nowrap tabular-nums">{fractionText(r.entry.fraction)}</span> },
     { id: 'n', header: 'White dwarfs', align: 'end', cell: (r) => <span className="tabular-nums">{count(r.entry.fraction.n)}</span> },
     { id: 'systems', header: 'Systems', align: 'end', cell: (r) => <span className="tabular-nums">{count(r.entry.run.systems)}</span> },
     { id: 'seed', header: 'Seed', cell: (r) => <code className="font-mono text-sm">{r.entry.run.seed}</code> },
-    { id: 'when', header: 'Started (UTC)', cell: (r) => <span className="whitespace-nowrap">{formatDateTimeUtc(r.entry.run.createdAt)}</span> },
+    {
+      id: 'when',
+      header: 'Started',
+      cell: (r) => (
+        <span className="inline-flex flex-col whitespace-nowrap">
+          <span>{formatDate(r.entry.run.createdAt)}</span>
+          <span className="text-sm text-foam-400">{r.entry.run.createdAt.slice(11, 16)} UTC</span>
+        </span>
+      ),
+    },
     {
       id: 'remove',
       header: <span className="sr-only">Actions</span>,
@@ -95,13 +104,13 @@ function FractionCharts({ runs }: { runs: Labelled[] }) {
       <Card title="Magnetic fraction" description="Overall and within each setting. Thick bars: ±1 Monte Carlo error; thin: ±2.">
         <VegaChart
           description={`Magnetic fraction of each run, overall and by setting, with Monte Carlo errors. ${describe(settingPoints)}.`}
-          spec={fractionChartSpec({ points: settingPoints, series, categories: settings.map((s) => s.category), valueTitle: 'Magnetic fraction (% of the group’s white dwarfs)' })}
+          spec={fractionChartSpec({ points: settingPoints, series, categories: settings.map((s) => s.category), valueTitle: 'Magnetic fraction (%)' })}
         />
       </Card>
       <Card title="By channel" description="Magnetic white dwarfs of each channel as a share of all white dwarfs.">
         <VegaChart
           description={`Share of all white dwarfs made magnetic by each channel, for each run. ${describe(channelPoints)}.`}
-          spec={fractionChartSpec({ points: channelPoints, series, categories: channels.map((c) => c.category), valueTitle: 'Magnetic fraction (% of all white dwarfs)' })}
+          spec={fractionChartSpec({ points: channelPoints, series, categories: channels.map((c) => c.category), valueTitle: 'Share of all white dwarfs (%)' })}
         />
       </Card>
     </div>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { impliedSentence, multiplierRangeWords, occurrenceRows, scaledOccurrence } from './implied-text.ts';
+import { etaText, impliedSentence, multiplierRangeWords, occurrenceRows, scaledOccurrence } from './implied-text.ts';
 
 // A response like the demo baseline against 9 of 78 (the server's answer for that run, rounded).
 const curve = [
@@ -42,5 +42,14 @@ describe('occurrence rows', () => {
     expect(scaledOccurrence(rows![0], 2)).toBe('21%');
     expect(scaledOccurrence(rows![1], 5)).toBe('100%');
     expect(occurrenceRows({ companions: { tableId: 'abc' } })).toBeNull();
+  });
+});
+
+describe('etaText', () => {
+  it('says seconds, then minutes, and nothing when unknown', () => {
+    expect(etaText(null)).toBeNull();
+    expect(etaText(0.2)).toBe('about 1 s left');
+    expect(etaText(42)).toBe('about 42 s left');
+    expect(etaText(400)).toBe('about 7 min left');
   });
 });

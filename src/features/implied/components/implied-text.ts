@@ -72,3 +72,10 @@ export function occurrenceRows(resolved: Record<string, unknown> | undefined): O
   if (!companions?.rows) return null;
   return companions.rows.map((row, i) => ({ label: row.label ?? `${row.class ?? 'Row'} ${i + 1}`, occurrence: row.occurrence ?? 0 }));
 }
+
+/** "about 40 s left", "about 3 min left"; null while the server cannot tell yet. */
+export function etaText(seconds: number | null): string | null {
+  if (seconds === null || !Number.isFinite(seconds)) return null;
+  const s = Math.max(1, Math.round(seconds));
+  return s < 90 ? `about ${s} s left` : `about ${Math.round(s / 60)} min left`;
+}

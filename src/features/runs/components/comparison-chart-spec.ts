@@ -8,16 +8,29 @@ export interface ComparedRow {
   predicted: { value: number; se: number };
 }
 
-export const OBSERVED_KIND = 'Observed: 68% and 95% Clopper–Pearson intervals';
-export const PREDICTED_KIND = 'Predicted: ±1 and ±2 Monte Carlo errors';
+export const OBSERVED_KIND = 'Observed, 68% and 95% intervals';
+export const PREDICTED_KIND = 'Predicted, ±1 and ±2 MC errors';
 
 /** Sentence case for axis labels: "all white dwarfs" → "All white dwarfs". */
-const capitalised = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+export const capitalised = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+
+/**
+ * A short axis label from the server's description of a (sub)sample: "white dwarfs with a wide
+ * (never engulfed) companion" → "With a wide companion", "white dwarfs of 0.5–0.7 Msun" → "0.5–0.7 Msun".
+ */
+export function shortSampleLabel(label: string): string {
+  const plain = label.replace(/\s*\([^)]*\)/g, '').trim();
+  const short = plain
+    .replace(/^(all|single) white dwarfs$/i, '$1')
+    .replace(/^white dwarfs with /i, 'with ')
+    .replace(/^white dwarfs of /i, '');
+  return capitalised(short);
+}
 
 export function comparisonRows(rows: readonly ComparedRow[]) {
   const clip = (x: number) => Math.min(1, Math.max(0, x));
   return rows.flatMap((r) => {
-    const label = capitalised(r.label);
+    const label = shortSampleLabel(r.label);
     const { value, se } = r.predicted;
     return [
       {
@@ -40,15 +53,17 @@ export function comparisonChartSpec(rows: readonly ComparedRow[]): Visualization
     field: 'kind',
     type: 'nominal',
     title: null,
+    legend: { labelLimit: 320 },
     scale: { domain: [OBSERVED_KIND, PREDICTED_KIND], range: [seriesColour(4), seriesColour(1)] },
   };
-  const x = (field: string) => ({ field, type: 'quantitative', title: 'Magnetic fraction (% of white dwarfs)', axis: { format: '.2~%', tickCount: 6 }, scale: { zero: true, nice: true } });
+  const x = (field: string) => ({ field, type: 'quantitative', title: 'Magnetic fraction (% of white dwarfs)', axis: { format: '.2~%', tickCount: 6, labelOverlap: 'greedy' }, scale: { zero: true, nice: true } });
   return {
     autosize: { type: 'fit-x', contains: 'padding' },
-    height: { step: 56 },
+    // With yOffset the step is per sub-row (observed, predicted).
+    height: { step: 24 },
     data: { values },
     encoding: {
-      y: { field: 'label', type: 'nominal', title: null, sort: null, axis: { labelLimit: 180 } },
+      y: { field: 'label', type: 'nominal', title: null, sort: null, axis: { labelLimit: 150 } },
       yOffset: { field: 'kind', type: 'nominal', sort: [OBSERVED_KIND, PREDICTED_KIND] },
       color: colour,
     },

@@ -20,7 +20,7 @@ export function FateMapChart({ result }: { result: ScenarioResult }) {
       ) : (
         <>
           <VegaChart description={`Fate map of ${formatCount(total)} companions by companion mass and initial period. ${summary}.`} spec={fateMapSpec(result.bins.fateMap)} />
-          <h3 className="mt-3 font-bold">Most common fate, and companions of each fate</h3>
+          <h3 className="mt-3 font-bold">Fates: colour key and companions of each</h3>
           <ul className="mt-1 flex flex-wrap gap-x-6 gap-y-1 text-sm text-foam-300">
             {FATE_SERIES.map((f) => (
               <li key={f.key} className="flex items-center gap-2">

@@ -125,7 +125,7 @@ function RunBody({
             message={
               <>
                 <p className="font-bold">
-                  The run was cancelled after {formatCount(run.chunksDone)} of {formatCount(run.chunkCount)} chunks{run.finishedAt ? `, on ${formatDateTimeUtc(run.finishedAt)}` : ''}.
+                  The run was cancelled{run.finishedAt ? ` on ${formatDateTimeUtc(run.finishedAt)}` : ''}, with {formatCount(run.chunksDone)} of {formatCount(run.chunkCount)} chunks done.
                 </p>
                 <p className="text-foam-300">A cancelled run keeps no result; its reserved credits were given back.</p>
               </>
@@ -144,7 +144,13 @@ function RunBody({
           <Card>
             <RunHeadline result={data} />
           </Card>
-          <SampleComparisonCard departmentId={departmentId} runId={run.id} sampleId={sampleId} onSampleChange={onSampleChange} />
+          <SampleComparisonCard
+            departmentId={departmentId}
+            runId={run.id}
+            sampleId={sampleId}
+            onSampleChange={onSampleChange}
+            scenarioTest={data.comparison && { ...data.comparison, label: 'all white dwarfs', predictedCounts: { magnetic: data.fraction.k, whiteDwarfs: data.fraction.n } }}
+          />
           <div className="grid gap-6 xl:grid-cols-2">
             <RunSplitCharts result={data} />
             <WdMassChart bins={data.bins.wdMass} />

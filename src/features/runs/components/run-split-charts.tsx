@@ -43,7 +43,6 @@ function SplitChart({ rows, series, valueTitle, description }: { rows: SplitRow[
         points: shown.map((r) => ({ category: short(r.key), value: r.fraction.value!, se: r.fraction.se! })),
         categoryColours: series.map((s) => ({ name: s.short, colour: s.colour })),
         valueTitle,
-        labels: true,
       })}
     />
   );
@@ -59,7 +58,7 @@ export function RunSplitCharts({ result }: { result: ScenarioResult }) {
         <SplitChart
           rows={bySetting}
           series={SETTING_SERIES}
-          valueTitle="Magnetic within the setting (%)"
+          valueTitle="Magnetic fraction (%)"
           description="Magnetic fraction within each setting, with Monte Carlo errors."
         />
         <SplitCounts rows={bySetting} caption="Magnetic of the setting’s white dwarfs" />

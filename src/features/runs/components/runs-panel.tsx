@@ -27,8 +27,8 @@ const SORT_LABELS: Record<RunListState['sort'], string> = {
 };
 const sortOptions = RUN_SORT_FIELDS.map((f) => ({ value: f, label: SORT_LABELS[f] }));
 const orderOptions = [
-  { value: 'desc', label: 'Largest or newest first' },
-  { value: 'asc', label: 'Smallest or oldest first' },
+  { value: 'desc', label: 'Descending' },
+  { value: 'asc', label: 'Ascending' },
 ];
 const pageSizeOptions = PAGE_SIZES.map((n) => ({ value: String(n), label: `${n} per page` }));
 

@@ -56,7 +56,7 @@ export function RunsTable({ runs, state, onSort, selected, onToggle, selectionFu
       header: 'Scenario',
       sort: 'scenarioName',
       cell: (r) => (
-        <span className="flex min-w-52 flex-col">
+        <span className="flex min-w-40 flex-col">
           <Link to={paths.runs.detail.getHref(r.id)} className="font-bold">
             {r.scenarioName}
             <span className="sr-only">, run of {formatDateTimeUtc(r.createdAt)}</span>
@@ -75,7 +75,7 @@ export function RunsTable({ runs, state, onSort, selected, onToggle, selectionFu
       align: 'end',
       cell: (r) => <span className="whitespace-nowrap">{fractionText(r)}</span>,
     },
-    { id: 'owner', header: 'Who', cell: (r) => <span className="inline-block min-w-32">{r.ownerName}</span> },
+    { id: 'owner', header: 'Who', cell: (r) => <span className="inline-block max-w-44">{r.ownerName}</span> },
     {
       id: 'when',
       header: 'Started',
@@ -114,7 +114,7 @@ export function RunsTable({ runs, state, onSort, selected, onToggle, selectionFu
           </caption>
           <thead className="bg-ink-800 text-foam-300">
             <tr>
-              <th scope="col" className="w-12 px-4 py-3">
+              <th scope="col" className="w-10 py-3 pr-1 pl-4">
                 <span className="sr-only">Compare</span>
               </th>
               {columns.map((c) =>
@@ -133,11 +133,11 @@ export function RunsTable({ runs, state, onSort, selected, onToggle, selectionFu
           <tbody>
             {runs.map((r) => (
               <tr key={r.id} className={cx('border-t border-ink-700 hover:bg-ink-800/60', selected.has(r.id) && 'bg-lantern-400/8')}>
-                <td className="px-4 py-3">{checkbox(r)}</td>
+                <td className="py-3 pr-1 pl-4">{checkbox(r)}</td>
                 {columns.map((c) => {
                   const Cell = c.id === 'scenario' ? 'th' : 'td';
                   return (
-                    <Cell key={c.id} scope={c.id === 'scenario' ? 'row' : undefined} className={cx('px-4 py-3 align-middle font-normal', c.align === 'end' && 'text-right tabular-nums')}>
+                    <Cell key={c.id} scope={c.id === 'scenario' ? 'row' : undefined} className={cx('px-3 py-3 align-middle font-normal', c.align === 'end' && 'text-right tabular-nums')}>
                       {c.cell(r)}
                     </Cell>
                   );
@@ -162,7 +162,7 @@ export function RunsTable({ runs, state, onSort, selected, onToggle, selectionFu
                   {columns.slice(2).map((c) => (
                     <div key={c.id} className="flex flex-wrap items-baseline justify-between gap-x-4">
                       <dt className="text-foam-400">{c.header}</dt>
-                      <dd className="min-w-0 text-right tabular-nums">{c.cell(r)}</dd>
+                      <dd className="ml-auto min-w-0 text-right tabular-nums">{c.cell(r)}</dd>
                     </div>
                   ))}
                 </dl>

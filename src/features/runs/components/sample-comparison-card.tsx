@@ -14,7 +14,7 @@ import { Select } from '../../../components/ui/select.tsx';
 import { Table, type TableColumn } from '../../../components/ui/table.tsx';
 import { useRunComparison, type CountsComparison, type FractionConstraint, type RunComparison } from '../api/get-run-comparison.ts';
 import { useRunSamples } from '../api/get-run-samples.ts';
-import { comparisonChartSpec } from './comparison-chart-spec.ts';
+import { capitalised, comparisonChartSpec } from './comparison-chart-spec.ts';
 import { formatCount, tensionInWords } from './run-text.ts';
 
 /** The sample shown first: the department's own counts, then the library's, then anything. */
@@ -50,7 +50,7 @@ function intervalText(fraction: number, interval: [number, number]): string {
 function CountsView({ test, splits }: { test: CountsComparison | null; splits: CountsComparison[] }) {
   const rows = [...(test ? [test] : []), ...splits];
   const splitColumns: TableColumn<CountsComparison>[] = [
-    { id: 'label', header: 'White dwarfs', rowHeader: true, cell: (r) => r.label },
+    { id: 'label', header: 'White dwarfs', rowHeader: true, cell: (r) => capitalised(r.label) },
     { id: 'observed', header: 'Observed', align: 'end', cell: (r) => <span className="whitespace-nowrap tabular-nums">{`${r.observed.magnetic} of ${r.observed.total}`}</span> },
     { id: 'interval', header: '95% interval', align: 'end', cell: (r) => <span className="whitespace-nowrap tabular-nums">{intervalText(r.observed.fraction, r.observed.interval95)}</span> },
     { id: 'predicted', header: 'Predicted ± MC error', align: 'end', cell: (r) => <span className="whitespace-nowrap tabular-nums">{formatPercentWithError(r.predicted.value, r.predicted.se)}</span> },
@@ -193,22 +193,40 @@ export interface SampleComparisonCardProps {
   /** From the address bar (?sample=…); null picks the default. */
   sampleId: string | null;
   onSampleChange: (sampleId: string) => void;
+  /** The test against the observed counts written into the scenario itself (result.comparison), when there are any. */
+  scenarioTest?: CountsComparison | null;
 }
 
+/** The choice that stands for the scenario's own observed counts; "~" is never part of an id. */
+export const SCENARIO_SAMPLE = '~scenario';
+
 /** The run set against an observed sample or published constraint of the user's choice. */
-export function SampleComparisonCard({ departmentId, runId, sampleId, onSampleChange }: SampleComparisonCardProps) {
+export function SampleComparisonCard({ departmentId, runId, sampleId, onSampleChange, scenarioTest }: SampleComparisonCardProps) {
   const samples = useRunSamples(departmentId);
   const list = samples.data?.samples ?? [];
-  const chosen = sampleId && list.some((s) => s.id === sampleId) ? sampleId : defaultSampleId(list);
-  const comparison = useRunComparison(departmentId, runId, chosen);
+  const chosen =
+    sampleId === SCENARIO_SAMPLE && scenarioTest
+      ? SCENARIO_SAMPLE
+      : sampleId && list.some((s) => s.id === sampleId)
+        ? sampleId
+        : scenarioTest
+          ? SCENARIO_SAMPLE
+          : defaultSampleId(list);
+  const comparison = useRunComparison(departmentId, runId, chosen === SCENARIO_SAMPLE ? null : chosen);
+  const options = [
+    ...(scenarioTest
+      ? [{ value: SCENARIO_SAMPLE, label: `The scenario’s own observed sample (${formatCount(scenarioTest.observed.magnetic)} of ${formatCount(scenarioTest.observed.total)} magnetic)` }]
+      : []),
+    ...list.map((s) => ({ value: s.id, label: sampleOptionLabel(s) })),
+  ];
 
   return (
-    <Card title="Against an observed sample" description="An exact binomial test of the observed counts against the prediction, with the Monte Carlo error included.">
+    <Card title="Against an observed sample" description="The prediction tested against observed counts (exact binomial test) or a published value (Gaussian), with the run’s Monte Carlo error included.">
       {samples.isPending ? (
         <LoadingState label="Loading samples…" />
       ) : samples.isError ? (
         <ErrorState error={samples.error} title="The samples could not be loaded" onRetry={() => void samples.refetch()} retrying={samples.isFetching} />
-      ) : list.length === 0 ? (
+      ) : options.length === 0 ? (
         <EmptyState title="No samples to compare with" headingLevel={3}>
           Record an observed sample (magnetic of total white dwarfs) on the Samples page, then come back.
         </EmptyState>
@@ -217,14 +235,21 @@ export function SampleComparisonCard({ departmentId, runId, sampleId, onSampleCh
           <Select
             label="Sample"
             value={chosen ?? ''}
-            options={list.map((s) => ({ value: s.id, label: sampleOptionLabel(s) }))}
+            options={options}
             onChange={(event) => onSampleChange(event.target.value)}
             hint="Your department’s samples and the library of published constraints."
             className="max-w-2xl"
           />
-          <QueryState query={comparison} loadingLabel="Testing the run against the sample…" errorTitle="The comparison could not be made">
-            {(data) => <ComparisonBody comparison={data} />}
-          </QueryState>
+          {chosen === SCENARIO_SAMPLE && scenarioTest ? (
+            <div className="flex flex-col gap-3">
+              <p className="text-sm text-foam-400">From the scenario document’s “observed” counts, tested against all the run’s white dwarfs.</p>
+              <CountsView test={scenarioTest} splits={[]} />
+            </div>
+          ) : (
+            <QueryState query={comparison} loadingLabel="Testing the run against the sample…" errorTitle="The comparison could not be made">
+              {(data) => <ComparisonBody comparison={data} />}
+            </QueryState>
+          )}
         </div>
       )}
     </Card>

@@ -46,6 +46,18 @@ export function sampleBodyFromEntries(entries: SampleFormEntries): Record<string
   };
 }
 
+const FIELD_WORDS: [RegExp, string][] = [
+  [/\bbins\[\d+\]\./g, ''],
+  [/\bmassMinMsun\b/g, 'the lower mass'],
+  [/\bmassMaxMsun\b/g, 'the upper mass'],
+  [/\bfieldThresholdMG\b/g, 'the field threshold'],
+];
+
+/** A schema message in the form's own words: the input it sits under already says which split it is. */
+export function formWords(message: string): string {
+  return FIELD_WORDS.reduce((text, [pattern, words]) => text.replace(pattern, words), message);
+}
+
 /**
  * The form's schema: the inputs read into a body and checked with the server's own schema.
  * Messages come from describeIssues, so that a range message names both ends ("must be
@@ -59,7 +71,7 @@ export const sampleFormSchema = z.unknown().transform((entries, ctx): CreateSamp
     // The schema's own words for names and refinements; describeIssues for numbers and missing values.
     const numeric = issue.code === 'invalid_type' || ((issue.code === 'too_small' || issue.code === 'too_big') && issue.origin === 'number');
     const [described] = numeric ? describeIssues(createSampleBodySchema, body, [issue]) : [];
-    ctx.addIssue({ code: 'custom', path: issue.path, message: described?.message ?? issue.message });
+    ctx.addIssue({ code: 'custom', path: issue.path, message: formWords(described?.message ?? issue.message) });
   }
   return z.NEVER;
 });

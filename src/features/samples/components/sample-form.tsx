@@ -185,13 +185,10 @@ function BinRow({ index, bin, errors, interval, onRemove }: BinRowProps) {
   const title = `Split ${index + 1}: ${bin.kind === 'setting' ? 'by setting' : 'mass bin'}`;
   return (
     <li className="rounded-md border border-ink-700 bg-ink-900/60 p-4">
-      <fieldset className="relative flex min-w-0 flex-col gap-4">
-        <legend className="min-h-9 pr-28 font-bold text-foam-50">{title}</legend>
-        <Button variant="ghost" size="sm" className="absolute top-0 right-0 text-coral-300" onClick={onRemove}>
-          Remove<span className="sr-only"> split {index + 1}</span>
-        </Button>
+      <fieldset className="flex min-w-0 flex-col gap-4">
+        <legend className="mb-3 font-bold text-foam-50">{title}</legend>
         <input type="hidden" name={name('kind')} value={bin.kind} />
-        <div className={cx('grid gap-4', bin.kind === 'setting' ? 'sm:grid-cols-3' : 'sm:grid-cols-2 xl:grid-cols-4')}>
+        <div className={cx('grid gap-4', bin.kind === 'setting' ? 'sm:grid-cols-3' : 'sm:grid-cols-2')}>
           {bin.kind === 'setting' ? (
             <Select
               label="Setting"
@@ -209,9 +206,14 @@ function BinRow({ index, bin, errors, interval, onRemove }: BinRowProps) {
           <NumberField label="Magnetic" name={name('magnetic')} unit="white dwarfs" defaultValue={initial ? String(initial.magnetic) : ''} error={errors[name('magnetic')]} />
           <NumberField label="Total" name={name('total')} unit="white dwarfs" defaultValue={initial ? String(initial.total) : ''} error={errors[name('total')]} />
         </div>
-        <p className="text-sm text-foam-300 tabular-nums" aria-live="polite">
-          {interval ? countsText(interval) : 'The interval appears when magnetic and total are whole numbers.'}
-        </p>
+        <div className="flex flex-wrap items-center justify-between gap-3">
+          <p className="text-sm text-foam-300 tabular-nums" aria-live="polite">
+            {interval ? countsText(interval) : 'The interval appears when magnetic and total are whole numbers.'}
+          </p>
+          <Button variant="ghost" size="sm" className="text-coral-300" onClick={onRemove}>
+            Remove<span className="sr-only"> split {index + 1}</span>
+          </Button>
+        </div>
       </fieldset>
     </li>
   );

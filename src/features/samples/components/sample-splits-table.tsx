@@ -24,5 +24,10 @@ const columns: TableColumn<SplitRow>[] = [
 /** A sample's splits by setting and by mass bin, each with its own Clopper–Pearson intervals. */
 export function SampleSplitsTable({ bins, caption }: { bins: readonly SampleBin[]; caption: string }) {
   const rows = bins.map((bin, i) => ({ key: String(i), bin }));
-  return <Table caption={caption} columns={columns} rows={rows} rowKey={(r) => r.key} stackOnNarrow />;
+  return (
+    <section aria-label={caption} className="flex flex-col gap-3">
+      <h2 className="text-xl font-bold text-foam-50">{caption}</h2>
+      <Table caption={caption} hideCaption columns={columns} rows={rows} rowKey={(r) => r.key} stackOnNarrow />
+    </section>
+  );
 }

@@ -1,7 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { Sample } from '../../../../shared/contracts/samples.ts';
 import { Badge } from '../../../components/ui/badge.tsx';
-import { buttonClasses } from '../../../components/ui/button.tsx';
 import { Card } from '../../../components/ui/card.tsx';
 import { EmptyState } from '../../../components/ui/empty-state.tsx';
 import { QueryState } from '../../../components/ui/query-state.tsx';
@@ -51,11 +50,6 @@ export function SamplesPanels({ departmentId }: { departmentId: string }) {
             <Card
               title="Your department’s samples"
               description="Counts you recorded. Each shows the observed fraction with its exact (Clopper–Pearson) 68% and 95% intervals."
-              actions={
-                <Link to={paths.samples.new.getHref()} className={buttonClasses({ size: 'sm' })}>
-                  New sample
-                </Link>
-              }
             >
               <Table
                 caption="Your department’s samples"
@@ -101,22 +95,28 @@ function LibraryCard({ entries }: { entries: readonly Sample[] }) {
   );
 }
 
-/** One published constraint with its full citation and provenance. */
-export function LibraryEntry({ entry, headingLevel = 3 }: { entry: Sample; headingLevel?: 2 | 3 }) {
-  const Heading = headingLevel === 2 ? 'h2' : 'h3';
+/** One published constraint with its full citation and provenance; `standalone` on its own page (the h1 names it). */
+export function LibraryEntry({ entry, standalone = false }: { entry: Sample; standalone?: boolean }) {
+  const badges = (
+    <span className="flex flex-wrap gap-2">
+      <Badge tone="info">library · read-only</Badge>
+      <Badge>{sampleKindText(entry.kind)}</Badge>
+    </span>
+  );
   return (
-    <article className="rounded-md border border-ink-700 bg-ink-900/60 p-4">
-      <div className="flex flex-wrap items-start justify-between gap-2">
-        <Heading className="text-lg font-bold text-foam-50">
-          <Link to={paths.samples.detail.getHref(entry.id)} className="text-foam-50">
-            {entry.name}
-          </Link>
-        </Heading>
-        <span className="flex flex-wrap gap-2">
-          <Badge tone="info">library · read-only</Badge>
-          <Badge>{sampleKindText(entry.kind)}</Badge>
-        </span>
-      </div>
+    <article aria-label={standalone ? 'The published constraint' : undefined} className="rounded-md border border-ink-700 bg-ink-900/60 p-4">
+      {standalone ? (
+        badges
+      ) : (
+        <div className="flex flex-wrap items-start justify-between gap-2">
+          <h3 className="text-lg font-bold text-foam-50">
+            <Link to={paths.samples.detail.getHref(entry.id)} className="text-foam-50">
+              {entry.name}
+            </Link>
+          </h3>
+          {badges}
+        </div>
+      )}
       <p className="mt-2 font-bold text-foam-50 tabular-nums">{sampleValueText(entry)}</p>
       <p className="mt-1 text-sm text-foam-300">
         {SAMPLE_SETTING_TEXT[entry.setting]} · field threshold {thresholdText(entry)}

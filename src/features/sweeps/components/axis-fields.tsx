@@ -47,16 +47,11 @@ export function AxisFields({ index, axis, values, resolved, otherPath, pathError
   });
 
   return (
-    <fieldset className="relative flex min-w-0 flex-col gap-4 rounded-lg border border-ink-700 p-4 sm:p-5">
+    <fieldset className="flex min-w-0 flex-col gap-4 rounded-lg border border-ink-700 p-4 sm:p-5">
       <legend className="px-2 text-lg font-bold text-foam-50">
         {index === 0 ? 'Parameter to vary' : 'Second parameter'}
         <span className="font-normal text-foam-300">{index === 0 ? ' (the x axis)' : ' (the y axis of the heat map)'}</span>
       </legend>
-      {onRemove && (
-        <Button variant="ghost" size="sm" className="self-end text-coral-300 sm:absolute sm:top-3 sm:right-3" onClick={onRemove}>
-          Remove the second parameter
-        </Button>
-      )}
       <Select
         label={index === 0 ? 'Parameter' : 'Second parameter'}
         value={axis.path}
@@ -104,6 +99,13 @@ export function AxisFields({ index, axis, values, resolved, otherPath, pathError
           values.error
         )}
       </p>
+      {onRemove && (
+        <div>
+          <Button variant="ghost" size="sm" className="text-coral-300" onClick={onRemove}>
+            Remove the second parameter
+          </Button>
+        </div>
+      )}
     </fieldset>
   );
 }

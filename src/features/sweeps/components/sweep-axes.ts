@@ -19,6 +19,24 @@ export function parameterOf(path: string): SweepableParameter | undefined {
   return SWEEPABLE_PARAMETERS.find((p) => p.path === path);
 }
 
+/** Symbols for tight places (a stacked table row); the full label stays in headers and titles. */
+const SYMBOLS: Record<string, string> = {
+  'companions.multiplier': 'm',
+  'envelope.alpha': 'α_CE',
+  'envelope.lambda': 'λ',
+  'disruption.eta': 'η',
+  'field.thresholdMG': 'B threshold',
+  'giant.reachAU': 'Reach',
+  'giant.reimersEta': 'η_R',
+  'primaries.history.ageGyr': 'Age',
+};
+
+/** "α_CE", "Reach (AU)": a parameter's short name with its unit, if it has one. */
+export function parameterShortTitle(parameter: Pick<SweepableParameter, 'path' | 'label' | 'unit'>): string {
+  const symbol = SYMBOLS[parameter.path] ?? parameter.label;
+  return parameter.unit ? `${symbol} (${parameter.unit})` : symbol;
+}
+
 /** "α_CE (dimensionless)", "Engulfment reach (AU)": how an axis is titled, always with its unit. */
 export function parameterTitle(parameter: Pick<SweepableParameter, 'label' | 'unit'>): string {
   return `${parameter.label} (${parameter.unit || 'dimensionless'})`;

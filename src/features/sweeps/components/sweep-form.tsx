@@ -26,8 +26,6 @@ import {
 
 export interface SweepFormProps {
   departmentId: string;
-  /** Modellers and admins start sweeps; observers see the form switched off. */
-  canStart: boolean;
   initialScenarioId?: string | null;
   onStarted: (id: string) => void;
   /** What the sweep would cost, composed by the route (billing lives in its own feature). */
@@ -45,9 +43,10 @@ const FIELD_ORDER = ['scenarioId', 'name', 'axes.0.path', 'axes.0.values', 'axes
 
 /**
  * Set up a 1-D or 2-D sweep: a scenario, one or two parameters with their values (an even grid
- * or a list), systems per point and the seed every point shares.
+ * or a list), systems per point and the seed every point shares. For modellers and admins (the
+ * server refuses observers).
  */
-export function SweepForm({ departmentId, canStart, initialScenarioId, onStarted, renderCost }: SweepFormProps) {
+export function SweepForm({ departmentId, initialScenarioId, onStarted, renderCost }: SweepFormProps) {
   const ids = useId();
   const scenarios = useSweepScenarios(departmentId);
   const [scenarioId, setScenarioId] = useState(initialScenarioId ?? '');
@@ -153,10 +152,9 @@ export function SweepForm({ departmentId, canStart, initialScenarioId, onStarted
 
   return (
     <form ref={formRef} onSubmit={(e) => void onSubmit(e)} noValidate aria-label="New sweep" className="flex flex-col gap-6">
-      {!canStart && <Alert tone="info" message="Sweeps are started by modellers and admins. You can open and compare the department’s sweeps below." />}
       <Alert message={formError} />
       {scenarios.isError && <Alert message={`The scenarios could not be loaded: ${scenarios.error.message}`} />}
-      <fieldset disabled={!canStart || create.isPending} className="flex min-w-0 flex-col gap-6">
+      <fieldset disabled={create.isPending} className="flex min-w-0 flex-col gap-6">
         <legend className="sr-only">Sweep</legend>
         <div className="grid gap-5 md:grid-cols-2">
           <Select

@@ -1,6 +1,7 @@
 import type { VisualizationSpec } from 'vega-embed';
 import type { SweepDetail } from '../../../../shared/contracts/sweeps.ts';
 import { formatPercentWithError, formatSignificant } from '../../../../shared/engine/stats/format.ts';
+import { titleLines } from '../../../components/charts/response-curve-spec.ts';
 import { chartInk, chartPalette } from '../../../components/ui/chart-palette.ts';
 
 /**
@@ -74,8 +75,8 @@ export function sweepHeatmapSpec({ detail, xTitle, yTitle }: HeatmapInput): Visu
   const xSort = [...detail.axes[0].values].sort((a, b) => a - b).map(tidy);
   // Rows from the largest value at the top, as on a plot with the y axis going up.
   const ySort = [...detail.axes[1].values].sort((a, b) => b - a).map(tidy);
-  const x = { field: 'x', type: 'ordinal' as const, title: xTitle, sort: xSort, axis: { labelAngle: 0 } };
-  const y = { field: 'y', type: 'ordinal' as const, title: yTitle, sort: ySort };
+  const x = { field: 'x', type: 'ordinal' as const, title: titleLines(xTitle), sort: xSort, axis: { labelAngle: 0 } };
+  const y = { field: 'y', type: 'ordinal' as const, title: titleLines(yTitle), sort: ySort };
   const tooltip = [
     { field: 'x', title: xTitle },
     { field: 'y', title: yTitle },
@@ -84,7 +85,8 @@ export function sweepHeatmapSpec({ detail, xTitle, yTitle }: HeatmapInput): Visu
   ];
   const cellSize = Math.max(44, Math.min(72, Math.floor(640 / Math.max(xSort.length, 1))));
   return {
-    width: { step: cellSize * 1.6 },
+    // A few columns share the card's width (a phone too); many get fixed cells and the chart scrolls.
+    ...(xSort.length > 6 ? { width: { step: cellSize * 1.6 } } : {}),
     height: { step: cellSize },
     data: { values: cells },
     encoding: { x, y },
@@ -95,9 +97,9 @@ export function sweepHeatmapSpec({ detail, xTitle, yTitle }: HeatmapInput): Visu
           color: {
             field: 'fraction',
             type: 'quantitative',
-            title: 'Predicted magnetic fraction (% of white dwarfs)',
+            title: ['Predicted magnetic fraction', '(% of white dwarfs)'],
             scale: { domain, range: [...FRACTION_RAMP], interpolate: 'lab' },
-            legend: { format: '.1~%', orient: 'bottom', direction: 'horizontal', gradientLength: 260 },
+            legend: { format: '.1~%', orient: 'bottom', direction: 'horizontal', gradientLength: 260, titleLimit: 420 },
             condition: { test: 'datum.fraction === null', value: chartInk.grid },
           },
           tooltip,
@@ -110,8 +112,8 @@ export function sweepHeatmapSpec({ detail, xTitle, yTitle }: HeatmapInput): Visu
       },
       {
         transform: [{ filter: "datum.verdict === 'allowed68'" }],
-        mark: { type: 'text', text: '●', align: 'right', baseline: 'top', dx: cellSize * 0.75, dy: -cellSize * 0.45, fontSize: 12 },
-        encoding: { color: { value: chartInk.text } },
+        mark: { type: 'text', text: '●', align: 'center', baseline: 'middle', dy: -cellSize * 0.34, fontSize: 11 },
+        encoding: { color: { condition: { test: "datum.ink === 'dark'", value: chartInk.background }, value: chartInk.text } },
       },
       {
         mark: { type: 'text', fontSize: 13, fontWeight: 700, lineHeight: 16 },

@@ -18,8 +18,9 @@ export function SweepProgress({ departmentId, detail, canCancel, scenarioName }:
   const [confirming, setConfirming] = useState(false);
   const progress = pointsProgress(detail);
   const live = isSweepLive(detail.status);
-  const status = SWEEP_STATUS_TEXT[detail.status];
   const missing = missingPoints(detail);
+  // The server calls a sweep finished once no point is left to run, also when some were cancelled.
+  const status = detail.status === 'finished' && detail.points.some((p) => p.status === 'cancelled') ? { label: 'Stopped early', tone: 'warning' as const } : SWEEP_STATUS_TEXT[detail.status];
   const percent = Math.round(100 * progress.fraction);
 
   return (

@@ -13,7 +13,7 @@ import { Select } from '../../../components/ui/select.tsx';
 import { Spinner } from '../../../components/ui/spinner.tsx';
 import { Table, type TableColumn } from '../../../components/ui/table.tsx';
 import { paths } from '../../../config/paths.ts';
-import { parameterTitle } from './sweep-axes.ts';
+import { parameterShortTitle, parameterTitle } from './sweep-axes.ts';
 import { sweepHeatmapSpec } from './sweep-heatmap-spec.ts';
 import { allowedRangeSentence } from './sweep-text.ts';
 
@@ -127,7 +127,7 @@ function HeatmapView({ detail, tested }: { detail: SweepDetail; tested: boolean 
   const spec = sweepHeatmapSpec({ detail, xTitle: parameterTitle(xAxis), yTitle: parameterTitle(yAxis) });
   return (
     <>
-      <div className="overflow-x-auto">
+      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Heat map (scrolls sideways on narrow screens)">
         <VegaChart
           spec={spec}
           description={`Heat map of the predicted magnetic fraction over ${parameterTitle(xAxis)} (columns) and ${parameterTitle(yAxis)} (rows); each cell gives the fraction with its Monte Carlo error.`}
@@ -136,7 +136,7 @@ function HeatmapView({ detail, tested }: { detail: SweepDetail; tested: boolean 
       </div>
       <p className="mt-3 text-sm text-foam-300">
         Each cell: the predicted fraction ± its Monte Carlo standard error.
-        {tested ? ' A thick outline marks a point the sample allows at 95%; a dot in its corner, one it allows at 68% as well.' : ' Choose a counts sample to mark the points it allows.'}
+        {tested ? ' A thick outline marks a point the sample allows at 95%; a dot above its numbers, one it allows at 68% as well.' : ' Choose a counts sample to mark the points it allows.'}
         {' '}Grey cells have no result yet.
       </p>
     </>
@@ -149,7 +149,13 @@ function PointsTable({ detail, tested }: { detail: SweepDetail; tested: boolean 
     ...detail.axes.map(
       (axis, i): TableColumn<Point> => ({
         id: `axis-${i}`,
-        header: parameterTitle(axis),
+        // The symbol keeps the column narrow; the full name is in the chart, the progress card and the tooltip.
+        header: (
+          <abbr title={parameterTitle(axis)} className="no-underline">
+            {parameterShortTitle(axis)}
+          </abbr>
+        ),
+        stackedLabel: parameterShortTitle(axis),
         align: 'end',
         sortValue: (p) => p.values[i],
         cell: (p) => <span className="tabular-nums">{p.values[i]}</span>,
@@ -163,10 +169,10 @@ function PointsTable({ detail, tested }: { detail: SweepDetail; tested: boolean 
     },
     {
       id: 'fraction',
-      header: 'Predicted fraction ± MC error',
+      header: 'Fraction ± MC error',
       align: 'end',
       sortValue: (p) => p.fraction ?? -1,
-      cell: (p) => <span className="tabular-nums">{p.fraction !== null && p.fractionSe !== null ? formatPercentWithError(p.fraction, p.fractionSe) : '—'}</span>,
+      cell: (p) => <span className="whitespace-nowrap tabular-nums">{p.fraction !== null && p.fractionSe !== null ? formatPercentWithError(p.fraction, p.fractionSe) : '—'}</span>,
     },
     ...(tested
       ? [
@@ -182,14 +188,15 @@ function PointsTable({ detail, tested }: { detail: SweepDetail; tested: boolean 
       align: 'end',
       cell: (p) => (
         <Link to={paths.runs.detail.getHref(p.runId)} className="whitespace-nowrap">
-          Open the run<span className="sr-only"> of point {p.index + 1}</span>
+          Run<span className="sr-only"> of point {p.index + 1}</span>
         </Link>
       ),
     },
   ];
   return (
     <div className="mt-6">
-      <Table caption="Grid points" columns={columns} rows={detail.points} rowKey={(p) => p.runId} initialSort={{ columnId: 'index', direction: 'ascending' }} stackOnNarrow />
+      <h3 className="mb-3 font-bold text-foam-50">Grid points</h3>
+      <Table caption="Grid points" hideCaption columns={columns} rows={detail.points} rowKey={(p) => p.runId} initialSort={{ columnId: 'index', direction: 'ascending' }} stackOnNarrow />
     </div>
   );
 }

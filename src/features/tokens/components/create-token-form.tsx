@@ -1,17 +1,10 @@
-import { z } from 'zod';
-import { createTokenBodySchema } from '../../../../shared/contracts/tokens.ts';
 import { Alert } from '../../../components/ui/alert.tsx';
 import { Button } from '../../../components/ui/button.tsx';
 import { NumberField, TextField } from '../../../components/ui/text-field.tsx';
 import { useSchemaForm } from '../../../hooks/use-schema-form.ts';
-import { parseNumberText } from '../../../lib/number-input.ts';
 import { useCreateToken } from '../api/create-token.ts';
+import { tokenFormSchema } from './token-form-values.ts';
 
-// The form sends text; the request schema wants a number of days or nothing.
-const tokenFormSchema = z.strictObject({
-  name: createTokenBodySchema.shape.name,
-  expiresInDays: z.preprocess((value) => (typeof value === 'string' ? (parseNumberText(value) ?? undefined) : value), createTokenBodySchema.shape.expiresInDays),
-});
 
 export interface CreatedToken {
   name: string;

@@ -33,13 +33,17 @@ export function TokensPanel({ departmentId, userId, departmentName }: { departme
       sortValue: (t) => tokenState(t, now),
       cell: (t) => {
         const state = TOKEN_STATE_TEXT[tokenState(t, now)];
-        return <Badge tone={state.tone}>{state.label}</Badge>;
+        return (
+          <span className="flex flex-wrap items-center gap-2">
+            <Badge tone={state.tone}>{state.label}</Badge>
+            {t.revokedAt && <span className="text-sm whitespace-nowrap text-foam-300">{formatDate(t.revokedAt)}</span>}
+          </span>
+        );
       },
     },
     { id: 'created', header: 'Created', sortValue: (t) => new Date(t.createdAt), cell: (t) => when(t.createdAt, '') },
     { id: 'used', header: 'Last used', sortValue: (t) => (t.lastUsedAt ? new Date(t.lastUsedAt) : new Date(0)), cell: (t) => when(t.lastUsedAt, 'never') },
     { id: 'expires', header: 'Expires', sortValue: (t) => (t.expiresAt ? new Date(t.expiresAt) : new Date(8.64e15)), cell: (t) => when(t.expiresAt, 'never') },
-    { id: 'revoked', header: 'Revoked', sortValue: (t) => (t.revokedAt ? new Date(t.revokedAt) : new Date(0)), cell: (t) => when(t.revokedAt, '—') },
     {
       id: 'actions',
       header: <span className="sr-only">Actions</span>,

@@ -1,0 +1,81 @@
+import { useMemo } from 'react';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
+import { roleAtLeast } from '../../../shared/contracts/roles.ts';
+import { Alert } from '../../components/ui/alert.tsx';
+import { Card } from '../../components/ui/card.tsx';
+import { PageHeader } from '../../components/ui/page-header.tsx';
+import { QueryState } from '../../components/ui/query-state.tsx';
+import { paths } from '../../config/paths.ts';
+import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
+import { RunCostNotice } from '../../features/billing/components/run-cost-notice.tsx';
+import { useCreateScenario } from '../../features/scenarios/api/create-scenario.ts';
+import { useScenarioPresets } from '../../features/scenarios/api/get-scenario-presets.ts';
+import { PresetPicker, type Preset } from '../../features/scenarios/components/preset-picker.tsx';
+import { ScenarioBuilder, type ScenarioSaveInput } from '../../features/scenarios/components/scenario-builder.tsx';
+import { defaultDraft, resolvedDraft } from '../../features/scenarios/components/scenario-draft.ts';
+
+export function Component() {
+  const presets = useScenarioPresets();
+  const [search] = useSearchParams();
+  const presetKey = search.get('preset');
+  return (
+    <>
+      <PageHeader
+        eyebrow={<Link to={paths.scenarios.getHref()}>Scenarios</Link>}
+        title="New scenario"
+        description="Start from an example or from the defaults, change what your study needs, and save it as version 1."
+      />
+      <div className="flex flex-col gap-6">
+        <Card title="Start from" description="The examples shipped with Tidefield, each with the published sources of its numbers.">
+          <QueryState query={presets} loadingLabel="Loading the examples…" errorTitle="The examples could not be loaded">
+            {(data) => <PresetPicker presets={data.presets} chosen={presetKey} />}
+          </QueryState>
+        </Card>
+        {presetKey === null ? (
+          <NewScenarioBuilder key="blank" preset={null} />
+        ) : (
+          <QueryState query={presets} loadingLabel="Opening the example…" errorTitle="The example could not be opened">
+            {(data) => {
+              const preset = data.presets.find((p) => p.key === presetKey);
+              return preset ? (
+                <NewScenarioBuilder key={preset.key} preset={preset} />
+              ) : (
+                <>
+                  <Alert message={`There is no example called “${presetKey}”; the builder starts from the defaults.`} />
+                  <NewScenarioBuilder key="blank" preset={null} />
+                </>
+              );
+            }}
+          </QueryState>
+        )}
+      </div>
+    </>
+  );
+}
+
+function NewScenarioBuilder({ preset }: { preset: Preset | null }) {
+  const me = useSignedInMe();
+  const navigate = useNavigate();
+  const create = useCreateScenario(me.department.id);
+  const baseline = useMemo(
+    () => ({ name: preset?.title ?? '', doc: preset ? resolvedDraft(preset.document) : defaultDraft() }),
+    [preset],
+  );
+
+  async function save({ name, note, document }: ScenarioSaveInput) {
+    const { id } = await create.mutateAsync({ name, document, ...(note ? { note } : {}) });
+    return { message: 'Saved as version 1.', next: () => navigate(paths.scenarios.detail.getHref(id)) };
+  }
+
+  return (
+    <ScenarioBuilder
+      departmentId={me.department.id}
+      readOnly={!roleAtLeast(me.role, 'modeller')}
+      baseline={baseline}
+      isNew
+      saveLabel="Save scenario"
+      onSave={save}
+      renderCost={(systems) => <RunCostNotice departmentId={me.department.id} systems={systems} />}
+    />
+  );
+}
