@@ -12,7 +12,8 @@ import { PROJECT_ROOT } from '../../scripts/mariadb.ts';
 import { startServer, type RunningServer } from '../../server/index.ts';
 import { DEMO_USERS, seedDemo } from '../../server/seed/demo.ts';
 import type { Config } from '../../server/config.ts';
-import { createTestDatabase } from './test-app.ts';
+import { startFakesOnFreePorts } from '../../server/fakes/local-fakes.ts';
+import { TEST_STRIPE_SECRETS, createTestDatabase } from './test-app.ts';
 
 export const ARTIFACTS = path.join(PROJECT_ROOT, 'tests/artifacts');
 export const DEMO_PASSWORD = 'tidefield-demo';
@@ -31,6 +32,9 @@ export interface BrowserStack {
 
 /** `overrides` go last into the server's configuration (e.g. a fixed PORT and the payment and mail stand-ins). */
 export async function startBrowserStack(overrides: Partial<Config> = {}): Promise<BrowserStack> {
+  // Mail goes to a stand-in SMTP server on a free port unless the caller brings its own fakes.
+  const ownFakes = overrides.SMTP_PORT === undefined ? await startFakesOnFreePorts(TEST_STRIPE_SECRETS) : null;
+  if (ownFakes) overrides = { ...ownFakes.config, ...overrides };
   const { config: dbConfig, database, drop } = await createTestDatabase();
   await seedDemo(database.db, DEMO_PASSWORD);
   const server = await startServer({
@@ -72,6 +76,15 @@ export async function startBrowserStack(overrides: Partial<Config> = {}): Promis
       await browser.close();
       await server.stop();
       await drop();
+      await ownFakes?.close();
     },
   };
+}
+
+/** Picks the option of a <select> whose text contains `text` (labels may carry extra detail such as counts). */
+export async function chooseOption(select: import('playwright-core').Locator, text: string): Promise<void> {
+  const option = select.locator('option', { hasText: text }).first();
+  await option.waitFor({ state: 'attached', timeout: 30_000 });
+  const value = await option.getAttribute('value');
+  await select.selectOption(value ?? text);
 }

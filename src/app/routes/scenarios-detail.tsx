@@ -19,6 +19,7 @@ import { useUpdateScenario } from '../../features/scenarios/api/update-scenario.
 import { ScenarioBuilder, type ScenarioSaveInput } from '../../features/scenarios/components/scenario-builder.tsx';
 import { resolvedDraft, type Draft } from '../../features/scenarios/components/scenario-draft.ts';
 import { VersionHistory } from '../../features/scenarios/components/version-history.tsx';
+import { isApiError } from '../../lib/api-client.ts';
 import { formatDateTimeUtc } from '../../lib/format.ts';
 
 export function Component() {
@@ -138,6 +139,7 @@ function ScenarioActions({ scenario, onDeleted, onCloned }: { scenario: Scenario
   const [dialog, setDialog] = useState<'clone' | 'delete' | null>(null);
   const [cloneName, setCloneName] = useState('');
   const cloneError = clone.error ? errorMessage(clone.error) : undefined;
+  const cloneNameError = isApiError(clone.error) && clone.error.field === 'name' ? cloneError : undefined;
   return (
     <>
       <Button
@@ -164,7 +166,7 @@ function ScenarioActions({ scenario, onDeleted, onCloned }: { scenario: Scenario
         title={`Clone ${scenario.name}`}
         confirmLabel="Make the copy"
         pending={clone.isPending}
-        error={clone.isError && !(clone.error as { field?: string }).field ? cloneError : undefined}
+        error={cloneNameError ? undefined : cloneError}
         onConfirm={() => clone.mutate({ id: scenario.id, name: cloneName.trim() }, { onSuccess: ({ id }) => onCloned(id) })}
         onCancel={() => setDialog(null)}
       >
@@ -174,7 +176,7 @@ function ScenarioActions({ scenario, onDeleted, onCloned }: { scenario: Scenario
           value={cloneName}
           maxLength={160}
           onChange={(event) => setCloneName(event.target.value)}
-          error={(clone.error as { field?: string } | null)?.field === 'name' ? cloneError : undefined}
+          error={cloneNameError}
         />
       </ConfirmDialog>
       <ConfirmDialog

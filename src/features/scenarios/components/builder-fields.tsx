@@ -353,12 +353,16 @@ export interface DraftPointsProps {
   columns: readonly [PointColumn, PointColumn];
   /** The point a new row starts with. */
   newPoint: (last: Record<string, unknown> | undefined) => Record<string, unknown>;
-  max: number;
-  min: number;
 }
 
+/** Both point tables of the schema (lifetimes, IFMR) hold 2 to 200 points. */
+const MIN_POINTS = 2;
+const MAX_POINTS = 200;
+
 /** A user table of (x, y) points (a lifetime relation, an IFMR): one row of two numbers per point. */
-export function DraftPoints({ path, label, hint, columns, newPoint, max, min }: DraftPointsProps) {
+export function DraftPoints({ path, label, hint, columns, newPoint }: DraftPointsProps) {
+  const min = MIN_POINTS;
+  const max = MAX_POINTS;
   const { doc, update, messageAt, readOnly } = useBuilder();
   const value = getAt(doc, path);
   const points = (Array.isArray(value) ? value : []) as Record<string, unknown>[];

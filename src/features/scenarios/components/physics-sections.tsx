@@ -61,8 +61,6 @@ export function PrimariesSection() {
             { key: 'massMsun', label: 'Mass', unit: 'Msun' },
             { key: 'lifetimeGyr', label: 'Lifetime', unit: 'Gyr' },
           ]}
-          min={2}
-          max={200}
           newPoint={(last) => ({ massMsun: Number(last?.massMsun ?? 1) * 2, lifetimeGyr: Number(last?.lifetimeGyr ?? 10) / 5 })}
         />
       )}
@@ -79,8 +77,6 @@ export function PrimariesSection() {
             { key: 'initialMsun', label: 'Initial mass', unit: 'Msun' },
             { key: 'finalMsun', label: 'Final mass', unit: 'Msun' },
           ]}
-          min={2}
-          max={200}
           newPoint={(last) => ({ initialMsun: Number(last?.initialMsun ?? 1) + 1, finalMsun: Number(last?.finalMsun ?? 0.5) + 0.1 })}
         />
       )}

@@ -27,6 +27,7 @@ import {
   sameDocument,
   serverErrorTarget,
   setAt,
+  withDefaults,
   type Draft,
   type DraftPath,
 } from './scenario-draft.ts';
@@ -98,11 +99,13 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
   const [saved, setSaved] = useState<string | null>(null);
   const [saving, setSaving] = useState(false);
   const [pendingFocus, setPendingFocus] = useState<string | null>(null);
+  // An empty name is only pointed out once the user has typed in it or tried to save.
+  const [nameTouched, setNameTouched] = useState(false);
 
   const issues = useMemo(() => draftIssues(doc), [doc]);
   const messages = useMemo(() => messagesByField(issues), [issues]);
   const nameCheck = nameSchema.safeParse(name);
-  const nameError = formFieldErrors.name ?? (nameCheck.success ? undefined : atFieldMessage('name', nameCheck.error.issues[0]?.message ?? 'name is required'));
+  const nameError = formFieldErrors.name ?? (nameCheck.success || !nameTouched ? undefined : atFieldMessage('name', nameCheck.error.issues[0]?.message ?? 'name is required'));
   const changed = !sameDocument(doc, baseline.doc) || name !== baseline.name;
 
   // The server's problem first (it decides), then the live ones at other fields.
@@ -150,6 +153,7 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
   async function submit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     if (readOnly || saving) return;
+    setNameTouched(true);
     setSaving(true);
     setFormError(null);
     setFormFieldErrors({});
@@ -165,7 +169,8 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
         documentChanged: !sameDocument(doc, baseline.doc),
         nameChanged: name !== baseline.name,
       });
-      setBaseline({ name, doc });
+      setBaseline({ name: name.trim(), doc });
+      setName(name.trim());
       setNote('');
       setSaved(message);
       if (next) {
@@ -178,8 +183,7 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
       setFormError(`Not saved. ${message}`);
       if (target?.kind === 'document') {
         setServerIssue({ field: target.field, message });
-        setView('form');
-        setPendingFocus(target.field);
+        goTo(target.field);
       } else if (target?.kind === 'form' && (target.field === 'name' || target.field === 'note')) {
         setFormFieldErrors({ [target.field]: atFieldMessage(target.field, message) });
         setPendingFocus(target.field);
@@ -199,8 +203,14 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
     setJsonKey((k) => k + 1);
   }
 
+  function switchView(next: View) {
+    // Back from pasted JSON: show a value in every field the document leaves to its defaults.
+    if (view === 'json' && next === 'form' && !readOnly) setDoc((current) => withDefaults(current));
+    setView(next);
+  }
+
   function goTo(field: string) {
-    setView('form');
+    switchView('form');
     setPendingFocus(field);
   }
 
@@ -224,11 +234,12 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
               error={nameError}
               onChange={(event) => {
                 setName(event.target.value);
+                setNameTouched(true);
                 setFormFieldErrors((e) => ({ ...e, name: undefined }));
                 setSaved(null);
               }}
             />
-            <ViewSwitch view={view} onChange={setView} />
+            <ViewSwitch view={view} onChange={switchView} />
           </div>
           <nav aria-label="Sections of the scenario">
             <ul className="flex flex-wrap gap-2">

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  withDefaults,
   allowedRange,
   allowedText,
   atFieldMessage,
@@ -100,5 +101,21 @@ describe('draft helpers', () => {
 
   it('makes dated seeds', () => {
     expect(newSeed(new Date('2026-03-03T10:00:00Z'), () => 0.5)).toBe('tf-2026-03-03-i000');
+  });
+});
+
+describe('withDefaults', () => {
+  it('fills missing and valid sections and leaves a bad one as it is', () => {
+    const doc = withDefaults({ seed: 'x', companions: { tableId: 't1' }, envelope: { alpha: 50 }, bogus: 1 });
+    expect(doc.seed).toBe('x');
+    expect(doc.companions).toEqual({ multiplier: 1, tableId: 't1' });
+    expect(doc.envelope).toEqual({ alpha: 50 });
+    expect(getAt(doc, ['giant', 'kind'])).toBe('fixedReach');
+    expect(doc.bogus).toBe(1);
+    expect(draftIssues(doc).map((i) => i.field)).toEqual(['envelope.alpha', 'bogus']);
+  });
+
+  it('keeps a missing seed missing, so the form says it is required', () => {
+    expect(withDefaults({}).seed).toBeUndefined();
   });
 });

@@ -108,13 +108,34 @@ export function allowedText(range: AllowedRange | null): string | null {
   return null;
 }
 
-/** The document with every default filled in (what the engine sees), or the draft as it is when it is not valid. */
+/** The document with every default filled in (what the engine sees); for a draft that is not valid, see withDefaults. */
 export function resolvedDraft(doc: unknown): Draft {
   try {
     return parseScenario(doc) as unknown as Draft;
   } catch {
-    return (isRecord(doc) && !Array.isArray(doc) ? doc : {}) as Draft;
+    return withDefaults(doc);
   }
+}
+
+/**
+ * Fills in the defaults of a draft that may not be valid, one top-level section at a time:
+ * a missing section takes its default, a valid one gets its own defaults filled by the schema,
+ * and one with a problem is left as it is (so the problem stays where the user can see it).
+ * The form then shows a value in every field of a pasted partial document.
+ */
+export function withDefaults(doc: unknown): Draft {
+  const draft = (isRecord(doc) && !Array.isArray(doc) ? doc : {}) as Draft;
+  const defaults = parseScenario({ seed: 'defaults' }) as unknown as Draft;
+  const out: Draft = {};
+  for (const key of new Set([...Object.keys(defaults), ...Object.keys(draft)])) {
+    if (draft[key] === undefined) {
+      if (key !== 'seed') out[key] = defaults[key];
+      continue;
+    }
+    const alone = scenarioSchema.safeParse({ seed: 'defaults', [key]: draft[key] });
+    out[key] = alone.success && key !== 'seed' ? (alone.data as unknown as Draft)[key] : draft[key];
+  }
+  return out;
 }
 
 /** A new seed: readable, dated, and different each time ("tf-2026-03-03-k7q2"). */

@@ -64,7 +64,7 @@ export function ScenarioJsonView({ doc, onChange, readOnly, fileName }: Scenario
           Download the JSON
         </Button>
         {!readOnly && (
-          <Button variant="ghost" size="sm" onClick={() => setText(draftJson(doc))}>
+          <Button variant="ghost" size="sm" disabled={Boolean(parseError)} onClick={() => setText(draftJson(doc))}>
             Tidy the text
           </Button>
         )}

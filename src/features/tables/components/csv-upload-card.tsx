@@ -232,7 +232,7 @@ function PreviewReport({ rowCount, readyCount, problems, lines }: PreviewReportP
 function PreviewTable({ preview }: { preview: CsvPreview }) {
   const shown = linesToShow(preview.lines, PREVIEW_LINES);
   return (
-    <div role="region" aria-labelledby="csv-preview-caption" tabIndex={0} className="overflow-x-auto rounded-md border border-ink-700">
+    <div role="region" aria-labelledby="csv-preview-caption" tabIndex={0} className="relative overflow-x-auto rounded-md border border-ink-700">
       <table className="w-full border-collapse text-left text-sm">
         <caption id="csv-preview-caption" className="px-4 py-3 text-left font-bold text-foam-50">
           The file as read{shown.length < preview.lines.length ? ` (${shown.length} of ${preview.lines.length} lines: every line with a problem, then the first)` : ''}

@@ -195,7 +195,7 @@ export function RowsEditor({ departmentId, table, readOnly }: RowsEditorProps) {
         </section>
       )}
 
-      <div role="region" aria-labelledby="rows-caption" tabIndex={0} className="overflow-x-auto rounded-md border border-ink-700">
+      <div role="region" aria-labelledby="rows-caption" tabIndex={0} className="relative overflow-x-auto rounded-md border border-ink-700">
         <table role="table" className="w-full border-collapse text-left max-md:block">
           <caption id="rows-caption" className="px-4 py-3 text-left font-bold text-foam-50 max-md:block">
             Rows {rows.length === 0 ? '' : `${first + 1}–${first + visible.length} `}of {rows.length}
