@@ -1,7 +1,10 @@
 import type { NextFunction, Request, RequestHandler, Response, Router } from 'express';
 import type { z } from 'zod';
 import { roleAtLeast, type Role } from '../../shared/contracts/roles.ts';
-import { AppError, forbidden, unauthenticated } from './errors.ts';
+import { describeIssues } from '../../shared/contracts/schema-issues.ts';
+import { AppError, badRequest, forbidden, unauthenticated } from './errors.ts';
+
+const ZOD_DEFAULT_MESSAGE = /^(Too (big|small)|Invalid (input|option|element|key|value|union)|Expected)/;
 import type { RequestAuth } from '../modules/auth/auth.context.ts';
 
 /**
@@ -69,9 +72,21 @@ export class RouteRegistry {
 function parsePart(schema: z.ZodType | undefined, value: unknown, where: 'body' | 'query' | 'params'): unknown {
   // A missing body is validated as undefined ("body is required"); missing params/query as {}.
   if (!schema) return undefined;
-  const result = schema.safeParse(value ?? (where === 'body' ? undefined : {}));
-  if (!result.success) throw result.error;
-  return result.data;
+  const input = value ?? (where === 'body' ? undefined : {});
+  const result = schema.safeParse(input, { reportInput: true });
+  if (result.success) return result.data;
+  const first = result.error.issues[0];
+  // zod's own wording ("Too big: expected number to be <=1") does not say which field or range:
+  // rephrase it from the schema's bounds; messages written in the contracts pass through as they are.
+  if (first && first.code !== 'unrecognized_keys' && ZOD_DEFAULT_MESSAGE.test(first.message)) {
+    const [described] = describeIssues(schema, input, [first]);
+    const field = first.path.map(String).join('.');
+    if (described && field) {
+      const message = described.message.startsWith(described.field) ? field + described.message.slice(described.field.length) : described.message;
+      throw badRequest(message, field);
+    }
+  }
+  throw result.error;
 }
 
 export function requireAccess(access: Access): RequestHandler {

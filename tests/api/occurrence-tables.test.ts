@@ -88,6 +88,7 @@ describe('occurrence table CSV', () => {
     expect(edited.body).toMatchObject({ rowCount: 1, rows: [{ occurrence: 0.2 }] });
     const bad = await owner.agent.patch(`/api/occurrence-tables/${created.body.id}`).send({ rows: [{ ...rows[0], occurrence: 2 }] }).expect(400);
     expect(bad.body.error.field).toBe('rows.0.occurrence');
+    expect(bad.body.error.message).toBe('rows.0.occurrence must be between 0 and 1 (got 2)');
     expect((await owner.agent.get(`/api/occurrence-tables/${created.body.id}`).expect(200)).body.rows[0].occurrence).toBe(0.2);
   });
 });

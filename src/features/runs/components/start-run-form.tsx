@@ -56,12 +56,16 @@ export function StartRunForm({ departmentId, role, initialScenarioId, onSystemsC
   });
 
   // A newly chosen scenario brings its own systems and seed as the defaults.
+  // Only when the chosen scenario (or its version) changes: a background refetch of the same
+  // scenario must not overwrite what the user has typed.
   const resolved = scenario.data?.resolved as { systems?: number; seed?: string; description?: string } | undefined;
+  const defaultsKey = scenario.data ? `${scenario.data.id}@${scenario.data.currentVersion}` : null;
   useEffect(() => {
-    if (!resolved) return;
+    if (!defaultsKey || !resolved) return;
     setSystemsText(resolved.systems === undefined ? '' : String(resolved.systems));
     setSeedText(resolved.seed ?? '');
-  }, [resolved]);
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the scenario, not the object identity
+  }, [defaultsKey]);
 
   useEffect(() => onSystemsChange(validSystems(systemsText)), [systemsText, onSystemsChange]);
 

@@ -1,0 +1,97 @@
+/**
+ * The modeller's whole job in the browser: build a scenario from a preset, save it, run it,
+ * see the result charts and download the CSV. And bad values: the server's message lands at
+ * the field that caused it.
+ */
+import { readFileSync } from 'node:fs';
+import type { Locator } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startBrowserStack, type BrowserStack } from '../support/browser.ts';
+
+let stack: BrowserStack;
+
+/** The text of everything an input's aria-describedby points at (its hint and its error). */
+async function describedText(input: Locator): Promise<string> {
+  const ids = ((await input.getAttribute('aria-describedby')) ?? '').split(/\s+/).filter(Boolean);
+  const texts = await Promise.all(ids.map((id) => input.page().locator(`[id="${id}"]`).textContent()));
+  return texts.join(' ');
+}
+beforeAll(async () => {
+  stack = await startBrowserStack();
+});
+afterAll(() => stack?.stop());
+
+describe('modeller', () => {
+  it('builds a scenario from a preset, runs it, sees the charts and exports CSV', async () => {
+    const { page, context } = await stack.newPage();
+    try {
+      await stack.signIn(page, 'modeller');
+      await page.goto('/scenarios/new');
+      await page.getByRole('navigation', { name: 'Start from' }).getByRole('link', { name: /Baseline, fixed engulfment reach/ }).click();
+      await page.getByLabel('Scenario name').fill('Browser test baseline');
+      await page.getByLabel('Efficiency α_CE').fill('0.5');
+      await page.getByRole('button', { name: 'Save scenario' }).click();
+      await page.waitForURL(/\/scenarios\/[A-Za-z0-9_-]{8,}$/);
+      await stack.screenshot(page, 'modeller-scenario-saved');
+
+      await page.getByRole('link', { name: 'Run this scenario' }).click();
+      await page.waitForURL(/\/runs\/new/);
+      // The form fills systems and seed from the scenario once it has loaded; type after that.
+      const systems = page.getByLabel('Systems');
+      await expect.poll(() => systems.inputValue(), { timeout: 20_000 }).not.toBe('');
+      await systems.fill('300000');
+      await page.getByRole('button', { name: 'Start the run' }).click();
+      await page.waitForURL(/\/runs\/[A-Za-z0-9_-]{8,}$/);
+
+      // The finished run: at least four charts drawn from the run's data.
+      const exportLink = page.getByRole('link', { name: 'Download CSV' });
+      await exportLink.waitFor({ timeout: 120_000 });
+      await expect.poll(() => page.locator('figure svg').count(), { timeout: 60_000 }).toBeGreaterThanOrEqual(4);
+      await stack.screenshot(page, 'modeller-run-result');
+
+      const [download] = await Promise.all([page.waitForEvent('download'), exportLink.click()]);
+      const csv = readFileSync((await download.path())!, 'utf8');
+      expect(csv.split('\n')[0]).toBe('section,key,value,se,lo,hi,extra');
+      expect(csv).toMatch(/^counts,primaries,300000$/m);
+    } finally {
+      await context.close();
+    }
+  });
+
+  it("shows the server's message at the field for a bad value", async () => {
+    const { page, context } = await stack.newPage();
+    try {
+      await stack.signIn(page, 'modeller');
+      await page.goto('/scenarios/new?preset=baseline-fixed-reach');
+      await page.getByLabel('Scenario name').fill('Too efficient');
+      const alpha = page.getByLabel('Efficiency α_CE');
+      await alpha.fill('50');
+      await page.getByRole('button', { name: 'Save scenario' }).click();
+      // The server answers 400 naming document.envelope.alpha; the form shows it at that input.
+      await page.getByText(/Not saved/).first().waitFor({ timeout: 20_000 });
+      await expect.poll(() => page.getByText(/Not saved/).first().textContent()).toMatch(/envelope\.alpha/);
+      expect(await describedText(alpha)).toMatch(/between 0\.01 and 10 \(got 50\)/);
+      expect(await alpha.getAttribute('aria-invalid')).toBe('true');
+      await stack.screenshot(page, 'modeller-bad-value-at-field');
+    } finally {
+      await context.close();
+    }
+  });
+
+  it("shows a server-only rule at the field: an observer's run size", async () => {
+    const { page, context } = await stack.newPage();
+    try {
+      await stack.signIn(page, 'observer');
+      await page.goto('/runs/new');
+      await page.getByLabel('Scenario').selectOption({ index: 1 });
+      await page.getByLabel('Systems').fill('5000000');
+      await page.getByRole('button', { name: 'Start the run' }).click();
+      const systems = page.getByLabel('Systems');
+      await expect.poll(() => describedText(systems), { timeout: 20_000 }).toMatch(/Observers may start runs of at most 1,000,000 systems/);
+      expect(await systems.getAttribute('aria-invalid')).toBe('true');
+      await stack.screenshot(page, 'observer-systems-limit-at-field');
+    } finally {
+      await context.close();
+    }
+  });
+});
