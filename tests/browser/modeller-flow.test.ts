@@ -36,11 +36,14 @@ describe('modeller', () => {
 
       await page.getByRole('link', { name: 'Run this scenario' }).click();
       await page.waitForURL(/\/runs\/new/);
-      // The form fills systems and seed from the scenario once it has loaded; type after that.
-      const systems = page.getByLabel('Systems');
+      // Scope to the run form: the URL changes before the lazily loaded page replaces the builder,
+      // whose own "Systems" field is still on screen for a moment. The form fills systems and
+      // seed from the scenario once that has loaded; type after that.
+      const runForm = page.getByRole('form', { name: 'Start a run' });
+      const systems = runForm.getByLabel('Systems');
       await expect.poll(() => systems.inputValue(), { timeout: 20_000 }).not.toBe('');
       await systems.fill('300000');
-      await page.getByRole('button', { name: 'Start the run' }).click();
+      await runForm.getByRole('button', { name: 'Start the run' }).click();
       await page.waitForURL(/\/runs\/[A-Za-z0-9_-]{8,}$/);
 
       // The finished run: at least four charts drawn from the run's data.
@@ -83,10 +86,12 @@ describe('modeller', () => {
     try {
       await stack.signIn(page, 'observer');
       await page.goto('/runs/new');
-      await page.getByLabel('Scenario').selectOption({ index: 1 });
-      await page.getByLabel('Systems').fill('5000000');
-      await page.getByRole('button', { name: 'Start the run' }).click();
-      const systems = page.getByLabel('Systems');
+      const runForm = page.getByRole('form', { name: 'Start a run' });
+      await runForm.getByLabel('Scenario').selectOption({ index: 1 });
+      const systems = runForm.getByLabel('Systems');
+      await expect.poll(() => systems.inputValue(), { timeout: 20_000 }).not.toBe('');
+      await systems.fill('5000000');
+      await runForm.getByRole('button', { name: 'Start the run' }).click();
       await expect.poll(() => describedText(systems), { timeout: 20_000 }).toMatch(/Observers may start runs of at most 1,000,000 systems/);
       expect(await systems.getAttribute('aria-invalid')).toBe('true');
       await stack.screenshot(page, 'observer-systems-limit-at-field');
