@@ -9,17 +9,14 @@ import { startLocalFakes } from '../server/fakes/local-fakes.ts';
 import { startServer } from '../server/index.ts';
 import { countDepartments } from '../server/modules/departments/departments.repository.ts';
 import { seedDemo } from '../server/seed/demo.ts';
-import { DEFAULT_STATE_DIR, PROJECT_ROOT, devDbPort, ensureMariaDb } from './mariadb.ts';
+import { PROJECT_ROOT, ensureDevDatabase } from './mariadb.ts';
 
-const conn = await ensureMariaDb({ stateDir: DEFAULT_STATE_DIR, port: devDbPort(), database: 'tidefield', appUser: 'tidefield' });
+const { env: dbEnv } = await ensureDevDatabase();
 const config = loadConfig({
   NODE_ENV: 'development',
   ...process.env,
   CLIENT_DIST: '.data/no-client-in-dev',
-  DB_PORT: String(conn.port),
-  DB_USER: conn.user,
-  DB_PASSWORD: conn.password,
-  DB_NAME: conn.database,
+  ...dbEnv,
 });
 const fakes = await startLocalFakes(config, `${publicBaseUrl(config)}/api/billing/webhook`);
 const running = await startServer(config);

@@ -265,11 +265,23 @@ export function devDbPort(): number {
   return port;
 }
 
+/**
+ * Starts (or reuses) the development database of .data/ and returns it as the server's DB_*
+ * settings, ready to spread into loadConfig's input.
+ */
+export async function ensureDevDatabase(): Promise<{ conn: DbConnection; env: Record<string, string> }> {
+  const conn = await ensureMariaDb({ stateDir: DEFAULT_STATE_DIR, port: devDbPort(), database: 'tidefield', appUser: 'tidefield' });
+  return {
+    conn,
+    env: { DB_HOST: conn.host, DB_PORT: String(conn.port), DB_USER: conn.user, DB_PASSWORD: conn.password, DB_NAME: conn.database },
+  };
+}
+
 async function main(command: string | undefined) {
   const stateDir = DEFAULT_STATE_DIR;
   switch (command) {
     case 'start': {
-      const conn = await ensureMariaDb({ stateDir, port: devDbPort(), database: 'tidefield', appUser: 'tidefield' });
+      const { conn } = await ensureDevDatabase();
       console.log(`MariaDB ready: mysql://${conn.user}@${conn.host}:${conn.port}/${conn.database} (password in .data/db-credentials.json)`);
       break;
     }

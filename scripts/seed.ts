@@ -3,10 +3,10 @@ import { connectDatabase, migrateDatabase } from '../server/db/client.ts';
 import { loadConfig } from '../server/config.ts';
 import { DEMO_DEPARTMENT, seedDemo } from '../server/seed/demo.ts';
 import { ensurePublishedLibrary } from '../server/modules/samples/samples.service.ts';
-import { DEFAULT_STATE_DIR, devDbPort, ensureMariaDb } from './mariadb.ts';
+import { ensureDevDatabase } from './mariadb.ts';
 
-const conn = await ensureMariaDb({ stateDir: DEFAULT_STATE_DIR, port: devDbPort(), database: 'tidefield', appUser: 'tidefield' });
-const config = loadConfig({ ...process.env, DB_PORT: String(conn.port), DB_PASSWORD: conn.password, DB_USER: conn.user, DB_NAME: conn.database });
+const { env: dbEnv } = await ensureDevDatabase();
+const config = loadConfig({ ...process.env, ...dbEnv });
 const database = connectDatabase(config);
 try {
   await migrateDatabase(database);

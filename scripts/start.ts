@@ -11,21 +11,16 @@ import { startServer } from '../server/index.ts';
 import { countDepartments } from '../server/modules/departments/departments.repository.ts';
 import { DEMO_DEPARTMENT, DEMO_USERS, seedDemo } from '../server/seed/demo.ts';
 import { buildClientIfStale } from './client-build.ts';
-import { DEFAULT_STATE_DIR, devDbPort, ensureMariaDb } from './mariadb.ts';
+import { ensureDevDatabase } from './mariadb.ts';
 
 async function main() {
-  const dbPort = devDbPort();
-  const conn = await ensureMariaDb({ stateDir: DEFAULT_STATE_DIR, port: dbPort, database: 'tidefield', appUser: 'tidefield' });
+  const { conn, env: dbEnv } = await ensureDevDatabase();
   if (process.env.SKIP_CLIENT_BUILD !== '1') buildClientIfStale();
 
   const config = loadConfig({
     NODE_ENV: 'production',
     ...process.env,
-    DB_HOST: conn.host,
-    DB_PORT: String(conn.port),
-    DB_USER: conn.user,
-    DB_PASSWORD: conn.password,
-    DB_NAME: conn.database,
+    ...dbEnv,
   });
   const fakes = await startLocalFakes(config, `${publicBaseUrl(config)}/api/billing/webhook`);
   const running = await startServer(config).catch(async (error: unknown) => {

@@ -7,6 +7,8 @@ import type { Config } from '../config.ts';
 import * as schema from './schema.ts';
 
 export type Db = MySql2Database<typeof schema>;
+/** A transaction handle, as passed to db.transaction's callback. */
+export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
 export interface Database {
   db: Db;

@@ -1,14 +1,12 @@
 import { and, count, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { LedgerKind } from '../../../shared/contracts/billing.ts';
-import type { Db } from '../../db/client.ts';
+import type { Db, Tx } from '../../db/client.ts';
 import { isDuplicateKey } from '../../lib/errors.ts';
 import { users } from '../auth/users.table.ts';
 import type { DbOrTx } from '../departments/departments.repository.ts';
 import { departments } from '../departments/departments.table.ts';
 import { runs } from '../runs/runs.table.ts';
 import { billingAccounts, creditCheckouts, creditLedger, paymentEvents, type BillingAccountRow, type CheckoutRow } from './billing.table.ts';
-
-export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
 /**
  * Takes the department's account row lock, creating the row on first use. The first statement

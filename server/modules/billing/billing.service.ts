@@ -3,7 +3,7 @@ import type { Logger } from 'pino';
 import type { BalanceResponse, Checkout, LedgerEntry, QuoteResponse } from '../../../shared/contracts/billing.ts';
 import { allowancePeriod, CREDIT_PACKS, findPack, quoteRun, SYSTEMS_PER_CREDIT } from '../../../shared/contracts/pricing.ts';
 import { publicBaseUrl, type Config } from '../../config.ts';
-import type { Db } from '../../db/client.ts';
+import type { Db, Tx } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { AppError, badRequest, isDuplicateKey } from '../../lib/errors.ts';
 import { recordAudit } from '../audit/audit.service.ts';
@@ -28,7 +28,6 @@ import {
   updateAccount,
   updateCheckout,
   type NewLedgerEntry,
-  type Tx,
 } from './billing.repository.ts';
 import type { BillingAccountRow, CheckoutRow } from './billing.table.ts';
 import { badSignature, checkoutNotFound, insufficientCredit, notRawWebhook, unknownPack, wouldOverdraw } from './billing.errors.ts';

@@ -1,10 +1,9 @@
 import { and, asc, eq, sql } from 'drizzle-orm';
 import type { Role } from '../../../shared/contracts/roles.ts';
-import type { Db } from '../../db/client.ts';
+import type { Db, Tx } from '../../db/client.ts';
 import { users } from '../auth/users.table.ts';
 import { departments, memberships } from './departments.table.ts';
 
-type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 export type DbOrTx = Db | Tx;
 
 export async function membershipsOfUser(db: DbOrTx, userId: string) {

@@ -9,7 +9,7 @@ import {
   type InvitationPreview,
 } from '../../../shared/contracts/invitations.ts';
 import { publicBaseUrl, type Config } from '../../config.ts';
-import type { Db } from '../../db/client.ts';
+import type { Db, Tx } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { AppError, badRequest, conflict, forbidden, notFound } from '../../lib/errors.ts';
 import { hashLinkToken, linkExpired, linkUnknown, linkUsed, newLinkToken } from '../account/link-token.ts';
@@ -76,7 +76,7 @@ export function createInvitationsService(deps: { db: Db; config: Config; mailer:
   const base = publicBaseUrl(config);
 
   /** Inside a transaction: locks the invitation row, checks it again, adds the membership, marks it used. */
-  async function consume(tx: Parameters<Parameters<Db['transaction']>[0]>[0], invitationId: string, userId: string) {
+  async function consume(tx: Tx, invitationId: string, userId: string) {
     const [row] = await tx.select().from(invitations).where(eq(invitations.id, invitationId)).for('update');
     const refused = refusal(row);
     if (refused) throw refused;

@@ -4,7 +4,7 @@ import { parseScenario, type Scenario } from '../../../shared/contracts/scenario
 import { listPriceCredits, OBSERVER_MAX_SYSTEMS } from '../../../shared/contracts/pricing.ts';
 import { roleAtLeast } from '../../../shared/contracts/roles.ts';
 import { impliedMultiplier } from '../../../shared/engine/stats/implied-occurrence.ts';
-import type { Db } from '../../db/client.ts';
+import type { Db, Tx } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { ENGINE_VERSION, planChunks, scenarioHash } from '../../engine.ts';
 import { AppError, badRequest, conflict, forbidden, notFound } from '../../lib/errors.ts';
@@ -43,7 +43,7 @@ function requireAllWhiteDwarfs(sample: { setting: string }, field: string) {
 }
 
 export interface RunBilling {
-  reserve(tx: Parameters<Parameters<Db['transaction']>[0]>[0], run: { id: string; departmentId: string; userId: string; systems: number }): Promise<{ costCredits: number }>;
+  reserve(tx: Tx, run: { id: string; departmentId: string; userId: string; systems: number }): Promise<{ costCredits: number }>;
 }
 
 /** Charges nothing; records the list price (tests that inject their own billing). */
@@ -130,12 +130,12 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
     auth: RequestAuth,
     source: { scenarioId: string; scenarioVersion: number; scenarioName: string },
     snapshot: Scenario,
-    extra: { sweepId?: string; sweepPointIndex?: number; tx?: Parameters<Parameters<Db['transaction']>[0]>[0] } = {},
+    extra: { sweepId?: string; sweepPointIndex?: number; tx?: Tx } = {},
   ): Promise<string> {
     const department = departmentOf(auth);
     checkSize(auth, snapshot.systems);
     const id = newId();
-    const insert = async (tx: Parameters<Parameters<Db['transaction']>[0]>[0]) => {
+    const insert = async (tx: Tx) => {
       const { costCredits } = await billing.reserve(tx, { id, departmentId: department.id, userId: auth.user.id, systems: snapshot.systems });
       await insertRun(tx, {
         id,

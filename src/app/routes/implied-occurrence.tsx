@@ -5,9 +5,9 @@ import { PageHeader } from '../../components/ui/page-header.tsx';
 import { paths } from '../../config/paths.ts';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
 import { RunCostNotice } from '../../features/billing/components/run-cost-notice.tsx';
-import { useImpliedSamples } from '../../features/implied/api/get-implied-samples.ts';
 import { ImpliedAnswer } from '../../features/implied/components/implied-answer.tsx';
 import { ImpliedForm } from '../../features/implied/components/implied-form.tsx';
+import { useSampleChoices } from '../../lib/api/scenario-choices.ts';
 
 const SETTING_WORDS = { single: 'single white dwarfs', detachedCompanion: 'white dwarfs with a detached companion' } as const;
 
@@ -17,7 +17,7 @@ export function Component() {
   const [search] = useSearchParams();
   const runId = search.get('run');
   const sampleId = search.get('sample');
-  const samples = useImpliedSamples(me.department.id);
+  const samples = useSampleChoices(me.department.id);
   const sample = samples.data?.samples.find((s) => s.id === sampleId);
   const settingCaveat =
     sample && sample.setting !== 'all'

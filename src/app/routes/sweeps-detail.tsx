@@ -5,10 +5,9 @@ import { QueryState } from '../../components/ui/query-state.tsx';
 import { paths } from '../../config/paths.ts';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
 import { useSweep } from '../../features/sweeps/api/get-sweep.ts';
-import { useSweepSamples } from '../../features/sweeps/api/get-sweep-samples.ts';
-import { useSweepScenarios } from '../../features/sweeps/api/get-sweep-scenarios.ts';
 import { SweepProgress } from '../../features/sweeps/components/sweep-progress.tsx';
 import { SweepResults } from '../../features/sweeps/components/sweep-results.tsx';
+import { useSampleChoices, useScenarioChoices } from '../../lib/api/scenario-choices.ts';
 
 export function Component() {
   const me = useSignedInMe();
@@ -16,8 +15,8 @@ export function Component() {
   const [search, setSearch] = useSearchParams();
   const sampleId = search.get('sample');
   const sweep = useSweep(me.department.id, id, sampleId);
-  const samples = useSweepSamples(me.department.id);
-  const scenarios = useSweepScenarios(me.department.id);
+  const samples = useSampleChoices(me.department.id);
+  const scenarios = useScenarioChoices(me.department.id);
 
   return (
     <QueryState query={sweep} loadingLabel="Loading the sweep…" errorTitle="The sweep could not be loaded">

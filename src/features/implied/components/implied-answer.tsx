@@ -16,8 +16,9 @@ import { paths } from '../../../config/paths.ts';
 import { ApiError } from '../../../lib/api-client.ts';
 import { useImpliedOccurrence, type ImpliedAnswerResponse } from '../api/get-implied-occurrence.ts';
 import { useImpliedRun } from '../api/get-implied-run.ts';
-import { useImpliedScenario } from '../api/get-implied-scenario.ts';
 import { curveEnds, etaText, impliedSentence, occurrenceRows, scaledOccurrence, type OccurrenceRow } from './implied-text.ts';
+import { useScenarioChoice } from '../../../lib/api/scenario-choices.ts';
+import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
 
 const X_TITLE = 'Companion-occurrence multiplier m (dimensionless)';
 const Y_TITLE = 'Predicted magnetic fraction (% of white dwarfs)';
@@ -63,9 +64,7 @@ function RunProgress({ run }: { run: RunSummary }) {
       <p className="font-bold text-foam-50" aria-live="polite">
         {words}
       </p>
-      <div role="progressbar" aria-label="Run progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={percent} aria-valuetext={words} className="h-3 overflow-hidden rounded-full bg-ink-900">
-        <div className="h-full rounded-full bg-lantern-400 transition-[width] duration-500" style={{ width: `${percent}%` }} />
-      </div>
+      <ProgressBar label="Run progress" value={percent} max={100} valueText={words} />
       <p className="text-sm text-foam-400">
         {run.systems.toLocaleString('en-US')} systems of “{run.scenarioName}”, seed “{run.seed}”. This page follows the run; you may also leave and come back through its link.
       </p>
@@ -127,7 +126,7 @@ function AnswerBody({ departmentId, run, answer, settingCaveat }: { departmentId
 
 /** What m multiplies: every row of the scenario's occurrence table, shown at the best fit and the 68% ends. */
 function MultiplierRows({ departmentId, scenarioId, answer, format }: { departmentId: string; scenarioId: string; answer: ImpliedAnswerResponse; format: (x: number) => string }) {
-  const scenario = useImpliedScenario(departmentId, scenarioId);
+  const scenario = useScenarioChoice(departmentId, scenarioId);
   const rows = occurrenceRows(scenario.data?.resolved);
   const lead = (
     <p className="text-foam-300">

@@ -8,10 +8,8 @@ import { Select } from '../../../components/ui/select.tsx';
 import { NumberField, TextField } from '../../../components/ui/text-field.tsx';
 import { useSchemaForm } from '../../../hooks/use-schema-form.ts';
 import { parseNumberText } from '../../../lib/number-input.ts';
-import { useImpliedSamples } from '../api/get-implied-samples.ts';
-import { useImpliedScenario } from '../api/get-implied-scenario.ts';
-import { useImpliedScenarios } from '../api/get-implied-scenarios.ts';
 import { useStartImpliedOccurrence } from '../api/start-implied-occurrence.ts';
+import { useSampleChoices, useScenarioChoice, useScenarioChoices } from '../../../lib/api/scenario-choices.ts';
 
 export interface ImpliedFormProps {
   departmentId: string;
@@ -43,12 +41,12 @@ function formSchema(limitSystems: boolean, scenarioSystems: number | null) {
 
 /** The observer's question: a scenario, a sample with counts, and how many systems to draw. */
 export function ImpliedForm({ departmentId, limitSystems, onStarted, renderCost }: ImpliedFormProps) {
-  const scenarios = useImpliedScenarios(departmentId);
-  const samples = useImpliedSamples(departmentId);
+  const scenarios = useScenarioChoices(departmentId);
+  const samples = useSampleChoices(departmentId);
   const [scenarioId, setScenarioId] = useState('');
   const [systems, setSystems] = useState('');
   const [systemsTouched, setSystemsTouched] = useState(false);
-  const scenario = useImpliedScenario(departmentId, scenarioId || null);
+  const scenario = useScenarioChoice(departmentId, scenarioId || null);
   const scenarioSystems = typeof scenario.data?.resolved.systems === 'number' ? scenario.data.resolved.systems : null;
   const start = useStartImpliedOccurrence();
   const schema = useMemo(() => formSchema(limitSystems, scenarioSystems), [limitSystems, scenarioSystems]);

@@ -8,6 +8,7 @@ import { Spinner } from '../../../components/ui/spinner.tsx';
 import { useCancelRun } from '../api/cancel-run.ts';
 import type { ProgressSource } from '../hooks/use-live-run.ts';
 import { formatCount, formatDuration } from './run-text.ts';
+import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
 
 export interface RunProgressCardProps {
   departmentId: string;
@@ -57,17 +58,14 @@ export function RunProgressCard({ departmentId, run, source, canCancel }: RunPro
             {etaText(run)}
           </p>
         </div>
-        <div
-          role="progressbar"
-          aria-label="Run progress"
-          aria-valuemin={0}
-          aria-valuemax={100}
-          aria-valuenow={percent}
-          aria-valuetext={`${label}, ${run.chunksDone} of ${run.chunkCount} chunks`}
-          className="h-4 overflow-hidden rounded-full border border-ink-500 bg-ink-900"
-        >
-          <div className="h-full rounded-full bg-lantern-400 transition-[width] duration-500" style={{ width: `${Math.max(percent, run.status === 'running' ? 1 : 0)}%` }} />
-        </div>
+        <ProgressBar
+          label="Run progress"
+          value={percent}
+          max={100}
+          valueText={`${label}, ${run.chunksDone} of ${run.chunkCount} chunks`}
+          minimumPercent={run.status === 'running' ? 1 : 0}
+          className="h-4"
+        />
         <p className="flex flex-wrap items-center gap-2 text-sm text-foam-400">
           <Spinner className="size-4 text-lantern-300" />
           {formatCount(run.chunksDone)} of {formatCount(run.chunkCount)} chunks of {formatCount(run.systems)} systems ·{' '}

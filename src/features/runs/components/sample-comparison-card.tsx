@@ -13,9 +13,9 @@ import { QueryState } from '../../../components/ui/query-state.tsx';
 import { Select } from '../../../components/ui/select.tsx';
 import { Table, type TableColumn } from '../../../components/ui/table.tsx';
 import { useRunComparison, type CountsComparison, type FractionConstraint, type RunComparison } from '../api/get-run-comparison.ts';
-import { useRunSamples } from '../api/get-run-samples.ts';
 import { capitalised, comparisonChartSpec } from './comparison-chart-spec.ts';
 import { formatCount, tensionInWords } from './run-text.ts';
+import { useSampleChoices } from '../../../lib/api/scenario-choices.ts';
 
 /** The sample shown first: the department's own counts, then the library's, then anything. */
 export function defaultSampleId(samples: readonly Sample[]): string | null {
@@ -202,7 +202,7 @@ export const SCENARIO_SAMPLE = '~scenario';
 
 /** The run set against an observed sample or published constraint of the user's choice. */
 export function SampleComparisonCard({ departmentId, runId, sampleId, onSampleChange, scenarioTest }: SampleComparisonCardProps) {
-  const samples = useRunSamples(departmentId);
+  const samples = useSampleChoices(departmentId);
   const list = samples.data?.samples ?? [];
   const chosen =
     sampleId === SCENARIO_SAMPLE && scenarioTest

@@ -14,9 +14,8 @@ import { NumberField, TextField } from '../../../components/ui/text-field.tsx';
 import { paths } from '../../../config/paths.ts';
 import { useSchemaForm } from '../../../hooks/use-schema-form.ts';
 import { useCreateRun } from '../api/create-run.ts';
-import { useRunScenario } from '../api/get-run-scenario.ts';
-import { useRunScenarios } from '../api/get-run-scenarios.ts';
 import { formatCount, parseSystemsInput } from './run-text.ts';
+import { useScenarioChoice, useScenarioChoices } from '../../../lib/api/scenario-choices.ts';
 
 const { systems, seed } = createRunBodySchema.shape;
 
@@ -44,9 +43,9 @@ export interface StartRunFormProps {
 }
 
 export function StartRunForm({ departmentId, role, initialScenarioId, onSystemsChange, onStarted }: StartRunFormProps) {
-  const scenarios = useRunScenarios(departmentId);
+  const scenarios = useScenarioChoices(departmentId);
   const [scenarioId, setScenarioId] = useState(initialScenarioId ?? '');
-  const scenario = useRunScenario(departmentId, scenarioId || null);
+  const scenario = useScenarioChoice(departmentId, scenarioId || null);
   const [systemsText, setSystemsText] = useState('');
   const [seedText, setSeedText] = useState('');
   const create = useCreateRun(departmentId);

@@ -10,8 +10,6 @@ import { isApiError } from '../../../lib/api-client.ts';
 import { cx } from '../../../lib/class-names.ts';
 import { parseNumberText } from '../../../lib/number-input.ts';
 import { useCreateSweep } from '../api/create-sweep.ts';
-import { useSweepScenario } from '../api/get-sweep-scenario.ts';
-import { useSweepScenarios } from '../api/get-sweep-scenarios.ts';
 import { AxisFields } from './axis-fields.tsx';
 import {
   axisValues,
@@ -23,6 +21,7 @@ import {
   valueAt,
   type AxisDraft,
 } from './sweep-axes.ts';
+import { useScenarioChoice, useScenarioChoices } from '../../../lib/api/scenario-choices.ts';
 
 export interface SweepFormProps {
   departmentId: string;
@@ -48,9 +47,9 @@ const FIELD_ORDER = ['scenarioId', 'name', 'axes.0.path', 'axes.0.values', 'axes
  */
 export function SweepForm({ departmentId, initialScenarioId, onStarted, renderCost }: SweepFormProps) {
   const ids = useId();
-  const scenarios = useSweepScenarios(departmentId);
+  const scenarios = useScenarioChoices(departmentId);
   const [scenarioId, setScenarioId] = useState(initialScenarioId ?? '');
-  const scenario = useSweepScenario(departmentId, scenarioId || null);
+  const scenario = useScenarioChoice(departmentId, scenarioId || null);
   const resolved = scenario.data?.resolved;
   const [name, setName] = useState('');
   const [axes, setAxes] = useState<AxisDraft[]>([newAxisDraft(FIRST_PARAMETER)]);

@@ -11,6 +11,7 @@ import { useCancelSweep } from '../api/cancel-sweep.ts';
 import { isSweepLive } from '../api/get-sweeps.ts';
 import { parameterTitle } from './sweep-axes.ts';
 import { SWEEP_STATUS_TEXT, missingPoints, pointsProgress } from './sweep-text.ts';
+import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
 
 /** Where the sweep stands: points done out of all, its settings, and a way to cancel the rest. */
 export function SweepProgress({ departmentId, detail, canCancel, scenarioName }: { departmentId: string; detail: SweepDetail; canCancel: boolean; scenarioName: string }) {
@@ -21,7 +22,6 @@ export function SweepProgress({ departmentId, detail, canCancel, scenarioName }:
   const missing = missingPoints(detail);
   // The server calls a sweep finished once no point is left to run, also when some were cancelled.
   const status = detail.status === 'finished' && detail.points.some((p) => p.status === 'cancelled') ? { label: 'Stopped early', tone: 'warning' as const } : SWEEP_STATUS_TEXT[detail.status];
-  const percent = Math.round(100 * progress.fraction);
 
   return (
     <Card
@@ -48,17 +48,7 @@ export function SweepProgress({ departmentId, detail, canCancel, scenarioName }:
           {missing > 0 ? ` (${missing} without a result)` : ''}
         </span>
       </div>
-      <div
-        role="progressbar"
-        aria-label="Points done"
-        aria-valuemin={0}
-        aria-valuemax={detail.pointCount}
-        aria-valuenow={detail.pointsDone}
-        aria-valuetext={progress.text}
-        className="mt-3 h-3 overflow-hidden rounded-full bg-ink-900"
-      >
-        <div className="h-full rounded-full bg-lantern-400 transition-[width] duration-500" style={{ width: `${percent}%` }} />
-      </div>
+      <ProgressBar label="Points done" value={detail.pointsDone} max={detail.pointCount} valueText={progress.text} className="mt-3" />
       <DescriptionList
         className="mt-4"
         items={[

@@ -7,15 +7,15 @@ import { QueryState } from '../../../components/ui/query-state.tsx';
 import { Table, type TableColumn } from '../../../components/ui/table.tsx';
 import { paths } from '../../../config/paths.ts';
 import { formatDateTimeUtc } from '../../../lib/format.ts';
-import { useSweepScenarios } from '../api/get-sweep-scenarios.ts';
 import { useSweeps } from '../api/get-sweeps.ts';
 import { parameterTitle } from './sweep-axes.ts';
 import { SWEEP_STATUS_TEXT, pointsProgress } from './sweep-text.ts';
+import { useScenarioChoices } from '../../../lib/api/scenario-choices.ts';
 
 /** The department's sweeps, newest first; rows update while points complete. */
 export function SweepsTable({ departmentId }: { departmentId: string }) {
   const sweeps = useSweeps(departmentId);
-  const scenarios = useSweepScenarios(departmentId);
+  const scenarios = useScenarioChoices(departmentId);
   const scenarioName = (id: string) => scenarios.data?.scenarios.find((s) => s.id === id)?.name ?? 'A removed scenario';
 
   const columns: TableColumn<SweepSummary>[] = [

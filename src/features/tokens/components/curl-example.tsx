@@ -1,4 +1,4 @@
-import { CopyButton } from './copy-button.tsx';
+import { CopyButton } from '../../../components/ui/copy-button.tsx';
 import { curlExample } from './token-text.ts';
 
 const PLACEHOLDER = 'tfk_…';

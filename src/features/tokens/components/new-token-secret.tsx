@@ -1,7 +1,7 @@
 import { useEffect, useRef } from 'react';
 import { Button } from '../../../components/ui/button.tsx';
 import { AlertIcon } from '../../../components/ui/icons.tsx';
-import { CopyButton } from './copy-button.tsx';
+import { CopyButton } from '../../../components/ui/copy-button.tsx';
 import type { CreatedToken } from './create-token-form.tsx';
 import { CurlExample } from './curl-example.tsx';
 

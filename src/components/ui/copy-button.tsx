@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { Button, type ButtonProps } from '../../../components/ui/button.tsx';
+import { Button, type ButtonProps } from './button.tsx';
 
 type CopyOutcome = 'idle' | 'copied' | 'failed';
 
