@@ -15,9 +15,18 @@ export const giantTrackSchema = z.object({
    */
   reimersEta: z.number().min(0.05).max(3).default(0.477),
   /**
+   * Zero point Mc0 of Paczyński's (1970, Acta Astron. 20, 47) AGB core-mass–luminosity relation
+   * L = 59250 (Mc − Mc0) Lsun: 0.522 Msun as the relation is usually quoted, 0.495 Msun in a later
+   * recalibration (both values from memory). The AGB starts where the relation gives ≈ 300 Lsun.
+   */
+  agbZeroPointMsun: z.number().min(0.45).max(0.55).default(0.522),
+  /**
    * Late-AGB superwind that strips what is left of the envelope. On the AGB the wind is the
    * larger of Reimers and Blöcker; with `none` the envelope left when the core reaches the
-   * IFMR mass is assumed to be lost at once (the orbit can no longer be engulfed then).
+   * IFMR mass is assumed to be lost at once (the orbit can no longer be engulfed then). The
+   * superwind is timed so that the track's final core equals the IFMR mass: where the wind
+   * would empty the envelope earlier, the AGB wind is scaled down at that primary mass until
+   * it empties the envelope as the core reaches the IFMR mass (within 0.005 Msun).
    */
   superwind: z
     .discriminatedUnion('kind', [

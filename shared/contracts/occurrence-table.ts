@@ -43,6 +43,13 @@ export const companionRowSchema = z
     periodDays: rangeSchema(0.01, 1e12),
     /** Probability (0–1) that a star hosts one companion of this row, before the multiplier. */
     occurrence: number(0, 1),
+    /**
+     * Occurrence scales with the host's initial mass as occurrence × (M1 / 1 Msun)^hostMassSlope,
+     * capped at 1 per star (0 = independent of the host). For giant planets the occurrence rises
+     * with stellar mass (Johnson et al. 2010, PASP 122, 905, roughly ∝ M1 at fixed metallicity;
+     * from memory: a pointer, not a fit). Absent means 0.
+     */
+    hostMassSlope: number(-3, 3).optional(),
     shape: companionShapeSchema.default({ kind: 'powerlaw', massSlope: 0, periodSlope: 0 }),
     label: z.string().max(200).optional(),
     /** Where the row's numbers come from (paper, table). */

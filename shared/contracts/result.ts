@@ -18,7 +18,14 @@ export const fractionSchema = z.object({
 
 const settingCountsSchema = z.object({ whiteDwarfs: count, magnetic: count });
 const bySettingSchema = <T extends z.ZodType>(item: T) => z.object({ single: item, wide: item, postCE: item });
-const byChannelSchema = <T extends z.ZodType>(item: T) => z.object({ disruption: item, coreMerger: item, fossil: item });
+/**
+ * Engine 2's channels. Engine-1 documents (stored before engine 2) have `coreMerger` instead of
+ * `closeSurvivor`: both are optional so that those documents still parse; an engine-2 document
+ * always has `closeSurvivor` and never `coreMerger`.
+ */
+const byChannelSchema = <T extends z.ZodType>(item: T) =>
+  z.object({ disruption: item, closeSurvivor: item.optional(), fossil: item, coreMerger: item.optional() });
+const magneticSplitSchema = z.object({ magnetic: z.array(count), nonMagnetic: z.array(count) });
 
 /** compareWithObserved's output (shared/engine/stats/compare-observed.ts). Unknown keys are dropped on parse. */
 export const observedComparisonSchema = z.object({
@@ -75,8 +82,10 @@ export const scenarioResultSchema = z.object({
     byChannel: byChannelSchema(count),
     bySetting: bySettingSchema(settingCountsSchema),
     channelBySetting: byChannelSchema(bySettingSchema(count)),
-    /** Companions present around sampled white dwarfs, by fate. */
-    companionFates: z.object({ wide: count, postCE: count, disrupted: count, merged: count }),
+    /** Companions present around sampled white dwarfs, by fate (`merged`: engine 1 only; `dissolved`: engine 2). */
+    companionFates: z.object({ wide: count, postCE: count, disrupted: count, dissolved: count.optional(), merged: count.optional() }),
+    /** Sampled white dwarfs with a helium core (envelope ejected on the red giant branch); absent in engine-1 documents. */
+    heliumWhiteDwarfs: count.optional(),
   }),
   /** Magnetic / white dwarfs. */
   fraction: fractionSchema,
@@ -86,11 +95,30 @@ export const scenarioResultSchema = z.object({
   fractionByChannel: byChannelSchema(fractionSchema),
   bins: z.object({
     wdMass: z.object({ edgesMsun: z.array(z.number()), magnetic: z.array(count), nonMagnetic: z.array(count) }),
-    logField: z.object({ edgesLog10MG: z.array(z.number()), counts: z.array(count), thresholdMG: z.number() }),
+    /** White-dwarf mass by setting, on the edges of wdMass (absent in engine-1 documents). */
+    wdMassBySetting: z
+      .object({ edgesMsun: z.array(z.number()), single: magneticSplitSchema, wide: magneticSplitSchema, postCE: magneticSplitSchema })
+      .optional(),
+    /** log10 cooling age (Gyr) of every sampled white dwarf, from 1 Myr to 14 Gyr (absent in engine-1 documents). */
+    coolingAge: z.object({ edgesLog10Gyr: z.array(z.number()), magnetic: z.array(count), nonMagnetic: z.array(count) }).optional(),
+    /**
+     * log10 final orbital period (days) of the post-common-envelope companion of every white dwarf
+     * in the post-CE setting, 0.01 to 10^4 d (absent in engine-1 documents).
+     */
+    postCommonEnvelopePeriod: z.object({ edgesLog10Days: z.array(z.number()), magnetic: z.array(count), nonMagnetic: z.array(count) }).optional(),
+    logField: z.object({
+      edgesLog10MG: z.array(z.number()),
+      /** Every sampled white dwarf with a field, magnetic or below the threshold (all channels). */
+      counts: z.array(count),
+      thresholdMG: z.number(),
+      /** The same split by the channel that made the field (absent in engine-1 documents). */
+      byChannel: z.object({ disruption: z.array(count), closeSurvivor: z.array(count), fossil: z.array(count) }).optional(),
+    }),
     fateMap: z.object({
       log10MassEdgesMsun: z.array(z.number()),
       log10PeriodEdgesDays: z.array(z.number()),
-      fates: z.array(z.enum(['wide', 'postCE', 'disrupted', 'merged'])),
+      /** Engine 2: wide, postCE, disrupted, dissolved; engine-1 documents have merged instead of dissolved. */
+      fates: z.array(z.enum(['wide', 'postCE', 'disrupted', 'dissolved', 'merged'])),
       /** counts[fate][massBin][periodBin]. */
       counts: z.array(z.array(z.array(count))),
     }),

@@ -110,14 +110,39 @@ const envelopeSchema = z.strictObject({
   lambda: number(0.05, 5).default(0.5),
 });
 
+const dissolutionSchema = z.discriminatedUnion('kind', [
+  /** Every companion that cannot eject the envelope reaches the core and is shredded (default). */
+  z.strictObject({ kind: z.literal('none') }),
+  /**
+   * Companions lighter than massMJup dissolve in the envelope before they reach the core: no
+   * debris disc, no field (an assumption; the mass is the user's choice).
+   */
+  z.strictObject({ kind: z.literal('belowMass'), massMJup: number(0.01, 100).default(1) }),
+]);
+
 const disruptionSchema = z.strictObject({
-  /** η in the tidal radius r_t = η R2 (M_core/M2)^(1/3); 2.44 is the fluid Roche limit. */
+  /** η in the tidal radius r_t = η R2 (M_core/M2)^(1/3); 2.44 is the fluid Roche limit. Sets the debris disc's radius of the accretion field. */
   eta: number(0.1, 5).default(2.44),
+  dissolution: dissolutionSchema.default({ kind: 'none' }),
 });
 
 const lognormalFieldSchema = z.strictObject({
   kind: z.literal('lognormal'),
   medianMG: number(1e-3, 1e5),
+  widthDex: number(0, 3).default(0.5),
+});
+
+/**
+ * B = referenceMG · (M2 / referenceMassMJup)^slope with log-normal scatter widthDex: the field
+ * grows with the shredded mass, the trend of the disc-dynamo estimates (Nordhaus et al. 2011,
+ * PNAS 108, 3135). The defaults (100 MG at 100 MJup, slope 0.6: ≈ 6 MG for 1 MJup, ≈ 260 MG for
+ * 0.5 Msun) are an illustrative reading of that trend, not a fit.
+ */
+const companionScaledFieldSchema = z.strictObject({
+  kind: z.literal('companionScaled'),
+  referenceMG: number(1e-3, 1e5).default(100),
+  referenceMassMJup: number(0.01, 1000).default(100),
+  slope: number(-2, 3).default(0.6),
   widthDex: number(0, 3).default(0.5),
 });
 
@@ -133,13 +158,35 @@ const accretionFieldSchema = z.strictObject({
   widthDex: number(0, 3).default(0),
 });
 
+/** Field of a close post-common-envelope survivor (Tout et al. 2008's near-merger case). */
+const closeSurvivorFieldSchema = z.strictObject({
+  kind: z.literal('lognormal'),
+  medianMG: number(1e-3, 1e5).default(30),
+  widthDex: number(0, 3).default(0.5),
+  /** Only survivors whose final orbital period is below this get the field. */
+  maxPeriodDays: number(0.001, 100).default(0.5),
+});
+
+/** Keys of engine 1 that engine 2 accepts and ignores (the result's assumptions say so). */
+const ignoredEngine1Key = z.unknown().optional();
+
+const DEFAULT_DISRUPTION_FIELD = { kind: 'companionScaled', referenceMG: 100, referenceMassMJup: 100, slope: 0.6, widthDex: 0.5 } as const;
+const DEFAULT_CLOSE_SURVIVOR_FIELD = { kind: 'lognormal', medianMG: 30, widthDex: 0.5, maxPeriodDays: 0.5 } as const;
+
 const fieldSchema = z.strictObject({
   disruption: z
-    .discriminatedUnion('kind', [lognormalFieldSchema, accretionFieldSchema])
-    .default({ kind: 'lognormal', medianMG: 50, widthDex: 0.5 }),
-  coreMerger: lognormalFieldSchema.default({ kind: 'lognormal', medianMG: 100, widthDex: 0.5 }),
+    .discriminatedUnion('kind', [lognormalFieldSchema, companionScaledFieldSchema, accretionFieldSchema])
+    .default(DEFAULT_DISRUPTION_FIELD),
+  closeSurvivor: closeSurvivorFieldSchema.default(DEFAULT_CLOSE_SURVIVOR_FIELD),
+  /**
+   * A field made by a companion (disruption, close survivor) counts only once the white dwarf's
+   * cooling age exceeds this (a late-emerging field); 0 = at once. Fossil fields are unaffected.
+   */
+  emergenceDelayGyr: number(0, 13.8).default(0),
   /** A white dwarf counts as magnetic iff its field is at least this. */
   thresholdMG: number(0.01, 1000).default(1),
+  /** Engine 1's core-merger field: accepted and ignored. */
+  coreMerger: ignoredEngine1Key,
 });
 
 const fossilSchema = z.strictObject({
@@ -155,17 +202,25 @@ const fossilSchema = z.strictObject({
 
 const channelsSchema = z.strictObject({
   disruption: z.boolean().default(true),
-  coreMerger: z.boolean().default(true),
+  /** Field for close post-common-envelope survivors (field.closeSurvivor); off by default. */
+  closeSurvivor: z.boolean().default(false),
+  /** Engine 1's core-merger channel: accepted and ignored. */
+  coreMerger: ignoredEngine1Key,
   fossil: fossilSchema.default({ enabled: false, fraction: 0.05, massRangeMsun: [1.5, 4], msField: { medianKG: 1, widthDex: 0.5 } }),
 });
 
 const selectionSchema = z.discriminatedUnion('kind', [
   z.strictObject({ kind: z.literal('volume') }),
-  /** Accept each white dwarf with probability ∝ L^(3/2) (Mestel cooling). */
+  /**
+   * Accept each white dwarf with probability ∝ F^(3/2), F its optical flux: a blackbody at
+   * wavelengthNm from its radius (Nauenberg 1972) and effective temperature (Mestel cooling).
+   */
   z.strictObject({
     kind: z.literal('magnitudeLimited'),
     /** Cooling ages below this are raised to it (Mestel's law fails for hot young white dwarfs). */
     coolingAgeFloorGyr: number(1e-3, 2).default(0.1),
+    /** Wavelength of the survey's band, nm (V band ≈ 550 nm). */
+    wavelengthNm: number(300, 2500).default(550),
   }),
 ]);
 
@@ -192,15 +247,16 @@ export const scenarioSchema = z
     companions: companionsSchema.default({ multiplier: 1, rows: [] }),
     giant: giantSchema.default({ kind: 'fixedReach', reachAU: 2 }),
     envelope: envelopeSchema.default({ alpha: 1, lambda: 0.5 }),
-    disruption: disruptionSchema.default({ eta: 2.44 }),
+    disruption: disruptionSchema.default({ eta: 2.44, dissolution: { kind: 'none' } }),
     field: fieldSchema.default({
-      disruption: { kind: 'lognormal', medianMG: 50, widthDex: 0.5 },
-      coreMerger: { kind: 'lognormal', medianMG: 100, widthDex: 0.5 },
+      disruption: DEFAULT_DISRUPTION_FIELD,
+      closeSurvivor: DEFAULT_CLOSE_SURVIVOR_FIELD,
+      emergenceDelayGyr: 0,
       thresholdMG: 1,
     }),
     channels: channelsSchema.default({
       disruption: true,
-      coreMerger: true,
+      closeSurvivor: false,
       fossil: { enabled: false, fraction: 0.05, massRangeMsun: [1.5, 4], msField: { medianKG: 1, widthDex: 0.5 } },
     }),
     selection: selectionSchema.default({ kind: 'volume' }),
@@ -266,6 +322,9 @@ export type GiantOptions = Scenario['giant'];
 export type FieldOptions = Scenario['field'];
 export type LognormalFieldOptions = z.output<typeof lognormalFieldSchema>;
 export type AccretionFieldOptions = z.output<typeof accretionFieldSchema>;
+export type CompanionScaledFieldOptions = z.output<typeof companionScaledFieldSchema>;
+export type CloseSurvivorFieldOptions = z.output<typeof closeSurvivorFieldSchema>;
+export type DissolutionOptions = Scenario['disruption']['dissolution'];
 export type FossilOptions = Scenario['channels']['fossil'];
 export type SelectionOptions = Scenario['selection'];
 export type ObservedSample = z.output<typeof observedSchema>;
@@ -306,7 +365,7 @@ const SWEEP_DEFINITIONS: Omit<SweepableParameter, 'min' | 'max'>[] = [
   { path: 'companions.multiplier', label: 'Occurrence multiplier', unit: '' },
   { path: 'envelope.alpha', label: 'Common-envelope efficiency α_CE', unit: '' },
   { path: 'envelope.lambda', label: 'Envelope binding parameter λ', unit: '' },
-  { path: 'disruption.eta', label: 'Tidal-radius factor η', unit: '' },
+  { path: 'disruption.eta', label: 'Tidal-radius factor η', unit: '', requires: 'field.disruption.kind = accretion' },
   { path: 'field.thresholdMG', label: 'Magnetic detection threshold', unit: 'MG' },
   { path: 'giant.reachAU', label: 'Engulfment reach', unit: 'AU', requires: 'giant.kind = fixedReach' },
   { path: 'giant.reimersEta', label: 'Reimers mass-loss efficiency η_R', unit: '', requires: 'giant.kind = track' },

@@ -6,4 +6,13 @@
 export const CHUNK_SYSTEMS = 65536;
 
 /** Version of the engine's numbers: bump on any change to physics, draw order or chunking. */
-export const ENGINE_VERSION = `1.0.0+chunk${CHUNK_SYSTEMS}`;
+export const ENGINE_VERSION = `2.0.0+chunk${CHUNK_SYSTEMS}`;
+
+/**
+ * Major version of ENGINE_VERSION (engine 2: common-envelope onset state, the literature's
+ * channels, remnant masses, cooling ages and post-CE periods). Results of engine 1 stay readable.
+ */
+export function engineMajorVersion(version: string): number {
+  const major = Number.parseInt(version, 10);
+  return Number.isFinite(major) ? major : 0;
+}

@@ -7,8 +7,12 @@ export interface UniformBins {
 
 /** The histograms every run fills (part of the engine version: changing them changes results). */
 export const BINS = {
-  /** White-dwarf mass, Msun. */
-  wdMassMsun: { lo: 0.2, hi: 1.4, count: 60 },
+  /** White-dwarf mass, Msun (from 0.1: helium white dwarfs of red-giant-branch ejections). */
+  wdMassMsun: { lo: 0.1, hi: 1.4, count: 65 },
+  /** log10 of the cooling age in Gyr, 1 Myr to 14 Gyr. */
+  log10CoolingAgeGyr: { lo: -3, hi: Math.log10(14), count: 50 },
+  /** log10 of a post-common-envelope companion's final period in days, 0.01 to 10^4 d. */
+  log10PostCEPeriodDays: { lo: -2, hi: 4, count: 60 },
   /** log10 of the field in MG. */
   log10FieldMG: { lo: -3, hi: 5, count: 80 },
   /** log10 of the companion mass in Msun (fate map, first axis). */
@@ -22,11 +26,11 @@ export const BINS = {
 } as const satisfies Record<string, UniformBins | number>;
 
 /** Fates of one companion, in the order of the fate map's first index. */
-export const FATES = ['wide', 'postCE', 'disrupted', 'merged'] as const;
+export const FATES = ['wide', 'postCE', 'disrupted', 'dissolved'] as const;
 /** Where a white dwarf's companions leave it, in tally order. */
 export const SETTINGS = ['single', 'wide', 'postCE'] as const;
 /** Channels that make a magnetic white dwarf, in tally order. */
-export const CHANNELS = ['disruption', 'coreMerger', 'fossil'] as const;
+export const CHANNELS = ['disruption', 'closeSurvivor', 'fossil'] as const;
 
 /** Bin index of x, values outside the range going to the first or last bin. */
 export function binIndex(bins: UniformBins, x: number): number {

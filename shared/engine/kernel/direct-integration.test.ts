@@ -55,8 +55,8 @@ interface RowSpec {
 
 interface FateProbabilities {
   postCE: number;
-  /** By channel: 0 disruption, 1 core merger. */
-  destroyed: [number, number];
+  /** Destroyed in the envelope (engine 2: always the disruption channel; dissolution off). */
+  destroyed: number;
 }
 
 /** Fate probabilities of one row's companion around a primary M1 (white dwarf mass mwd). */
@@ -65,7 +65,7 @@ function rowFates(row: RowSpec, m1: number, mwd: number, s: Scenario): FateProba
   const alphaLambda = s.envelope.alpha * s.envelope.lambda;
   const rCore = wdRadius(mwd);
   let post = 0;
-  const destroyed: [number, number] = [0, 0];
+  let destroyed = 0;
   const { x, w } = row.massNodes;
   for (let i = 0; i < x.length; i++) {
     const m2 = row.massAt(x[i], m1);
@@ -77,8 +77,7 @@ function rowFates(row: RowSpec, m1: number, mwd: number, s: Scenario): FateProba
     const fReach = row.periodCdf(periodAt(reach, total));
     const fDestroyed = row.periodCdf(periodAt(Math.min(survivalA0, reach), total));
     post += w[i] * (fReach - fDestroyed);
-    const merged = s.disruption.eta * r2 * Math.cbrt(mwd / m2) <= rCore;
-    destroyed[merged ? 1 : 0] += w[i] * fDestroyed;
+    destroyed += w[i] * fDestroyed;
   }
   return { postCE: post, destroyed };
 }
@@ -103,8 +102,8 @@ function quadrature(
   fossilProbability: (m1: number, mwd: number) => number,
 ) {
   const [lo, hi] = s.primaries.massRangeMsun;
-  const f = s.field as { disruption: { medianMG: number; widthDex: number }; coreMerger: { medianMG: number; widthDex: number }; thresholdMG: number };
-  const zc = [f.disruption, f.coreMerger].map((c) => (c.widthDex === 0 ? (c.medianMG >= f.thresholdMG ? -Infinity : Infinity) : Math.log10(f.thresholdMG / c.medianMG) / c.widthDex));
+  const f = s.field as { disruption: { medianMG: number; widthDex: number }; thresholdMG: number };
+  const zc = [f.disruption].map((c) => (c.widthDex === 0 ? (c.medianMG >= f.thresholdMG ? -Infinity : Infinity) : Math.log10(f.thresholdMG / c.medianMG) / c.widthDex));
   const cuts = [-Infinity, ...zc.filter(Number.isFinite).sort((a, b) => a - b), Infinity];
   const m = s.companions.multiplier;
   const { x, w } = simpson(Math.log(lo), Math.log(hi), 400);
@@ -123,7 +122,7 @@ function quadrature(
       const mass = Phi(cuts[k + 1]) - Phi(cuts[k]);
       let none = 1;
       rows.forEach((r, j) => {
-        const p = (zMid >= zc[0] ? fates[j].destroyed[0] : 0) + (zMid >= zc[1] ? fates[j].destroyed[1] : 0);
+        const p = zMid >= zc[0] ? fates[j].destroyed : 0;
         none *= 1 - r.occurrence * m * p;
       });
       pMagCompanion += mass * (1 - none);
@@ -179,7 +178,35 @@ describe('kernel against direct integration of the scenario semantics', () => {
     expect(Math.abs(value! - expected.magnetic)).toBeLessThan(3 * se!);
     expect(result.counts.bySetting.postCE.whiteDwarfs).toBe(0); // planets never fit their Roche lobe after a CE
     expect(expected.postCE).toBe(0);
-  });
+  }, 60_000);
+
+  it('held-out fixed-reach check: α_CE = 0.05, log-normal fields far above the threshold, dissolution off', () => {
+    // The fixed-reach semantics (final core, full envelope at R = a0) are unchanged by engine 2:
+    // with α_CE = 0.05 almost every engulfed planet is destroyed, and with fields of 1000 MG ± 0.1
+    // dex every destroyed planet makes the white dwarf magnetic.
+    const base = JSON.parse(readFileSync(new URL('../../scenarios/check-1.json', import.meta.url), 'utf8'));
+    const s = parseScenario({
+      ...base,
+      seed: 'held-out',
+      systems: 500_000,
+      envelope: { alpha: 0.05, lambda: 0.5 },
+      disruption: { eta: 2.44, dissolution: { kind: 'none' } },
+      field: { disruption: { kind: 'lognormal', medianMG: 1000, widthDex: 0.1 }, thresholdMG: 1 },
+    });
+    const row = s.companions.rows![0];
+    const planets: RowSpec = {
+      occurrence: row.occurrence,
+      massAt: (lnM) => Math.exp(lnM) * MJUP_MSUN,
+      massNodes: logUniformRow(0.5, 3, 0),
+      periodCdf: powerLawCdf(10, 20000, 0),
+    };
+    const expected = quadrature(s, [planets], (m) => Math.pow(m, 1 - 2.35), (m) => 0.109 * m + 0.394, (m) => (10 * Math.pow(m, -2.5) < 10 ? 1 : 0), () => 0);
+    const result = runInProcess(s);
+    const { value, se } = result.fraction;
+    expect(expected.magnetic).toBeGreaterThan(0.05); // not vacuous
+    expect(Math.abs(value! - expected.magnetic)).toBeLessThan(3 * se!);
+    expect(result.counts.companionFates.dissolved).toBe(0);
+  }, 60_000);
 
   it('constant star formation, Kroupa IMF, planets + stellar companions (log-normal periods, flat q) + fossil fields', () => {
     const s = parseScenario({
@@ -204,10 +231,9 @@ describe('kernel against direct integration of the scenario semantics', () => {
       disruption: { eta: 1 },
       field: {
         disruption: { kind: 'lognormal', medianMG: 3, widthDex: 1 },
-        coreMerger: { kind: 'lognormal', medianMG: 100, widthDex: 0.5 },
         thresholdMG: 1,
       },
-      channels: { disruption: true, coreMerger: true, fossil: { enabled: true, fraction: 0.2, massRangeMsun: [2, 4], msField: { medianKG: 0.01, widthDex: 0.5 } } },
+      channels: { disruption: true, fossil: { enabled: true, fraction: 0.2, massRangeMsun: [2, 4], msField: { medianKG: 0.01, widthDex: 0.5 } } },
     });
     const cummingsMist = (m: number) => (m < 2.85 ? 0.08 * m + 0.489 : m < 3.6 ? 0.187 * m + 0.184 : 0.107 * m + 0.471);
     const [mean, sigma] = [5.03, 2.28];
@@ -251,5 +277,5 @@ describe('kernel against direct integration of the scenario semantics', () => {
     expect(expected.postCE).toBeGreaterThan(0.01); // the check is not vacuous
     expect(Math.abs(post / n - expected.postCE)).toBeLessThan(3 * postSe);
     expect(result.counts.byChannel.fossil).toBeGreaterThan(0);
-  });
+  }, 120_000);
 });

@@ -6,6 +6,7 @@ import { standardNormalCdf } from '../numerics/normal-cdf.ts';
 import type { IfmrSegments } from '../physics/ifmr-piecewise.ts';
 import { powerLawQuantileTable, type PowerLawQuantileTable } from '../physics/imf-power-law.ts';
 import { buildImfSampler, type ImfSampler } from '../physics/imf-sampler.ts';
+import { opticalFlux } from '../physics/selection-magnitude-limited.ts';
 import { ENGINE_VERSION } from '../version.ts';
 import { planChunks } from './chunks.ts';
 import { buildTrackGiant, type EngulfmentGrid, type PreparedTrack } from './engulfment.ts';
@@ -21,9 +22,14 @@ import {
   type PreparedLifetime,
 } from './scenario-physics.ts';
 
+/** Lightest white dwarf the magnitude-limited reference scan considers, Msun (helium white dwarfs of early ejections). */
+const REFERENCE_SCAN_LO_MSUN = 0.1;
+
 /** A companion row reduced to the numbers the hot loop needs. */
 export interface PreparedRow {
   occurrence: number;
+  /** Occurrence × (M1/Msun)^hostMassSlope, capped at 1 per star; 0 = independent of the host. */
+  hostMassSlope: number;
   /** Presence uniforms below this draw the companion's mass and period: occurrence · m_max. */
   drawThreshold: number;
   /** Presence uniforms below this make the companion present: occurrence · multiplier. */
@@ -49,7 +55,7 @@ export type PreparedGiant = { kind: 'fixedReach'; reachAU: number } | PreparedTr
 
 export type PreparedSelection =
   | { kind: 'volume' }
-  | { kind: 'magnitudeLimited'; floorGyr: number; referenceMassMsun: number; referenceCoolingAgeGyr: number };
+  | { kind: 'magnitudeLimited'; floorGyr: number; wavelengthNm: number; referenceFlux: number };
 
 /** Everything runChunk needs, as plain structured-clone-able data. */
 export interface PreparedScenario {
@@ -74,7 +80,9 @@ export interface PreparedScenario {
   eta: number;
   field: Scenario['field'];
   disruptionMakesField: boolean;
-  coreMergerMakesField: boolean;
+  closeSurvivorMakesField: boolean;
+  /** Destroyed companions lighter than this (Msun) dissolve in the envelope; 0 = none do. */
+  dissolutionBelowMsun: number;
   fossil: { enabled: boolean; fraction: number; loMsun: number; hiMsun: number; medianKG: number; widthDex: number };
   selection: PreparedSelection;
 }
@@ -119,7 +127,8 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
     eta: scenario.disruption.eta,
     field: scenario.field,
     disruptionMakesField: scenario.channels.disruption,
-    coreMergerMakesField: scenario.channels.coreMerger,
+    closeSurvivorMakesField: scenario.channels.closeSurvivor,
+    dissolutionBelowMsun: scenario.disruption.dissolution.kind === 'belowMass' ? scenario.disruption.dissolution.massMJup * MJUP_MSUN : 0,
     fossil: {
       enabled: fossil.enabled,
       fraction: fossil.fraction,
@@ -141,6 +150,7 @@ function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: num
   const shape = row.shape;
   const base = {
     occurrence: row.occurrence,
+    hostMassSlope: row.hostMassSlope ?? 0,
     drawThreshold,
     presentThreshold,
     massIsRatio: row.massRatio !== undefined,
@@ -185,14 +195,18 @@ function preparedSelection(scenario: Scenario, lifetime: PreparedLifetime, ifmr:
   const [lo, hi] = p.massRangeMsun;
   const age = p.history.ageGyr;
   const lightest = lightestWhiteDwarfProgenitorMsun(lifetime, p.massRangeMsun, age) ?? lo;
-  const referenceMassMsun = heaviestWhiteDwarfMsun(ifmr, lightest, hi);
+  const heaviest = heaviestWhiteDwarfMsun(ifmr, lightest, hi);
   // The youngest cooling age any white dwarf can have: zero for constant star formation, and
-  // age − t_MS(heaviest primary) for a burst. Normalising to it keeps the acceptance ≤ 1.
-  const youngest = p.history.kind === 'burst' ? Math.max(0, age - lifetimeGyr(lifetime, hi)) : 0;
-  return {
-    kind: 'magnitudeLimited',
-    floorGyr: selection.coolingAgeFloorGyr,
-    referenceMassMsun,
-    referenceCoolingAgeGyr: Math.max(selection.coolingAgeFloorGyr, youngest),
-  };
+  // age − t_MS(heaviest primary) for a burst, raised to the floor. The flux falls with cooling
+  // age, so the brightest white dwarf of the run is among those; its mass is found by a scan
+  // from the lightest helium white dwarf (0.1 Msun) to the heaviest, and normalising to it keeps
+  // the acceptance ≤ 1.
+  const youngest = Math.max(selection.coolingAgeFloorGyr, p.history.kind === 'burst' ? Math.max(0, age - lifetimeGyr(lifetime, hi)) : 0);
+  let referenceFlux = 0;
+  const scan = 256;
+  for (let k = 0; k <= scan; k++) {
+    const mass = REFERENCE_SCAN_LO_MSUN + ((heaviest - REFERENCE_SCAN_LO_MSUN) * k) / scan;
+    referenceFlux = Math.max(referenceFlux, opticalFlux(mass, youngest, selection.wavelengthNm));
+  }
+  return { kind: 'magnitudeLimited', floorGyr: selection.coolingAgeFloorGyr, wavelengthNm: selection.wavelengthNm, referenceFlux: referenceFlux * (1 + 1e-6) };
 }

@@ -3,16 +3,18 @@ import { normalQuantile } from '../numerics/normal-quantile.ts';
 import { postCommonEnvelopeSeparationAU } from '../physics/common-envelope-webbink1984.ts';
 import { companionRadiusRsun } from '../physics/companion-radius.ts';
 import { flatSample, truncatedLognormalPeriodDays } from '../physics/companion-distribution.ts';
-import { criticalSeparationAU, envelopeAtRadius } from '../physics/engulfment-grid.ts';
+import { commonEnvelopeOnset } from '../physics/engulfment-grid.ts';
 import { accretionFieldMG } from '../physics/field-accretion.ts';
+import { companionScaledMedianMG } from '../physics/field-companion-scaled.ts';
 import { lognormalFieldMG } from '../physics/field-lognormal.ts';
 import { fossilFieldMG } from '../physics/fossil-field.ts';
 import { finalMassMsun } from '../physics/ifmr-piecewise.ts';
 import { powerLawQuantile } from '../physics/imf-power-law.ts';
 import { sampleImfMsun } from '../physics/imf-sampler.ts';
-import { semiMajorAxisAU } from '../physics/kepler.ts';
+import { periodDays as keplerPeriodDays, semiMajorAxisAU } from '../physics/kepler.ts';
 import { mainSequenceRadiusRsun } from '../physics/main-sequence-radius-demircan1991.ts';
 import { widenedSeparationAU } from '../physics/orbit-mass-loss.ts';
+import { rgbTipCoreMassMsun } from '../physics/rgb-tip-core-mass.ts';
 import { rocheLobeFraction } from '../physics/roche-lobe-eggleton1983.ts';
 import { magnitudeLimitedAcceptance } from '../physics/selection-magnitude-limited.ts';
 import { tidalRadiusRsun } from '../physics/tidal-disruption.ts';
@@ -24,14 +26,14 @@ import type { PreparedScenario } from './prepare.ts';
 import { lifetimeGyr } from './scenario-physics.ts';
 import { emptyTallyFor, type ChunkTally } from './tally.ts';
 
-// Fate codes (index into FATES) and the two "no fate" markers.
+// Fate codes (index into FATES).
 const WIDE = 0;
 const POST_CE = 1;
 const DISRUPTED = 2;
-const MERGED = 3;
+const DISSOLVED = 3;
 // Channel codes (index into CHANNELS); -1 = no field.
 const DISRUPTION = 0;
-const CORE_MERGER = 1;
+const CLOSE_SURVIVOR = 1;
 const FOSSIL = 2;
 // Setting codes (index into SETTINGS).
 const SINGLE = 0;
@@ -40,16 +42,25 @@ const POST_CE_SETTING = 2;
 
 /** Half the spacing of the generator's 2^-32 grid: u + this lies strictly inside (0, 1). */
 const HALF_STEP = 2 ** -33;
+/** Most companion rows a scenario may have (contracts/scenario.ts). */
+const MAX_ROWS = 32;
+/** An onset core mass this close above the red-giant tip still counts as a red-giant-branch ejection (the tables' interpolation smears the tip). */
+const HELIUM_CORE_MARGIN_MSUN = 0.005;
 
 /**
  * Scratch written by companionFate (one companion at a time), allocated once per module:
  * the kernel never allocates per system. Index: 0 fate, 1 field (MG, 0 = none), 2 channel,
- * 3 final separation (AU, survivors).
+ * 3 final separation (AU, survivors), 4 white-dwarf mass if this companion ends the giant's
+ * evolution (post-CE survivor; else 0), 5 final period (days, post-CE survivors), 6 helium core (1/0).
  */
-const fateOut = new Float64Array(4);
-const envelopeOut = new Float64Array(3);
-/** Per-system cache (a typed array, so storing a double does not box it): 0 the white dwarf's radius. */
-const scratch = new Float64Array(1);
+const fateOut = new Float64Array(7);
+const onsetOut = new Float64Array(4);
+/** Per-row record of the current system's companions: fate, present (1/0), log10 M2, log10 P0, separation AU, final period d. */
+const rowFate = new Float64Array(MAX_ROWS);
+const rowPresent = new Uint8Array(MAX_ROWS);
+const rowLogMass = new Float64Array(MAX_ROWS);
+const rowLogPeriod = new Float64Array(MAX_ROWS);
+const rowSeparation = new Float64Array(MAX_ROWS);
 
 /**
  * Runs chunk `chunkIndex` of the prepared scenario: draws its systems from the generator
@@ -57,9 +68,14 @@ const scratch = new Float64Array(1);
  * in order: primary mass; birth time (constant star formation only); and, for white dwarfs only:
  * the selection uniform (magnitude-limited only); the field deviate; two fossil uniforms (fossil
  * channel enabled only); and per companion row a presence uniform u followed, iff
- * u < occurrence · m_max, by the companion's mass and period. None of these depends on the
- * multiplier, α_CE, λ, η, the field threshold or the reach, so sweeps over those share random
- * numbers.
+ * u < min(1, occurrence · (M1)^hostMassSlope · m_max), by the companion's mass and period. None of
+ * these depends on the multiplier, α_CE, λ, η, the field options or threshold or the reach, so
+ * sweeps over those share random numbers.
+ *
+ * Engine 2: each companion's fate is decided alone; the white dwarf's mass is the IFMR's unless
+ * a post-common-envelope survivor ended the giant's evolution early (then the smallest onset core
+ * of those); the fossil field and the magnitude-limited selection use that final mass. A field
+ * made by a companion counts only from the cooling age field.emergenceDelayGyr on.
  */
 export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkTally {
   const tally = emptyTallyFor(prepared.scenarioHash);
@@ -73,16 +89,22 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
   const constantHistory = prepared.constantHistory;
   const ageGyr = prepared.ageGyr;
   const threshold = field.thresholdMG;
+  const emergenceDelayGyr = field.emergenceDelayGyr;
   const rowCount = rows.length;
   const multiplierScale = BINS.multiplierBins / prepared.multiplierMax;
   const magnitudeLimited = selection.kind === 'magnitudeLimited';
   const massBins = BINS.log10CompanionMsun.count;
   const periodBins = BINS.log10PeriodDays.count;
   const separationBins = BINS.log10SeparationAU.count;
+  const wdMassBins = BINS.wdMassMsun.count;
+  const fieldBins = BINS.log10FieldMG.count;
+  const coolingBins = BINS.log10CoolingAgeGyr.count;
+  const postCEPeriodBins = BINS.log10PostCEPeriodDays.count;
 
   let whiteDwarfsFormed = 0;
   let whiteDwarfs = 0;
   let magnetic = 0;
+  let heliumWhiteDwarfs = 0;
   let multiplierFossil = 0;
   const byChannel = tally.byChannel;
   const settingWhiteDwarfs = tally.settingWhiteDwarfs;
@@ -91,7 +113,11 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
   const companionFates = tally.companionFates;
   const wdMassMagnetic = tally.wdMassMagnetic;
   const wdMassNonMagnetic = tally.wdMassNonMagnetic;
+  const wdMassBySetting = tally.wdMassBySetting;
   const logField = tally.logField;
+  const logFieldByChannel = tally.logFieldByChannel;
+  const coolingAge = tally.coolingAge;
+  const postCEPeriod = tally.postCEPeriod;
   const fateMap = tally.fateMap;
   const survivorSeparation = tally.survivorSeparation;
   const multiplierBins = tally.multiplierBins;
@@ -102,34 +128,34 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
     const tms = lifetimeGyr(lifetime, m1);
     if (!(tms < age)) continue;
     whiteDwarfsFormed++;
-    const mwd = finalMassMsun(ifmr, m1);
-    if (magnitudeLimited) {
-      const accept = magnitudeLimitedAcceptance(mwd, age - tms, selection.floorGyr, selection.referenceMassMsun, selection.referenceCoolingAgeGyr);
-      if (!(rng() < accept)) continue;
-    }
-    whiteDwarfs++;
+    const ifmrMass = finalMassMsun(ifmr, m1);
+    const cooling = age - tms;
+    const uSelect = magnitudeLimited ? rng() : 0;
     const z = normalQuantile(rng() + HALF_STEP);
-    // The white dwarf's radius is needed only for a fossil field or a common envelope: computed lazily.
-    scratch[0] = 0;
+    const fieldsEmerged = cooling >= emergenceDelayGyr;
 
+    let fossilCarries = false;
+    let zFossil = 0;
+    if (fossil.enabled) {
+      fossilCarries = rng() < fossil.fraction && m1 >= fossil.loMsun && m1 <= fossil.hiMsun;
+      zFossil = normalQuantile(rng() + HALF_STEP);
+    }
+
+    let mwd = ifmrMass;
+    let helium = false;
+    let setting = SINGLE;
     let bestField = 0;
     let bestChannel = -1;
     let smallestMultiplier = Infinity;
-    if (fossil.enabled) {
-      const carries = rng() < fossil.fraction;
-      const zf = normalQuantile(rng() + HALF_STEP);
-      if (carries && m1 >= fossil.loMsun && m1 <= fossil.hiMsun) {
-        bestField = fossilFieldMG(lognormalFieldMG(fossil.medianKG, fossil.widthDex, zf), mainSequenceRadiusRsun(m1), whiteDwarfRadiusOf(mwd));
-        bestChannel = FOSSIL;
-        if (bestField >= threshold) smallestMultiplier = 0;
-      }
-    }
-
-    let setting = SINGLE;
+    let closestPostCEPeriod = Infinity;
     for (let r = 0; r < rowCount; r++) {
       const row = rows[r];
       const u = rng();
-      if (!(u < row.drawThreshold)) continue;
+      rowPresent[r] = 0;
+      // Host-mass scaling of the occurrence, capped at 1 per star (a pow only when the row asks).
+      const occurrence = row.hostMassSlope === 0 ? row.occurrence : row.occurrence * Math.pow(m1, row.hostMassSlope);
+      const drawThreshold = row.hostMassSlope === 0 ? row.drawThreshold : Math.min(1, occurrence * prepared.multiplierMax);
+      if (!(u < drawThreshold)) continue;
       const uMass = rng();
       const uPeriod = rng();
       let m2 = row.massQuantile ? powerLawQuantile(row.massQuantile, uMass) : flatSample(row.massLo, row.massHi, uMass);
@@ -137,31 +163,68 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
       const periodDays = row.periodQuantile
         ? powerLawQuantile(row.periodQuantile, uPeriod)
         : truncatedLognormalPeriodDays(row.meanLog10PeriodDays, row.sigmaLog10Period, row.cdfLo, row.cdfSpan, uPeriod, normalQuantile);
-      companionFate(prepared, m1, mwd, m2, periodDays, z);
+      companionFate(prepared, m1, ifmrMass, m2, periodDays, z);
       const fate = fateOut[0];
-      const present = u < row.presentThreshold;
-      const companionField = fateOut[1];
+      const present = u < (row.hostMassSlope === 0 ? row.presentThreshold : Math.min(drawThreshold, occurrence * prepared.multiplier));
+      const companionField = fieldsEmerged ? fateOut[1] : 0;
       if (companionField >= threshold) {
-        const m = u / row.occurrence;
+        const m = u / occurrence;
         if (m < smallestMultiplier) smallestMultiplier = m;
       }
       if (!present) continue;
-      companionFates[fate]++;
-      fateMap[(fate * massBins + binIndex(BINS.log10CompanionMsun, Math.log10(m2))) * periodBins + binIndex(BINS.log10PeriodDays, Math.log10(periodDays))]++;
-      if (fate === WIDE || fate === POST_CE) {
-        if (fate === POST_CE) setting = POST_CE_SETTING;
-        else if (setting === SINGLE) setting = WIDE_SETTING;
-        survivorSeparation[fate * separationBins + binIndex(BINS.log10SeparationAU, Math.log10(fateOut[3]))]++;
-      } else if (companionField > bestField) {
+      rowPresent[r] = 1;
+      rowFate[r] = fate;
+      rowLogMass[r] = Math.log10(m2);
+      rowLogPeriod[r] = Math.log10(periodDays);
+      rowSeparation[r] = fateOut[3];
+      if (fate === POST_CE) {
+        setting = POST_CE_SETTING;
+        if (fateOut[5] < closestPostCEPeriod) closestPostCEPeriod = fateOut[5];
+        if (fateOut[4] < mwd) {
+          mwd = fateOut[4];
+          helium = fateOut[6] === 1;
+        }
+      } else if (fate === WIDE && setting === SINGLE) setting = WIDE_SETTING;
+      if (companionField > bestField) {
         bestField = companionField;
         bestChannel = fateOut[2];
       }
     }
 
+    if (fossilCarries) {
+      const fossilField = fossilFieldMG(lognormalFieldMG(fossil.medianKG, fossil.widthDex, zFossil), mainSequenceRadiusRsun(m1), whiteDwarfRadiusRsun(mwd));
+      if (fossilField >= threshold) smallestMultiplier = 0;
+      if (fossilField > bestField) {
+        bestField = fossilField;
+        bestChannel = FOSSIL;
+      }
+    }
+
+    if (magnitudeLimited) {
+      const accept = magnitudeLimitedAcceptance(mwd, cooling, selection.floorGyr, selection.wavelengthNm, selection.referenceFlux);
+      if (!(uSelect < accept)) continue;
+    }
+    whiteDwarfs++;
+    if (helium) heliumWhiteDwarfs++;
+    for (let r = 0; r < rowCount; r++) {
+      if (rowPresent[r] === 0) continue;
+      const fate = rowFate[r];
+      companionFates[fate]++;
+      fateMap[(fate * massBins + binIndex(BINS.log10CompanionMsun, rowLogMass[r])) * periodBins + binIndex(BINS.log10PeriodDays, rowLogPeriod[r])]++;
+      if (fate === WIDE || fate === POST_CE) survivorSeparation[fate * separationBins + binIndex(BINS.log10SeparationAU, Math.log10(rowSeparation[r]))]++;
+    }
+
     settingWhiteDwarfs[setting]++;
     const massBin = binIndex(BINS.wdMassMsun, mwd);
-    if (bestField > 0) logField[binIndex(BINS.log10FieldMG, Math.log10(bestField))]++;
-    if (bestField >= threshold) {
+    const coolingBin = binIndex(BINS.log10CoolingAgeGyr, Math.log10(cooling));
+    if (bestField > 0) {
+      const fieldBin = binIndex(BINS.log10FieldMG, Math.log10(bestField));
+      logField[fieldBin]++;
+      logFieldByChannel[bestChannel * fieldBins + fieldBin]++;
+    }
+    const isMagnetic = bestField >= threshold;
+    const split = isMagnetic ? 0 : 1;
+    if (isMagnetic) {
       magnetic++;
       byChannel[bestChannel]++;
       settingMagnetic[setting]++;
@@ -170,6 +233,9 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
     } else {
       wdMassNonMagnetic[massBin]++;
     }
+    wdMassBySetting[(setting * 2 + split) * wdMassBins + massBin]++;
+    coolingAge[split * coolingBins + coolingBin]++;
+    if (setting === POST_CE_SETTING) postCEPeriod[split * postCEPeriodBins + binIndex(BINS.log10PostCEPeriodDays, Math.log10(closestPostCEPeriod))]++;
     if (smallestMultiplier === 0) multiplierFossil++;
     else if (smallestMultiplier < Infinity) {
       const bin = Math.floor(smallestMultiplier * multiplierScale);
@@ -182,65 +248,83 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
   tally.whiteDwarfsFormed = whiteDwarfsFormed;
   tally.whiteDwarfs = whiteDwarfs;
   tally.magnetic = magnetic;
+  tally.heliumWhiteDwarfs = heliumWhiteDwarfs;
   tally.multiplierFossil = multiplierFossil;
   return tally;
 }
 
 /**
- * Decides one companion's fate and writes [fate, field MG, channel, final separation AU] into
- * fateOut. Order: engulfed? → if not, a wide survivor on an orbit widened by the mass loss;
- * if so, a common envelope: survivor if the post-CE orbit keeps the companion inside its
- * Roche lobe and outside the core, else destroyed — disrupted if its tidal radius lies outside
- * the core, merged with the core otherwise. The field is that of the destroying channel, 0 if
- * that channel is switched off.
+ * Decides one companion's fate and writes fateOut (see above). Order: no common envelope → a
+ * wide survivor on an orbit widened by the mass loss; else the Webbink budget with the giant's
+ * state at the onset: a survivor if the post-CE orbit keeps the companion inside its Roche lobe
+ * and outside the core (white-dwarf mass = core at onset for `track`, helium if the onset was on
+ * the red giant branch; the IFMR mass for `fixedReach`), else destroyed in the envelope: dissolved
+ * if lighter than the dissolution mass, otherwise shredded near the core (channel disruption).
+ * A close survivor (final period below field.closeSurvivor.maxPeriodDays) gets a field iff that
+ * channel is on.
  */
-function companionFate(prepared: PreparedScenario, m1: number, mwd: number, m2: number, periodDays: number, z: number): void {
+function companionFate(prepared: PreparedScenario, m1: number, ifmrMass: number, m2: number, periodDays: number, z: number): void {
   const a0 = semiMajorAxisAU(periodDays, m1 + m2);
   const giant = prepared.giant;
   let giantMass: number;
   let coreMass: number;
   let radiusAU: number;
-  let coreRadius: number;
+  let onsetAU: number;
+  let helium = false;
   if (giant.kind === 'fixedReach') {
-    if (!(a0 < giant.reachAU)) return survivor(WIDE, widenedSeparationAU(a0, m1 + m2, mwd + m2));
+    if (!(a0 < giant.reachAU)) return survivor(WIDE, widenedSeparationAU(a0, m1 + m2, ifmrMass + m2));
     // fixedReach: the envelope engulfs the companion at R = a0, with the final core and the full envelope.
     giantMass = m1;
-    coreMass = mwd;
+    coreMass = ifmrMass;
     radiusAU = a0;
-    coreRadius = whiteDwarfRadiusOf(mwd);
+    onsetAU = a0;
   } else {
-    if (!(a0 < criticalSeparationAU(giant.grid, m1, m2))) return survivor(WIDE, widenedSeparationAU(a0, m1 + m2, mwd + m2));
-    envelopeAtRadius(giant.grid, m1, a0, envelopeOut);
-    coreMass = envelopeOut[0];
-    giantMass = envelopeOut[1];
-    radiusAU = envelopeOut[2];
-    coreRadius = whiteDwarfRadiusRsun(coreMass);
+    if (!commonEnvelopeOnset(giant.grid, m1, m2, a0, onsetOut)) return survivor(WIDE, widenedSeparationAU(a0, m1 + m2, ifmrMass + m2));
+    coreMass = onsetOut[0];
+    giantMass = onsetOut[1];
+    radiusAU = onsetOut[2];
+    onsetAU = onsetOut[3];
+    const tip = rgbTipCoreMassMsun(m1);
+    helium = tip !== null && coreMass < tip + HELIUM_CORE_MARGIN_MSUN;
   }
-  const finalAU = postCommonEnvelopeSeparationAU(radiusAU, radiusAU, giantMass, coreMass, m2, prepared.alphaCE, prepared.lambda);
+  const coreRadius = whiteDwarfRadiusRsun(coreMass);
+  const finalAU = postCommonEnvelopeSeparationAU(onsetAU, radiusAU, giantMass, coreMass, m2, prepared.alphaCE, prepared.lambda);
   const finalRsun = finalAU * RSUN_PER_AU;
   const r2 = companionRadiusRsun(m2);
-  if (finalRsun > coreRadius && r2 < rocheLobeFraction(m2 / coreMass) * finalRsun) return survivor(POST_CE, finalAU);
-  const tidalRadius = tidalRadiusRsun(prepared.eta, r2, coreMass, m2);
-  fateOut[3] = 0;
-  if (tidalRadius > coreRadius) {
-    fateOut[0] = DISRUPTED;
-    fateOut[2] = DISRUPTION;
-    const f = prepared.field.disruption;
-    if (!prepared.disruptionMakesField) fateOut[1] = 0;
-    else if (f.kind === 'lognormal') fateOut[1] = lognormalFieldMG(f.medianMG, f.widthDex, z);
-    else fateOut[1] = lognormalFieldMG(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio), f.widthDex, z);
-  } else {
-    fateOut[0] = MERGED;
-    fateOut[2] = CORE_MERGER;
-    const f = prepared.field.coreMerger;
-    fateOut[1] = prepared.coreMergerMakesField ? lognormalFieldMG(f.medianMG, f.widthDex, z) : 0;
+  if (finalRsun > coreRadius && r2 < rocheLobeFraction(m2 / coreMass) * finalRsun) {
+    const finalPeriod = keplerPeriodDays(finalAU, coreMass + m2);
+    survivor(POST_CE, finalAU);
+    fateOut[4] = coreMass;
+    fateOut[5] = finalPeriod;
+    fateOut[6] = helium ? 1 : 0;
+    const close = prepared.field.closeSurvivor;
+    if (prepared.closeSurvivorMakesField && finalPeriod < close.maxPeriodDays) {
+      fateOut[1] = lognormalFieldMG(close.medianMG, close.widthDex, z);
+      fateOut[2] = CLOSE_SURVIVOR;
+    }
+    return;
   }
-}
-
-/** Radius of the current system's white dwarf (Rsun) in scratch[0], computed at most once per system. */
-function whiteDwarfRadiusOf(mwd: number): number {
-  if (scratch[0] === 0) scratch[0] = whiteDwarfRadiusRsun(mwd);
-  return scratch[0];
+  fateOut[3] = 0;
+  fateOut[4] = 0;
+  fateOut[5] = 0;
+  fateOut[6] = 0;
+  if (m2 < prepared.dissolutionBelowMsun) {
+    fateOut[0] = DISSOLVED;
+    fateOut[1] = 0;
+    fateOut[2] = -1;
+    return;
+  }
+  fateOut[0] = DISRUPTED;
+  fateOut[2] = DISRUPTION;
+  const f = prepared.field.disruption;
+  if (!prepared.disruptionMakesField) fateOut[1] = 0;
+  else if (f.kind === 'lognormal') fateOut[1] = lognormalFieldMG(f.medianMG, f.widthDex, z);
+  else if (f.kind === 'companionScaled') fateOut[1] = lognormalFieldMG(companionScaledMedianMG(m2, f.referenceMG, f.referenceMassMJup, f.slope), f.widthDex, z);
+  else {
+    // The debris disc forms at the companion's tidal radius around the core (η sets it).
+    const tidalRadius = tidalRadiusRsun(prepared.eta, r2, coreMass, m2);
+    fateOut[1] = lognormalFieldMG(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio), f.widthDex, z);
+  }
 }
 
 function survivor(fate: number, separationAU: number): void {
@@ -248,4 +332,8 @@ function survivor(fate: number, separationAU: number): void {
   fateOut[1] = 0;
   fateOut[2] = -1;
   fateOut[3] = separationAU;
+  fateOut[4] = 0;
+  fateOut[5] = 0;
+  fateOut[6] = 0;
 }
+

@@ -32,6 +32,16 @@ export interface ChunkTally {
   wdMassNonMagnetic: number[];
   /** log10 field of every sampled white dwarf with a field, magnetic or below the threshold. */
   logField: number[];
+  /** The same by the channel that made the field, index channel · fieldBins + bin. */
+  logFieldByChannel: number[];
+  /** White-dwarf mass by setting and magnetism, index (setting · 2 + (magnetic ? 0 : 1)) · massBins + bin. */
+  wdMassBySetting: number[];
+  /** log10 cooling age, index (magnetic ? 0 : 1) · bins + bin. */
+  coolingAge: number[];
+  /** log10 final period of the post-CE companion of post-CE white dwarfs, index (magnetic ? 0 : 1) · bins + bin. */
+  postCEPeriod: number[];
+  /** Sampled white dwarfs with a helium core (envelope ejected on the red giant branch). */
+  heliumWhiteDwarfs: number;
   /** Fate map, index (fate · massBins + massBin) · periodBins + periodBin. */
   fateMap: number[];
   /** log10 final separation of surviving companions, index setting' · bins + bin (wide, postCE). */
@@ -51,11 +61,15 @@ const ARRAY_FIELDS = [
   'wdMassMagnetic',
   'wdMassNonMagnetic',
   'logField',
+  'logFieldByChannel',
+  'wdMassBySetting',
+  'coolingAge',
+  'postCEPeriod',
   'fateMap',
   'survivorSeparation',
   'multiplierBins',
 ] as const;
-const SCALAR_FIELDS = ['chunks', 'systems', 'whiteDwarfsFormed', 'whiteDwarfs', 'magnetic', 'multiplierFossil'] as const;
+const SCALAR_FIELDS = ['chunks', 'systems', 'whiteDwarfsFormed', 'whiteDwarfs', 'magnetic', 'heliumWhiteDwarfs', 'multiplierFossil'] as const;
 
 /** An all-zero tally for the scenario with this hash. */
 export function emptyTallyFor(scenarioHash: string): ChunkTally {
@@ -76,6 +90,11 @@ export function emptyTallyFor(scenarioHash: string): ChunkTally {
     wdMassMagnetic: zeros(BINS.wdMassMsun.count),
     wdMassNonMagnetic: zeros(BINS.wdMassMsun.count),
     logField: zeros(BINS.log10FieldMG.count),
+    logFieldByChannel: zeros(CHANNELS.length * BINS.log10FieldMG.count),
+    wdMassBySetting: zeros(SETTINGS.length * 2 * BINS.wdMassMsun.count),
+    coolingAge: zeros(2 * BINS.log10CoolingAgeGyr.count),
+    postCEPeriod: zeros(2 * BINS.log10PostCEPeriodDays.count),
+    heliumWhiteDwarfs: 0,
     fateMap: zeros(FATES.length * BINS.log10CompanionMsun.count * BINS.log10PeriodDays.count),
     survivorSeparation: zeros(2 * BINS.log10SeparationAU.count),
     multiplierFossil: 0,

@@ -37,9 +37,9 @@ describe('giant.kind = "track" wiring', () => {
     for (let i = 0; i < prepared.chunkCount; i++) tally = addTally(tally, runChunk(prepared, i));
     const result = buildResult(scenario, tally, { prepared });
     const fates = result.counts.companionFates;
-    const n = fates.wide + fates.postCE + fates.disrupted + fates.merged;
+    const n = fates.wide + fates.postCE + fates.disrupted + fates.dissolved!;
     expect(n).toBe(400_000); // occurrence 1: every white dwarf has one companion
-    const engulfed = (fates.postCE + fates.disrupted + fates.merged) / n;
+    const engulfed = (fates.postCE + fates.disrupted + fates.dissolved!) / n;
 
     // Quadrature: M1 ∝ M^-2.35 on [1, 4] (in ln M: M^-1.35), M2 and P log-uniform; engulfed iff a0 < a_crit.
     const k = 120;

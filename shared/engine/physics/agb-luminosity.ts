@@ -1,22 +1,22 @@
 import { EngineError } from '../errors.ts';
 
-/** Core mass at which Paczyński's relation reaches zero luminosity, Msun. */
-const PACZYNSKI_ZERO_CORE_MASS_MSUN = 0.495;
+/** The zero point as Paczyński's relation is usually quoted, Msun (from memory). */
+export const PACZYNSKI_ZERO_POINT_MSUN = 0.522;
 
 /**
  * Core-mass–luminosity relation of the asymptotic giant branch, Lsun:
- *   L = 59250 (Mc − 0.495)
- * Source: Paczyński 1970, Acta Astronomica 20, 47, in the form DESIGN quotes. Caution (from
- * memory): the relation is also widely quoted with a zero point of 0.522 Msun instead of 0.495;
- * that version is 59250 × 0.027 ≈ 1600 Lsun fainter at every core mass. Tidefield adopts 0.495.
+ *   L = 59250 (Mc − Mc0)
+ * Source: Paczyński 1970, Acta Astronomica 20, 47. The zero point Mc0 is an option
+ * (`giant.agbZeroPointMsun`): 0.522 Msun as the relation is usually quoted, 0.495 Msun in a later
+ * recalibration (both from memory; the 0.027 Msun between them is ≈ 1600 Lsun at every core mass).
  *
- * Units: hydrogen-exhausted core mass in Msun; valid 0.495 < Mc ≤ 1.44 Msun (the relation
- * describes the thermally pulsing AGB; close to its zero point it is an extrapolation).
- * Example: Mc = 0.6 → 6221.25 Lsun; Mc = 0.8 → 18071.25 Lsun.
+ * Units: hydrogen-exhausted core mass and zero point in Msun; valid Mc0 < Mc ≤ 1.44 Msun (the
+ * relation describes the thermally pulsing AGB; close to its zero point it is an extrapolation).
+ * Example: Mc = 0.6, Mc0 = 0.522 → 4621.5 Lsun; Mc0 = 0.495 → 6221.25 Lsun.
  */
-export function agbLuminosityLsun(coreMassMsun: number): number {
-  if (!(coreMassMsun > PACZYNSKI_ZERO_CORE_MASS_MSUN && coreMassMsun <= 1.44)) {
-    throw new EngineError('coreMassMsun', coreMassMsun, '(0.495, 1.44] Msun');
+export function agbLuminosityLsun(coreMassMsun: number, zeroPointMsun: number = PACZYNSKI_ZERO_POINT_MSUN): number {
+  if (!(coreMassMsun > zeroPointMsun && coreMassMsun <= 1.44)) {
+    throw new EngineError('coreMassMsun', coreMassMsun, `(${zeroPointMsun}, 1.44] Msun`);
   }
-  return 59250 * (coreMassMsun - PACZYNSKI_ZERO_CORE_MASS_MSUN);
+  return 59250 * (coreMassMsun - zeroPointMsun);
 }

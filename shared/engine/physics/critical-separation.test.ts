@@ -25,12 +25,14 @@ describe('critical separation for engulfment', () => {
       }
     }
   });
-  it('with the tide off, is the no-tide boundary max R(t) M_total(t)/M_total(0) (orbit-mass-loss.ts), and the tide only pushes it out', () => {
+  it('with the tide off, is the no-tide Roche-lobe boundary max [R(t)/r_L(t)] M_total(t)/M_total(0) (orbit-mass-loss.ts; Eggleton 1983 r_L written out here), and the tide only pushes it out', () => {
     const track = tracks[1];
     const bare = criticalSeparationOnTrackAU(track, MJUP_MSUN, { kind: 'none' });
+    // Eggleton 1983, eq. 2, typed in: r_L/a = 0.49 q^(2/3) / (0.6 q^(2/3) + ln(1 + q^(1/3))).
+    const rL = (q: number) => (0.49 * q ** (2 / 3)) / (0.6 * q ** (2 / 3) + Math.log(1 + q ** (1 / 3)));
     let expected = 0;
     for (let k = 0; k < track.radiusAU.length; k++) {
-      expected = Math.max(expected, (track.radiusAU[k] * (track.massMsun[k] + MJUP_MSUN)) / (track.massMsun[0] + MJUP_MSUN));
+      expected = Math.max(expected, ((track.radiusAU[k] / rL(track.massMsun[k] / MJUP_MSUN)) * (track.massMsun[k] + MJUP_MSUN)) / (track.massMsun[0] + MJUP_MSUN));
     }
     expect(bare / expected).toBeCloseTo(1, 12);
     expect(evolveOrbitAlongTrack(track, MJUP_MSUN, bare * 0.999, { kind: 'none' }).engulfed).toBe(true);

@@ -2,6 +2,7 @@ import type { GiantTrackOptions } from '../../contracts/giant-track.ts';
 import { EngineError, requireInRange } from '../errors.ts';
 import type { GiantTrack } from './giant-track.ts';
 import { evolveOrbitAlongTrack } from './orbit-evolution.ts';
+import { rocheLobeFraction } from './roche-lobe-eggleton1983.ts';
 
 /** Bisection stops when the bracket [lo, hi] satisfies ln(hi/lo) below this (0.05 per cent). */
 const LOG_TOLERANCE = 5e-4;
@@ -13,15 +14,15 @@ const HINTED_GROWTH = 1.1;
 const MAX_TIDAL_REACH = 1e3;
 
 /**
- * Critical initial separation a_crit for engulfment of a companion by a giant, AU: every orbit
- * starting inside a_crit is engulfed at some time on the track (orbit-evolution.ts), every one
- * outside survives.
+ * Critical initial separation a_crit for the onset of a common envelope, AU: every orbit
+ * starting inside a_crit meets a giant that fills its Roche lobe towards the companion at some
+ * time on the track (orbit-evolution.ts), every one outside survives.
  *
  * Method: bisection in ln a0. Monotonicity assumption: if a0 is engulfed, every a0' < a0 is too.
  * It holds for the exact ODE: d ln a/dt = F(t, ln a) is a scalar ODE with a Lipschitz right
  * side, so two solutions can never cross; the orbit from a0' stays inside the one from a0, which
  * reaches R_star. (Checked numerically in critical-separation.test.ts.) The bracket starts at the
- * no-tide boundary a_wind = max_t R(t) M_total(t) / M_total(0) — the tide only shrinks orbits, so
+ * no-tide boundary a_wind = max_t [R(t)/r_L(t)] M_total(t) / M_total(0) — the tide only shrinks orbits, so
  * everything inside it is engulfed — and grows by factors 1.25 until an orbit survives; with the
  * tide off a_crit is a_wind itself.
  *
@@ -31,7 +32,8 @@ const MAX_TIDAL_REACH = 1e3;
  * before use.
  *
  * Units: companion mass in Msun (10⁻⁶–10), hint in AU. Result in AU, relative precision 5×10⁻⁴.
- * Example: 1 MJup around the 1 Msun track (IFMR mass 0.569, default options): ≈ 2.53 AU.
+ * Example: 1 MJup around the 1 Msun track (IFMR mass 0.569, default options): a few AU (the
+ * Roche-lobe onset sits at R/r_L ≈ 1.3 R for a planet).
  */
 export function criticalSeparationOnTrackAU(
   track: GiantTrack,
@@ -44,7 +46,8 @@ export function criticalSeparationOnTrackAU(
   const { radiusAU, massMsun } = track;
   let windBoundary = 0;
   for (let k = 0; k < radiusAU.length; k++) {
-    windBoundary = Math.max(windBoundary, (radiusAU[k] * (massMsun[k] + companionMassMsun)) / (massMsun[0] + companionMassMsun));
+    const onsetSeparation = radiusAU[k] / rocheLobeFraction(massMsun[k] / companionMassMsun);
+    windBoundary = Math.max(windBoundary, (onsetSeparation * (massMsun[k] + companionMassMsun)) / (massMsun[0] + companionMassMsun));
   }
   if (tide.kind === 'none') return windBoundary;
   const engulfed = (a0: number) => evolveOrbitAlongTrack(track, companionMassMsun, a0, tide).engulfed;

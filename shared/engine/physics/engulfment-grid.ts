@@ -4,19 +4,25 @@ import { bytesToHex, utf8ToBytes } from '@noble/hashes/utils.js';
 import type { GiantTrackOptions } from '../../contracts/giant-track.ts';
 import { EngineError, requireInRange } from '../errors.ts';
 import { criticalSeparationOnTrackAU } from './critical-separation.ts';
-import { buildGiantTrack, type GiantTrack } from './giant-track.ts';
+import { buildGiantTrack } from './giant-track.ts';
+import { evolveOrbitAlongTrack } from './orbit-evolution.ts';
 
 /**
  * Version of the grid algorithm, part of the cache key: bump it whenever the physics or the
  * numerics of the track, the orbit integration or the tables change.
  */
-const ALGORITHM_VERSION = 'tidefield-engulfment-grid/1';
+const ALGORITHM_VERSION = 'tidefield-engulfment-grid/2';
 /**
- * Samples per primary node of the envelope-at-radius table, uniform in ln R (≈ 2% in R apart).
- * The first-crossing state jumps where the AGB first outgrows the red-giant tip (the core mass
- * jumps from 0.47 to the AGB's); linear interpolation smears that jump over one sample step.
+ * Samples per (M1, M2) node of the onset table, uniform in x = ln(a0 / a_crit) from
+ * ONSET_LOG_RATIO_MIN to ONSET_LOG_RATIO_MAX (≈ 0.095 in x, 10% in a0, apart). The onset state
+ * jumps where an orbit that escapes the red-giant tip is caught on the AGB (the core mass jumps
+ * from ≈ 0.47 to the AGB's); linear interpolation smears that jump over one sample step.
  */
-const ENVELOPE_SAMPLES = 256;
+const ONSET_SAMPLES = 64;
+/** x = ln(a0/a_crit) of the first sample: a0 = a_crit/400, inside the giant's Roche lobe at the track's start for every grid node (below it the state is the start's). */
+const ONSET_LOG_RATIO_MIN = -6;
+/** x of the last sample, just inside a_crit (its bisection tolerance is 5×10⁻⁴ in ln a). */
+const ONSET_LOG_RATIO_MAX = -1e-3;
 
 export interface EngulfmentGridInput {
   /** Ascending grid nodes in initial primary mass, Msun (0.8–8). */
@@ -44,13 +50,19 @@ export interface EngulfmentGrid {
   logCompanionMass: number[];
   /** ln(a_crit / AU), M1 × M2, row-major. */
   logCriticalSeparationAU: number[];
-  envelopeSamples: number;
-  /** ln(R / AU) at the first and at the largest radius of each primary's track. */
-  logRadiusStartAU: number[];
-  logRadiusMaxAU: number[];
-  /** Core and total mass (Msun) the first time the radius reaches each sample, uniform in ln R from start to max. */
-  envelopeCoreMassMsun: number[];
-  envelopeTotalMassMsun: number[];
+  /** Samples per (M1, M2) node of the onset tables, uniform in x = ln(a0/a_crit) over [onsetLogRatioMin, onsetLogRatioMax]. */
+  onsetSamples: number;
+  onsetLogRatioMin: number;
+  onsetLogRatioMax: number;
+  /**
+   * The giant's state at the onset of the common envelope (it fills its Roche lobe towards the
+   * companion on the tidally decaying orbit), entry ((i · M2count) + j) · onsetSamples + k:
+   * core mass and total mass (Msun), radius and orbital separation (AU) at that moment.
+   */
+  onsetCoreMassMsun: number[];
+  onsetStarMassMsun: number[];
+  onsetRadiusAU: number[];
+  onsetSeparationAU: number[];
 }
 
 /**
@@ -68,18 +80,19 @@ export function engulfmentGridKey(input: EngulfmentGridInput): string {
 /**
  * Builds the engulfment grid: for every primary node its analytic giant track (giant-track.ts)
  * and for every companion node the critical separation a_crit (critical-separation.ts, a
- * bisection on the orbit ODE, relative precision 5×10⁻⁴), plus the envelope-at-radius table.
- * Cost: one track per primary node and ~20 orbit integrations per (M1, M2) node.
+ * bisection on the orbit ODE, relative precision 5×10⁻⁴), plus the onset table: the giant's
+ * state at the onset of the common envelope for 64 initial separations from a_crit/400 to a_crit.
+ * Cost: one track per primary node and ~20 + 64 orbit integrations per (M1, M2) node.
  * Units: masses in Msun. Example: 24 primaries (0.8–8 Msun) × 16 companions (10⁻⁴–1 Msun).
  */
 export function buildEngulfmentGrid(input: EngulfmentGridInput): EngulfmentGrid {
   const key = engulfmentGridKey(input);
   const { primaryMassesMsun, finalCoreMassesMsun, companionMassesMsun, track: options } = input;
   const logCriticalSeparationAU: number[] = [];
-  const logRadiusStartAU: number[] = [];
-  const logRadiusMaxAU: number[] = [];
-  const envelopeCoreMassMsun: number[] = [];
-  const envelopeTotalMassMsun: number[] = [];
+  const onsetCoreMassMsun: number[] = [];
+  const onsetStarMassMsun: number[] = [];
+  const onsetRadiusAU: number[] = [];
+  const onsetSeparationAU: number[] = [];
   for (let i = 0; i < primaryMassesMsun.length; i++) {
     const track = buildGiantTrack(primaryMassesMsun[i], finalCoreMassesMsun[i], options);
     let hint = 0;
@@ -87,8 +100,16 @@ export function buildEngulfmentGrid(input: EngulfmentGridInput): EngulfmentGrid 
       // Companions ascend, and a heavier companion is engulfed wherever a lighter one is.
       hint = criticalSeparationOnTrackAU(track, m2, options.tide, hint);
       logCriticalSeparationAU.push(Math.log(hint));
+      for (let k = 0; k < ONSET_SAMPLES; k++) {
+        const x = ONSET_LOG_RATIO_MIN + ((ONSET_LOG_RATIO_MAX - ONSET_LOG_RATIO_MIN) * k) / (ONSET_SAMPLES - 1);
+        // One direct integration per sample, stopped at the onset (the hot loop interpolates).
+        const onset = evolveOrbitAlongTrack(track, m2, hint * Math.exp(x), options.tide);
+        onsetCoreMassMsun.push(onset.coreMassMsun);
+        onsetStarMassMsun.push(onset.starMassMsun);
+        onsetRadiusAU.push(onset.radiusAU);
+        onsetSeparationAU.push(onset.separationAU);
+      }
     }
-    appendEnvelopeTable(track, logRadiusStartAU, logRadiusMaxAU, envelopeCoreMassMsun, envelopeTotalMassMsun);
   }
   return {
     algorithmVersion: ALGORITHM_VERSION,
@@ -96,11 +117,13 @@ export function buildEngulfmentGrid(input: EngulfmentGridInput): EngulfmentGrid 
     logPrimaryMass: primaryMassesMsun.map(Math.log),
     logCompanionMass: companionMassesMsun.map(Math.log),
     logCriticalSeparationAU,
-    envelopeSamples: ENVELOPE_SAMPLES,
-    logRadiusStartAU,
-    logRadiusMaxAU,
-    envelopeCoreMassMsun,
-    envelopeTotalMassMsun,
+    onsetSamples: ONSET_SAMPLES,
+    onsetLogRatioMin: ONSET_LOG_RATIO_MIN,
+    onsetLogRatioMax: ONSET_LOG_RATIO_MAX,
+    onsetCoreMassMsun,
+    onsetStarMassMsun,
+    onsetRadiusAU,
+    onsetSeparationAU,
   };
 }
 
@@ -131,76 +154,60 @@ export function criticalSeparationAU(grid: EngulfmentGrid, m1Msun: number, m2Msu
 }
 
 /**
- * The primary's state the first time its radius reaches radiusAU along the track, for the
- * common-envelope energy budget: writes [core mass Msun, total mass Msun, radius used AU] into
- * `out` (length ≥ 3) and returns it. The radius used is radiusAU clamped to the range the track
- * spans at this M1 (from its first radius to the largest it reaches, both interpolated in ln M1).
- * Between primary nodes each node's table is read at that radius (clamped to the node's own
- * range) and the two states are blended linearly in ln M1. The first-crossing state jumps where
- * the AGB outgrows the red-giant tip; between nodes that jump is smeared over the radii between
- * the two nodes' tip radii (a few per cent in R). Allocation-free.
- * Units: m1 in Msun (> 0, clamped to the grid), radius in AU (> 0).
- * Example: default 24-node grid, M1 = 1, R = 0.9 AU (just below its red-giant tip at ≈ 0.95 AU)
- * → ≈ [0.464, 0.748, 0.9].
+ * The giant's state at the onset of the common envelope for a companion of mass m2 starting at
+ * a0: returns false (and leaves `out` alone) if a0 ≥ a_crit(M1, M2) — no common envelope — and
+ * otherwise writes [core mass Msun, total mass Msun, radius AU, separation AU] at the onset into
+ * `out` (length ≥ 4) and returns true. The state is read from the onset tables at
+ * x = ln(a0 / a_crit): linearly between the x samples of each of the four surrounding
+ * (ln M1, ln M2) nodes, then bilinearly between the nodes (the same weights as a_crit). Below
+ * the first sample x is clamped (the onset is then the track's first node for every grid node).
+ * Allocation-free: it runs in the hot loop. Units: masses in Msun (> 0, clamped to the grid), a0 in AU.
+ * Example: default grid of baseline-track, M1 = 1, M2 = 0.3, a0 = 1.76 AU → a red-giant-branch
+ * onset: core ≈ 0.3 Msun, envelope ≈ 0.6 Msun, R ≈ 40 Rsun.
  */
-export function envelopeAtRadius(grid: EngulfmentGrid, m1Msun: number, radiusAU: number, out: Float64Array): Float64Array {
+export function commonEnvelopeOnset(grid: EngulfmentGrid, m1Msun: number, m2Msun: number, a0AU: number, out: Float64Array): boolean {
   if (!(m1Msun > 0 && m1Msun < Infinity)) throw new EngineError('m1Msun', m1Msun, '(0, ∞) Msun');
-  if (!(radiusAU > 0 && radiusAU < Infinity)) throw new EngineError('radiusAU', radiusAU, '(0, ∞) AU');
-  if (out.length < 3) throw new EngineError('out.length', out.length, '[3, ∞)');
+  if (!(m2Msun > 0 && m2Msun < Infinity)) throw new EngineError('m2Msun', m2Msun, '(0, ∞) Msun');
   const xs = grid.logPrimaryMass;
+  const ys = grid.logCompanionMass;
   const x = clamp(Math.log(m1Msun), xs[0], xs[xs.length - 1]);
+  const y = clamp(Math.log(m2Msun), ys[0], ys[ys.length - 1]);
   const i = lowerNode(xs, x);
+  const j = lowerNode(ys, y);
   const wx = (x - xs[i]) / (xs[i + 1] - xs[i]);
-  const starts = grid.logRadiusStartAU;
-  const maxima = grid.logRadiusMaxAU;
-  const lnR = clamp(Math.log(radiusAU), (1 - wx) * starts[i] + wx * starts[i + 1], (1 - wx) * maxima[i] + wx * maxima[i + 1]);
-  const samples = grid.envelopeSamples;
-  // Each node is read at the same radius, clamped to its own range, then the two are blended.
-  const p0 = tablePosition(lnR, starts[i], maxima[i], samples);
-  const p1 = tablePosition(lnR, starts[i + 1], maxima[i + 1], samples);
-  out[0] = (1 - wx) * tableValue(grid.envelopeCoreMassMsun, i * samples, p0, samples) + wx * tableValue(grid.envelopeCoreMassMsun, (i + 1) * samples, p1, samples);
-  out[1] = (1 - wx) * tableValue(grid.envelopeTotalMassMsun, i * samples, p0, samples) + wx * tableValue(grid.envelopeTotalMassMsun, (i + 1) * samples, p1, samples);
-  out[2] = Math.exp(lnR);
-  return out;
-}
-
-/** Fractional index in a node's table of samples uniform in ln R over [start, max], clamped to the table. */
-function tablePosition(lnR: number, start: number, max: number, samples: number): number {
-  if (!(max > start)) return 0;
-  return clamp(((lnR - start) / (max - start)) * (samples - 1), 0, samples - 1);
-}
-
-/** Linear interpolation at a fractional position in the row of `samples` values starting at offset. */
-function tableValue(table: number[], offset: number, position: number, samples: number): number {
-  const k = Math.min(Math.floor(position), samples - 2);
+  const wy = (y - ys[j]) / (ys[j + 1] - ys[j]);
+  const row = ys.length;
+  const n00 = i * row + j;
+  const n10 = n00 + row;
+  const table = grid.logCriticalSeparationAU;
+  const logCritical = (1 - wx) * ((1 - wy) * table[n00] + wy * table[n00 + 1]) + wx * ((1 - wy) * table[n10] + wy * table[n10 + 1]);
+  const ratio = Math.log(a0AU) - logCritical;
+  if (!(ratio < 0)) return false;
+  const samples = grid.onsetSamples;
+  const lo = grid.onsetLogRatioMin;
+  const position = clamp(((ratio - lo) / (grid.onsetLogRatioMax - lo)) * (samples - 1), 0, samples - 1);
+  const k = position < samples - 1 ? Math.floor(position) : samples - 2;
   const w = position - k;
-  return (1 - w) * table[offset + k] + w * table[offset + k + 1];
+  const w00 = (1 - wx) * (1 - wy);
+  const w01 = (1 - wx) * wy;
+  const w10 = wx * (1 - wy);
+  const w11 = wx * wy;
+  const o00 = n00 * samples + k;
+  const o01 = o00 + samples;
+  const o10 = n10 * samples + k;
+  const o11 = o10 + samples;
+  out[0] = blend(grid.onsetCoreMassMsun, o00, o01, o10, o11, w00, w01, w10, w11, w);
+  out[1] = blend(grid.onsetStarMassMsun, o00, o01, o10, o11, w00, w01, w10, w11, w);
+  out[2] = blend(grid.onsetRadiusAU, o00, o01, o10, o11, w00, w01, w10, w11, w);
+  out[3] = blend(grid.onsetSeparationAU, o00, o01, o10, o11, w00, w01, w10, w11, w);
+  return true;
 }
 
-/** The first-crossing table of one track: core and total mass the first time R reaches each sample radius. */
-function appendEnvelopeTable(track: GiantTrack, starts: number[], maxima: number[], cores: number[], totals: number[]): void {
-  const { radiusAU, coreMassMsun, massMsun } = track;
-  const largest = Math.max(...radiusAU);
-  const start = Math.log(radiusAU[0]);
-  const max = Math.log(largest);
-  starts.push(start);
-  maxima.push(max);
-  // k scans the nodes once: the first node at or above a radius never moves back as the radius grows.
-  let k = 0;
-  for (let s = 0; s < ENVELOPE_SAMPLES; s++) {
-    // min(): exp(log(x)) may round above x, and the last sample must find the largest node.
-    const r = s === ENVELOPE_SAMPLES - 1 ? largest : Math.min(largest, Math.exp(start + ((max - start) * s) / (ENVELOPE_SAMPLES - 1)));
-    while (k < radiusAU.length - 1 && radiusAU[k] < r) k++;
-    if (k === 0 || radiusAU[k] < r) {
-      cores.push(coreMassMsun[k]);
-      totals.push(massMsun[k]);
-      continue;
-    }
-    // Node k is the first to reach r and node k − 1 is below it: interpolate the crossing.
-    const w = (r - radiusAU[k - 1]) / (radiusAU[k] - radiusAU[k - 1]);
-    cores.push(coreMassMsun[k - 1] + w * (coreMassMsun[k] - coreMassMsun[k - 1]));
-    totals.push(massMsun[k - 1] + w * (massMsun[k] - massMsun[k - 1]));
-  }
+/** Bilinear blend of four nodes' values, each linear between its samples at offset and offset + 1. */
+function blend(t: number[], o00: number, o01: number, o10: number, o11: number, w00: number, w01: number, w10: number, w11: number, w: number): number {
+  const v = w00 * t[o00] + w01 * t[o01] + w10 * t[o10] + w11 * t[o11];
+  const v1 = w00 * t[o00 + 1] + w01 * t[o01 + 1] + w10 * t[o10 + 1] + w11 * t[o11 + 1];
+  return v + w * (v1 - v);
 }
 
 function validateInput(input: EngulfmentGridInput): void {

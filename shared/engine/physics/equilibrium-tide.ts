@@ -63,6 +63,23 @@ export function equilibriumTideDecayRatePerYr(
   requireInRange('separationAU', separationAU, 1e-6, 1e7, 'AU');
   requireInRange('starRadiusAU', starRadiusAU, 0, separationAU, 'AU (at most the separation)');
   requireInRange('orbitalPeriodYr', orbitalPeriodYr, 1e-9, 1e12, 'yr');
+  return tideDecayRateUnchecked(eddyTimeYr, envelopeMassMsun, starMassMsun, companionMassMsun, starRadiusAU, separationAU, orbitalPeriodYr);
+}
+
+/**
+ * equilibriumTideDecayRatePerYr without its range checks, for the orbit integrator
+ * (orbit-evolution.ts), whose inputs come from a validated track and stay in range by
+ * construction; the checks were most of the cost of a rate evaluation there.
+ */
+export function tideDecayRateUnchecked(
+  eddyTimeYr: number,
+  envelopeMassMsun: number,
+  starMassMsun: number,
+  companionMassMsun: number,
+  starRadiusAU: number,
+  separationAU: number,
+  orbitalPeriodYr: number,
+): number {
   const q = companionMassMsun / starMassMsun;
   const x = orbitalPeriodYr / (2 * eddyTimeYr);
   const f = ZAHN_F_SATURATED * Math.min(1, x * x);

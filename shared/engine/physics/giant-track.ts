@@ -1,7 +1,7 @@
 import type { GiantTrackOptions } from '../../contracts/giant-track.ts';
 import { RSUN_PER_AU } from '../constants.ts';
 import { EngineError, requireInRange } from '../errors.ts';
-import { agbLuminosityLsun } from './agb-luminosity.ts';
+import { agbLuminosityLsun, PACZYNSKI_ZERO_POINT_MSUN } from './agb-luminosity.ts';
 import { bloeckerMassLossMsunPerYr } from './bloecker-superwind.ts';
 import { coreGrowthRateMsunPerYr } from './core-growth.ts';
 import { eddyTurnoverTimeYr } from './equilibrium-tide.ts';
@@ -23,6 +23,11 @@ export interface GiantTrack {
   agbStartIndex: number;
   /** Why the track stops: the core reached the IFMR mass, or the wind took the envelope first. */
   endReason: 'final-core-mass' | 'envelope-exhausted';
+  /**
+   * Factor on the AGB wind that times the superwind so that the envelope lasts until the core
+   * reaches the IFMR mass: 1 when the scenario's wind already lets it, below 1 otherwise.
+   */
+  agbWindScale: number;
   /** Time since the start of the red giant branch (or of the AGB when there is none), yr. */
   timeYr: number[];
   coreMassMsun: number[];
@@ -34,8 +39,14 @@ export interface GiantTrack {
   eddyTimeYr: number[];
 }
 
-/** Core mass at which the AGB starts, Msun: Paczyński's relation gives ≈ 300 Lsun there, an early-AGB luminosity (assumption; the core growth on the skipped horizontal branch is not followed). */
-const AGB_START_CORE_MASS_MSUN = 0.5;
+/**
+ * Core mass at which the AGB starts, above Paczyński's zero point, Msun: the relation gives
+ * 59250 × 0.005 ≈ 300 Lsun there, an early-AGB luminosity (assumption; the core growth on the
+ * skipped horizontal branch is not followed).
+ */
+const AGB_START_ABOVE_ZERO_POINT_MSUN = 0.005;
+/** The superwind timing is searched until the AGB wind scale is known to this relative precision. */
+const WIND_SCALE_TOLERANCE = 1e-3;
 /** Envelope mass below which the star leaves the AGB (or RGB) and the track ends, Msun (assumption, common practice: post-AGB departure at 10⁻³–10⁻² Msun). */
 const ENVELOPE_EXHAUSTED_MSUN = 1e-3;
 /** Step control: at most this relative change in luminosity per step (R ∝ L^0.76 then changes by ≲ 1%). */
@@ -56,7 +67,10 @@ interface Phase {
  * then (horizontal branch skipped, as DESIGN allows) the AGB (Paczyński 1970 luminosity,
  * Reimers wind and the Blöcker 1995 superwind, whichever is larger) until the core reaches the
  * IFMR's final mass (if that mass lies between the red-giant tip core and the AGB start at
- * 0.5 Msun the track ends at the tip; if below the tip, on the red giant branch). The core grows
+ * Mc0 + 0.005 Msun the track ends at the tip; if below the tip, on the red giant branch). The
+ * superwind is timed so that the core reaches the IFMR mass: if the AGB wind would empty the
+ * envelope first, it is scaled down (agbWindScale, by bisection) until it just lets the core get
+ * there. The core grows
  * as dMc/dt = A L (core-growth.ts); the total mass as dM/dt = −Ṁ_wind. Core mass is the
  * independent variable (RK4 with steps that keep ΔL/L ≤ 1.25%, the envelope lost per step
  * ≤ 2% and ΔMc ≤ 0.002 Msun); time follows from dt = dMc/(A L). The red giant branch ends at
@@ -87,6 +101,7 @@ export function buildGiantTrack(initialMassMsun: number, finalCoreMassMsun: numb
     finalCoreMassMsun,
     agbStartIndex: 0,
     endReason: 'final-core-mass',
+    agbWindScale: 1,
     timeYr: [],
     coreMassMsun: [],
     massMsun: [],
@@ -97,12 +112,14 @@ export function buildGiantTrack(initialMassMsun: number, finalCoreMassMsun: numb
   const state = { coreMassMsun: 0, massMsun: initialMassMsun, timeYr: 0 };
   const reimers = (l: number, r: number, m: number) => reimersMassLossMsunPerYr(eta, l, r, m);
 
+  const zeroPoint = requireInRange('agbZeroPointMsun', options.agbZeroPointMsun ?? PACZYNSKI_ZERO_POINT_MSUN, 0.45, 0.55, 'Msun');
+  const agbStartCore = zeroPoint + AGB_START_ABOVE_ZERO_POINT_MSUN;
   const tip = rgbTipCoreMassMsun(initialMassMsun);
   state.coreMassMsun = RGB_BASE_CORE_MASS_MSUN;
   if (tip !== null) {
     const rgb: Phase = { luminosityLsun: (mc) => giantBranchLuminosityLsun(mc, initialMassMsun), massLossMsunPerYr: reimers };
     const exhausted = followPhase(track, state, rgb, Math.min(tip, finalCoreMassMsun));
-    if (exhausted || finalCoreMassMsun <= Math.max(tip, AGB_START_CORE_MASS_MSUN)) {
+    if (exhausted || finalCoreMassMsun <= Math.max(tip, agbStartCore)) {
       track.agbStartIndex = track.timeYr.length;
       if (exhausted) track.endReason = 'envelope-exhausted';
       return track;
@@ -110,7 +127,7 @@ export function buildGiantTrack(initialMassMsun: number, finalCoreMassMsun: numb
   }
 
   // Horizontal branch skipped: the core jumps to the AGB start at the same time and total mass.
-  state.coreMassMsun = Math.max(state.coreMassMsun, AGB_START_CORE_MASS_MSUN);
+  state.coreMassMsun = Math.max(state.coreMassMsun, agbStartCore);
   if (state.massMsun - state.coreMassMsun <= ENVELOPE_EXHAUSTED_MSUN) {
     track.agbStartIndex = track.timeYr.length;
     track.endReason = 'envelope-exhausted';
@@ -118,13 +135,44 @@ export function buildGiantTrack(initialMassMsun: number, finalCoreMassMsun: numb
   }
   track.agbStartIndex = track.timeYr.length;
   const etaB = superwind.kind === 'bloecker1995' ? superwind.eta : 0;
-  const agb: Phase = {
-    luminosityLsun: agbLuminosityLsun,
+  const agbPhase = (scale: number): Phase => ({
+    luminosityLsun: (mc) => agbLuminosityLsun(mc, zeroPoint),
     massLossMsunPerYr: (l, r, m) =>
-      etaB > 0 ? Math.max(reimers(l, r, m), bloeckerMassLossMsunPerYr(etaB, l, r, m, initialMassMsun)) : reimers(l, r, m),
+      scale * (etaB > 0 ? Math.max(reimers(l, r, m), bloeckerMassLossMsunPerYr(etaB, l, r, m, initialMassMsun)) : reimers(l, r, m)),
+  });
+  const start = { ...state };
+  const nodes = track.timeYr.length;
+  const attempt = (scale: number): boolean => {
+    truncateTrack(track, nodes);
+    Object.assign(state, start);
+    return followPhase(track, state, agbPhase(scale), finalCoreMassMsun);
   };
-  if (followPhase(track, state, agb, finalCoreMassMsun)) track.endReason = 'envelope-exhausted';
+  if (!attempt(1)) return track;
+  // The wind empties the envelope before the core reaches the IFMR mass: time the superwind by
+  // the largest AGB wind scale that still lets the core get there (bisection; the envelope left
+  // at the end is then small and blown off at once, as with a wind that does not exhaust it).
+  let lo = 0;
+  let hi = 1;
+  while (hi - lo > WIND_SCALE_TOLERANCE * hi) {
+    const mid = 0.5 * (lo + hi);
+    if (attempt(mid)) hi = mid;
+    else lo = mid;
+  }
+  if (lo === 0 || attempt(lo)) {
+    // Even a vanishing AGB wind cannot keep the envelope (it was nearly gone at the AGB start).
+    track.endReason = 'envelope-exhausted';
+  }
+  track.agbWindScale = lo;
   return track;
+}
+
+function truncateTrack(track: GiantTrack, nodes: number): void {
+  track.timeYr.length = nodes;
+  track.coreMassMsun.length = nodes;
+  track.massMsun.length = nodes;
+  track.luminosityLsun.length = nodes;
+  track.radiusAU.length = nodes;
+  track.eddyTimeYr.length = nodes;
 }
 
 /**

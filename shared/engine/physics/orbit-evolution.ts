@@ -1,17 +1,22 @@
 import type { GiantTrackOptions } from '../../contracts/giant-track.ts';
 import { EngineError, requireInRange } from '../errors.ts';
-import { equilibriumTideDecayRatePerYr } from './equilibrium-tide.ts';
+import { tideDecayRateUnchecked } from './equilibrium-tide.ts';
 import type { GiantTrack } from './giant-track.ts';
 import { periodDays } from './kepler.ts';
+import { rocheLobeFraction } from './roche-lobe-eggleton1983.ts';
 
 /** Outcome of one orbit followed along a giant track. */
 export interface OrbitOutcome {
-  /** True if the separation fell to the star's radius or below at some time on the track. */
+  /** True if the giant filled its Roche lobe towards the companion at some time on the track (the onset of the common envelope). */
   engulfed: boolean;
-  /** Track time of engulfment, or of the track's end if the companion survives, yr. */
+  /** Track time of the onset, or of the track's end if the companion survives, yr. */
   timeYr: number;
   /** Separation at that time, AU. */
   separationAU: number;
+  /** The giant's core mass, total mass (Msun) and radius (AU) at that time. */
+  coreMassMsun: number;
+  starMassMsun: number;
+  radiusAU: number;
 }
 
 /** Orbital period at 1 AU around 1 Msun in Julian years (kepler.ts, Gaussian constant). */
@@ -37,12 +42,15 @@ const MAX_SUBSTEPS = 2_000_000;
  * The variable u = ln(a M_total) is integrated, so with the tide off a · M_total is conserved
  * exactly. Stellar quantities are interpolated linearly in time between track nodes; RK4
  * substeps keep |Δ ln a| ≤ 0.02 per substep; intervals where the tide changes ln a by < 10⁻⁶
- * take one trapezoid step. Engulfment: a ≤ R_star at a node or substep.
+ * take one trapezoid step. Onset of the common envelope: the giant fills its Roche lobe towards
+ * the companion, R ≥ r_L(M_star/M2) · a (Eggleton 1983, roche-lobe-eggleton1983.ts), at a node or
+ * substep; r_L is evaluated at the nodes and interpolated linearly in time. The outcome carries
+ * the giant's state there (core mass, total mass, radius) for the common-envelope budget.
  * The star's spin, the companion's own tide and wind accretion are neglected.
  *
  * Units: companion mass in Msun (10⁻⁶–10), initial separation in AU (10⁻⁴–10^5).
  * Example: a 1 MJup planet at 5 AU around a 1 Msun star (default options, track ending at
- * Mc ≈ 0.549) survives, its orbit widened to ≈ 5 × 1.001/0.551 ≈ 9.07 AU.
+ * Mc = 0.569 with M ≈ 0.603) survives, its orbit widened to ≈ 5 × 1.001/0.604 ≈ 8.3 AU.
  */
 export function evolveOrbitAlongTrack(
   track: GiantTrack,
@@ -59,28 +67,37 @@ export function evolveOrbitAlongTrack(
   const n = timeYr.length;
   const m2 = companionMassMsun;
   let u = Math.log(initialSeparationAU * (massMsun[0] + m2));
+  // Roche-lobe fraction of the giant at the ends of the current interval.
+  let roche0 = rocheLobeFraction(massMsun[0] / m2);
+  let roche1 = roche0;
 
-  // Interpolated star mass at the last rate evaluation (for the outcome's separation).
-  let starMass = massMsun[0];
-  // Tidal decay rate −du/dt at fraction s of interval k, star interpolated linearly in time.
+  // Tidal decay rate −du/dt at fraction s of interval k, star interpolated linearly in time;
+  // Infinity once the giant fills its Roche lobe.
   const rate = (k: number, s: number, uNow: number) => {
     const mass = massMsun[k] + s * (massMsun[k + 1] - massMsun[k]);
     const envelope = mass - (coreMassMsun[k] + s * (coreMassMsun[k + 1] - coreMassMsun[k]));
     const radius = radiusAU[k] + s * (radiusAU[k + 1] - radiusAU[k]);
     const eddy = eddyTimeYr[k] + s * (eddyTimeYr[k + 1] - eddyTimeYr[k]);
-    starMass = mass;
     const total = mass + m2;
     const a = Math.exp(uNow) / total;
-    if (a <= radius) return Infinity;
+    if (a * (roche0 + s * (roche1 - roche0)) <= radius) return Infinity;
     // Kepler's third law as P = P(1 AU, 1 Msun) · a^(3/2) / √M without a pow() in the loop.
     const periodYr = UNIT_PERIOD_YR * a * Math.sqrt(a / total);
-    return equilibriumTideDecayRatePerYr(eddy, envelope, mass, m2, radius, a, periodYr);
+    return tideDecayRateUnchecked(eddy, envelope, mass, m2, radius, a, periodYr);
   };
-  const outcome = (engulfed: boolean, t: number, uNow: number, mass: number): OrbitOutcome => ({
-    engulfed,
-    timeYr: t,
-    separationAU: Math.exp(uNow) / (mass + m2),
-  });
+  const outcome = (engulfed: boolean, k: number, s: number, uNow: number): OrbitOutcome => {
+    const k1 = k < n - 1 ? k + 1 : k;
+    const at = (x: number[]) => x[k] + s * (x[k1] - x[k]);
+    const mass = at(massMsun);
+    return {
+      engulfed,
+      timeYr: at(timeYr),
+      separationAU: Math.exp(uNow) / (mass + m2),
+      coreMassMsun: at(coreMassMsun),
+      starMassMsun: mass,
+      radiusAU: at(radiusAU),
+    };
+  };
 
   let substeps = 0;
   // Rate at the start of the current interval when the previous one was a trapezoid step: u
@@ -88,7 +105,9 @@ export function evolveOrbitAlongTrack(
   // negligible term) and each quiet interval costs one tide evaluation instead of two.
   let carried = -1;
   for (let k = 0; k < n - 1; k++) {
-    if (Math.exp(u) / (massMsun[k] + m2) <= radiusAU[k]) return outcome(true, timeYr[k], u, massMsun[k]);
+    roche0 = k === 0 ? roche0 : roche1;
+    roche1 = rocheLobeFraction(massMsun[k + 1] / m2);
+    if ((Math.exp(u) / (massMsun[k] + m2)) * roche0 <= radiusAU[k]) return outcome(true, k, 0, u);
     const dt = timeYr[k + 1] - timeYr[k];
     if (tide.kind === 'none' || dt <= 0) {
       carried = -1;
@@ -105,7 +124,7 @@ export function evolveOrbitAlongTrack(
     let s = 0;
     while (s < 1) {
       const k1 = rate(k, s, u);
-      if (k1 === Infinity) return outcome(true, timeYr[k] + s * dt, u, starMass);
+      if (k1 === Infinity) return outcome(true, k, s, u);
       let hs = Math.min(1 - s, MAX_DLN_A_PER_STEP / (k1 * dt));
       let k2 = 0;
       let k3 = 0;
@@ -115,9 +134,9 @@ export function evolveOrbitAlongTrack(
         k3 = rate(k, s + hs / 2, u - (hs / 2) * dt * k2);
         k4 = rate(k, s + hs, u - hs * dt * k3);
         if (k2 !== Infinity && k3 !== Infinity && k4 !== Infinity) break;
-        // A trial point fell inside the star: retry with a shorter step until the step is
-        // too small to matter, then count the orbit as engulfed.
-        if (hs * dt * k1 < MIN_DLN_A_RETRY) return outcome(true, timeYr[k] + s * dt, u, starMass);
+        // A trial point reached the Roche lobe: retry with a shorter step until the step is
+        // too small to matter, then count the orbit as at the onset.
+        if (hs * dt * k1 < MIN_DLN_A_RETRY) return outcome(true, k, s, u);
         hs /= 4;
       }
       u -= ((hs * dt) / 6) * (k1 + 2 * k2 + 2 * k3 + k4);
@@ -128,6 +147,6 @@ export function evolveOrbitAlongTrack(
     }
   }
   const last = n - 1;
-  const engulfed = Math.exp(u) / (massMsun[last] + m2) <= radiusAU[last];
-  return outcome(engulfed, timeYr[last], u, massMsun[last]);
+  const engulfed = (Math.exp(u) / (massMsun[last] + m2)) * rocheLobeFraction(massMsun[last] / m2) <= radiusAU[last];
+  return outcome(engulfed, last, 0, u);
 }

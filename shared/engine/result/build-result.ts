@@ -25,7 +25,14 @@ export function buildResult(scenario: Scenario, tally: ChunkTally, meta: { prepa
   const n = tally.whiteDwarfs;
   const fraction = fractionOf(tally.magnetic, n);
   const perSetting = <T>(make: (i: number) => T) => ({ single: make(0), wide: make(1), postCE: make(2) });
-  const perChannel = <T>(make: (i: number) => T) => ({ disruption: make(0), coreMerger: make(1), fossil: make(2) });
+  const perChannel = <T>(make: (i: number) => T) => ({ disruption: make(0), closeSurvivor: make(1), fossil: make(2) });
+  const wdBins = BINS.wdMassMsun.count;
+  const massSplit = (setting: number) => ({
+    magnetic: tally.wdMassBySetting.slice((setting * 2) * wdBins, (setting * 2 + 1) * wdBins),
+    nonMagnetic: tally.wdMassBySetting.slice((setting * 2 + 1) * wdBins, (setting * 2 + 2) * wdBins),
+  });
+  const halves = (values: number[]) => ({ magnetic: values.slice(0, values.length / 2), nonMagnetic: values.slice(values.length / 2) });
+  const fieldBins = BINS.log10FieldMG.count;
 
   const massBins = BINS.log10CompanionMsun.count;
   const periodBins = BINS.log10PeriodDays.count;
@@ -55,14 +62,23 @@ export function buildResult(scenario: Scenario, tally: ChunkTally, meta: { prepa
       byChannel: perChannel((c) => tally.byChannel[c]),
       bySetting: perSetting((s) => ({ whiteDwarfs: tally.settingWhiteDwarfs[s], magnetic: tally.settingMagnetic[s] })),
       channelBySetting: perChannel((c) => perSetting((s) => tally.channelBySetting[c * SETTINGS.length + s])),
-      companionFates: { wide: tally.companionFates[0], postCE: tally.companionFates[1], disrupted: tally.companionFates[2], merged: tally.companionFates[3] },
+      companionFates: { wide: tally.companionFates[0], postCE: tally.companionFates[1], disrupted: tally.companionFates[2], dissolved: tally.companionFates[3] },
+      heliumWhiteDwarfs: tally.heliumWhiteDwarfs,
     },
     fraction,
     fractionBySetting: perSetting((s) => fractionOf(tally.settingMagnetic[s], tally.settingWhiteDwarfs[s])),
     fractionByChannel: perChannel((c) => fractionOf(tally.byChannel[c], n)),
     bins: {
       wdMass: { edgesMsun: binEdges(BINS.wdMassMsun), magnetic: tally.wdMassMagnetic.slice(), nonMagnetic: tally.wdMassNonMagnetic.slice() },
-      logField: { edgesLog10MG: binEdges(BINS.log10FieldMG), counts: tally.logField.slice(), thresholdMG: scenario.field.thresholdMG },
+      wdMassBySetting: { edgesMsun: binEdges(BINS.wdMassMsun), ...perSetting(massSplit) },
+      coolingAge: { edgesLog10Gyr: binEdges(BINS.log10CoolingAgeGyr), ...halves(tally.coolingAge) },
+      postCommonEnvelopePeriod: { edgesLog10Days: binEdges(BINS.log10PostCEPeriodDays), ...halves(tally.postCEPeriod) },
+      logField: {
+        edgesLog10MG: binEdges(BINS.log10FieldMG),
+        counts: tally.logField.slice(),
+        thresholdMG: scenario.field.thresholdMG,
+        byChannel: perChannel((c) => tally.logFieldByChannel.slice(c * fieldBins, (c + 1) * fieldBins)),
+      },
       fateMap: {
         log10MassEdgesMsun: binEdges(BINS.log10CompanionMsun),
         log10PeriodEdgesDays: binEdges(BINS.log10PeriodDays),

@@ -39,6 +39,10 @@ const REF = {
   mestel: 'Mestel, L. 1952, MNRAS, 112, 583',
   schmidt: 'Schmidt, M. 1968, ApJ, 151, 393',
   clopper: 'Clopper, C. J. & Pearson, E. S. 1934, Biometrika, 26, 404',
+  tout: 'Tout, C. A., Wickramasinghe, D. T., Liebert, J., Ferrario, L. & Pringle, J. E. 2008, MNRAS, 387, 897',
+  briggs: 'Briggs, G. P., Ferrario, L., Tout, C. A., Wickramasinghe, D. T. & Hurley, J. R. 2015, MNRAS, 447, 1713',
+  nordhaus: 'Nordhaus, J., Wellons, S., Spiegel, D. S., Metzger, B. D. & Blackman, E. G. 2011, PNAS, 108, 3135',
+  johnson: 'Johnson, J. A., Aller, K. M., Howard, A. W. & Crepp, J. R. 2010, PASP, 122, 905',
 } as const;
 
 /** Every published method the scenario uses, with its full reference (for a methods paragraph). */
@@ -68,7 +72,8 @@ export function methodsUsed(scenario: Scenario): MethodEntry[] {
   rows.forEach((r, i) => {
     if (r.source) add(`Occurrence row ${i + 1}${r.label ? ` (${r.label})` : ''}`, `${r.class}, occurrence ${r.occurrence}`, r.source);
   });
-  if (rows.some((r) => r.shape.kind === 'lognormalPeriod') || scenario.field.disruption.widthDex > 0 || scenario.field.coreMerger.widthDex > 0) {
+  if (rows.some((r) => (r.hostMassSlope ?? 0) !== 0)) add('Companion occurrence', 'occurrence × (M1/Msun)^hostMassSlope, capped at 1 per star', REF.johnson);
+  if (rows.some((r) => r.shape.kind === 'lognormalPeriod') || scenario.field.disruption.widthDex > 0 || scenario.channels.closeSurvivor || scenario.channels.fossil.enabled) {
     add('Random numbers', 'normal deviates by inversion (one uniform each)', REF.wichura);
   }
   add('Random numbers', 'seedrandom xor4096 generator seeded per chunk from (seed, chunk index)', REF.brent);
@@ -76,34 +81,44 @@ export function methodsUsed(scenario: Scenario): MethodEntry[] {
   add('Orbits', 'adiabatic widening under isotropic mass loss, a·M_total conserved', REF.jeans);
 
   if (scenario.giant.kind === 'fixedReach') {
-    add('Engulfment', `engulfed iff the initial semi-major axis is below ${scenario.giant.reachAU} AU`, 'definition (transparent baseline)');
+    add('Engulfment', `engulfed iff the initial semi-major axis is below ${scenario.giant.reachAU} AU; common-envelope state: the final core and the full envelope at R = a0`, 'definition (transparent baseline)');
   } else {
     const g = scenario.giant;
     add('Giant track', 'analytic core-mass–luminosity relation and giant-branch radius', REF.hurley);
-    add('Giant track', 'asymptotic-giant-branch core-mass–luminosity relation', REF.paczynski);
+    add('Giant track', `asymptotic-giant-branch core-mass–luminosity relation L = 59250 (Mc − ${g.agbZeroPointMsun}) Lsun`, REF.paczynski);
     add('Mass loss', `Reimers wind with η = ${g.reimersEta}`, `${REF.reimers}; ${REF.mcdonald}`);
-    if (g.superwind.kind === 'bloecker1995') add('Mass loss', `AGB superwind with η_B = ${g.superwind.eta}`, REF.bloecker);
+    if (g.superwind.kind === 'bloecker1995') add('Mass loss', `AGB superwind with η_B = ${g.superwind.eta}, timed so that the final core is the IFMR mass`, REF.bloecker);
     if (g.tide.kind === 'zahn1977') add('Tides', 'equilibrium tide on the companion orbit', `${REF.zahn}; ${REF.villaver}; ${REF.mustill}`);
-    add('Engulfment', 'critical initial separation a_crit(M1, M2) on a grid, bilinear in log masses', 'this engine (orbit integration on the track above)');
+    add('Common-envelope onset', 'the giant fills its Roche lobe towards the companion on the tidally decaying orbit', REF.eggleton);
+    add('Common-envelope onset', 'critical separation a_crit(M1, M2) and the giant\'s state at the onset as a function of ln(a0/a_crit), tabulated per (M1, M2) node from direct integrations and interpolated', 'this engine (orbit integration on the track above)');
   }
-  add('Common envelope', `energy formalism, α_CE = ${scenario.envelope.alpha}, λ = ${scenario.envelope.lambda}`, `${REF.webbink}; ${REF.dekool}`);
-  add('Common envelope', 'survival requires the companion to fit its Roche lobe after the spiral-in', REF.eggleton);
-  add('Companion destruction', `tidal radius r_t = ${scenario.disruption.eta} R2 (M_core/M2)^(1/3)`, `${REF.rees}; ${REF.ryu}`);
+  add('Common envelope', `energy formalism with the giant's state at the onset, α_CE = ${scenario.envelope.alpha}, λ = ${scenario.envelope.lambda}`, `${REF.webbink}; ${REF.dekool}`);
+  add('Common envelope', 'survival requires the companion to fit its Roche lobe after the spiral-in; otherwise it is destroyed in the envelope (the common-envelope merger)', `${REF.eggleton}; ${REF.tout}; ${REF.briggs}; ${REF.nordhaus}`);
+  if (scenario.disruption.dissolution.kind === 'belowMass') add('Companion destruction', `companions below ${scenario.disruption.dissolution.massMJup} MJup dissolve in the envelope (no disc, no field)`, 'assumption (user option)');
   add('White-dwarf radius', 'zero-temperature mass–radius relation, M_Ch = 1.44 Msun', REF.nauenberg);
   add('Companion radius', '1 Jupiter radius below 0.08 Msun; main-sequence power law above', `${REF.chabrierBaraffe}; ${REF.demircan}`);
 
   const f = scenario.field;
   if (scenario.channels.disruption) {
-    if (f.disruption.kind === 'lognormal') add('Field (disruption)', `log-normal, median ${f.disruption.medianMG} MG, ${f.disruption.widthDex} dex`, REF.ferrario);
-    else add('Field (disruption)', `magnetospheric radius at the stellar surface, Ṁ = disc mass / viscous time (α = ${f.disruption.alpha}, H/R = ${f.disruption.aspectRatio})`, `${REF.fkr}; ${REF.shakura}`);
+    const d = f.disruption;
+    if (d.kind === 'lognormal') add('Field (disruption)', `log-normal, median ${d.medianMG} MG, ${d.widthDex} dex`, REF.ferrario);
+    else if (d.kind === 'companionScaled') add('Field (disruption)', `B = ${d.referenceMG} MG · (M2 / ${d.referenceMassMJup} MJup)^${d.slope}, ${d.widthDex} dex log-normal scatter (an illustrative reading of the disc-dynamo trend, not a fit)`, REF.nordhaus);
+    else {
+      add('Field (disruption)', `magnetospheric radius r_A = (μ⁴/(2GMṀ²))^(1/7) at the stellar surface, Ṁ = disc mass / viscous time at the tidal radius (α = ${d.alpha}, H/R = ${d.aspectRatio})`, `${REF.fkr}; ${REF.shakura}`);
+      add('Companion destruction', `disc radius = tidal radius r_t = ${scenario.disruption.eta} R2 (M_core/M2)^(1/3)`, `${REF.rees}; ${REF.ryu}`);
+    }
   }
-  if (scenario.channels.coreMerger) add('Field (core merger)', `log-normal, median ${f.coreMerger.medianMG} MG, ${f.coreMerger.widthDex} dex`, REF.ferrario);
+  if (scenario.channels.closeSurvivor) {
+    const c = f.closeSurvivor;
+    add('Field (close post-CE survivor)', `log-normal, median ${c.medianMG} MG, ${c.widthDex} dex, for final periods below ${c.maxPeriodDays} d`, REF.tout);
+  }
+  if (f.emergenceDelayGyr > 0) add('Field emergence', `companion-made fields count from a cooling age of ${f.emergenceDelayGyr} Gyr on`, 'assumption (user option)');
   if (scenario.channels.fossil.enabled) {
     add('Field (fossil)', 'magnetic flux conserved from the main sequence, B_WD = B_MS (R_MS/R_WD)²', REF.wickramasinghe);
     add('Main-sequence radius', 'power-law mass–radius relation', REF.demircan);
   }
   if (scenario.selection.kind === 'magnitudeLimited') {
-    add('Selection', 'magnitude-limited: acceptance ∝ L^(3/2), the visible volume', REF.schmidt);
+    add('Selection', `magnitude-limited: acceptance ∝ F^(3/2), the visible volume, F the blackbody flux at ${scenario.selection.wavelengthNm} nm from the radius and effective temperature`, `${REF.schmidt}; ${REF.nauenberg}`);
     add('Selection', 'white-dwarf luminosity from Mestel cooling, L ∝ M t^(-7/5)', REF.mestel);
   }
   add('Statistics', 'fractions with binomial Monte Carlo standard errors √(f(1−f)/N)', 'common practice');

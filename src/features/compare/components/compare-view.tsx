@@ -95,7 +95,11 @@ function FractionCharts({ runs }: { runs: Labelled[] }) {
     { category: 'All white dwarfs', pick: (e: ComparedRun) => e.fraction },
     ...SETTING_SERIES.map((s) => ({ category: s.short, pick: (e: ComparedRun) => e.fractionBySetting[s.key] })),
   ];
-  const channels = CHANNEL_SERIES.map((c) => ({ category: c.short, pick: (e: ComparedRun) => e.fractionByChannel[c.key] }));
+  // Engine-1 and engine-2 results name different channels; a channel absent from a run has no point.
+  const channels = CHANNEL_SERIES.filter((c) => runs.some((r) => r.entry.fractionByChannel[c.key] !== undefined)).map((c) => ({
+    category: c.short,
+    pick: (e: ComparedRun) => e.fractionByChannel[c.key] ?? { value: null, se: null, k: 0, n: 0 },
+  }));
   const describe = (points: FractionPoint[]) => points.map((p) => `${p.series}, ${p.category}: ${formatPercentWithError(p.value, p.se)}`).join('; ');
   const settingPoints = pointsOf(runs, settings);
   const channelPoints = pointsOf(runs, channels);

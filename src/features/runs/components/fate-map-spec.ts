@@ -20,6 +20,8 @@ export interface FateCell {
   wide: number;
   postCE: number;
   disrupted: number;
+  dissolved: number;
+  /** Engine-1 results only (0 otherwise). */
   merged: number;
   massRange: string;
   periodRange: string;

@@ -1,6 +1,6 @@
 import type { ResultFraction, ScenarioResult } from '../../../../shared/contracts/result.ts';
 import { fractionChartSpec } from '../../../components/charts/fraction-chart-spec.ts';
-import { CHANNEL_SERIES, SETTING_SERIES, type ResultSeries } from '../../../components/charts/result-series.ts';
+import { CHANNEL_SERIES, presentSeries, SETTING_SERIES, type ResultSeries } from '../../../components/charts/result-series.ts';
 import { VegaChart } from '../../../components/charts/vega-chart.tsx';
 import { Card } from '../../../components/ui/card.tsx';
 import { fractionWithError } from './run-headline.tsx';
@@ -28,8 +28,9 @@ function SplitCounts({ rows, caption }: { rows: SplitRow[]; caption: string }) {
   );
 }
 
-function rowsOf<K extends string>(series: readonly ResultSeries<K>[], fractions: Record<K, ResultFraction>): SplitRow[] {
-  return series.map((s) => ({ key: s.key, label: s.short, fraction: fractions[s.key] }));
+function rowsOf<K extends string>(series: readonly ResultSeries<K>[], fractions: Partial<Record<K, ResultFraction>>): SplitRow[] {
+  // Engine-1 results have a core-merger channel and no close-survivor one: show what the result has.
+  return presentSeries(series, fractions).map((s) => ({ key: s.key, label: s.short, fraction: fractions[s.key]! }));
 }
 
 function SplitChart({ rows, series, valueTitle, description }: { rows: SplitRow[]; series: readonly ResultSeries<string>[]; valueTitle: string; description: string }) {
