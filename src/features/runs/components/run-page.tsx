@@ -12,13 +12,21 @@ import { QueryState } from '../../../components/ui/query-state.tsx';
 import { paths } from '../../../config/paths.ts';
 import { isApiError } from '../../../lib/api-client.ts';
 import { formatDateTimeUtc } from '../../../lib/format.ts';
+import { ENGINE_VERSION, engineMajorVersion } from '../../../../shared/engine/version.ts';
 import { useRunResult } from '../api/get-run-result.ts';
 import { useLiveRun } from '../hooks/use-live-run.ts';
 import { FateMapChart } from './fate-map-chart.tsx';
 import { MethodsParagraph } from './methods-paragraph.tsx';
 import { RunAssumptions } from './run-assumptions.tsx';
 import { RunDetails } from './run-details.tsx';
-import { LogFieldChart, WdMassChart } from './run-distribution-charts.tsx';
+import {
+  CoolingAgeChart,
+  LogFieldByChannelChart,
+  LogFieldChart,
+  PostCommonEnvelopePeriodChart,
+  WdMassBySettingChart,
+  WdMassChart,
+} from './run-distribution-charts.tsx';
 import { RunExports } from './run-exports.tsx';
 import { RunHeadline } from './run-headline.tsx';
 import { RunProgressCard } from './run-progress-card.tsx';
@@ -141,6 +149,12 @@ function RunBody({
     <QueryState query={result} loadingLabel="Loading the result…" errorTitle="The result could not be loaded">
       {(data) => (
         <div className="flex flex-col gap-6">
+          {engineMajorVersion(data.engineVersion) < 2 && (
+            <Alert
+              tone="info"
+              message={`Made by engine ${data.engineVersion}. This result predates engine 2 (common envelope at its onset, helium white dwarfs, cooling ages and post-common-envelope periods): it is shown as stored, with a core-merger channel and without the newer histograms. Running the scenario again uses engine ${ENGINE_VERSION}.`}
+            />
+          )}
           <Card>
             <RunHeadline result={data} />
           </Card>
@@ -155,6 +169,10 @@ function RunBody({
             <RunSplitCharts result={data} />
             <WdMassChart bins={data.bins.wdMass} />
             <LogFieldChart bins={data.bins.logField} />
+            <LogFieldByChannelChart bins={data.bins.logField} />
+            {data.bins.wdMassBySetting && <WdMassBySettingChart bins={data.bins.wdMassBySetting} heliumWhiteDwarfs={data.counts.heliumWhiteDwarfs} />}
+            {data.bins.coolingAge && <CoolingAgeChart bins={data.bins.coolingAge} />}
+            {data.bins.postCommonEnvelopePeriod && <PostCommonEnvelopePeriodChart bins={data.bins.postCommonEnvelopePeriod} />}
           </div>
           <FateMapChart result={data} />
           <div className="grid items-start gap-6 xl:grid-cols-2">
