@@ -5,7 +5,7 @@ import { parseScenario, type Scenario } from '../shared/contracts/scenario.ts';
 import { engulfmentGridInputFor } from '../shared/engine/kernel/engulfment.ts';
 import { prepareScenario, type PreparedScenario } from '../shared/engine/kernel/prepare.ts';
 import { runChunk } from '../shared/engine/kernel/run-chunk.ts';
-import { buildEngulfmentGrid } from '../shared/engine/physics/engulfment-grid.ts';
+import { buildEngulfmentGrid, commonEnvelopeOnset } from '../shared/engine/physics/engulfment-grid.ts';
 import { chunkUniform } from '../shared/engine/random.ts';
 import { CHUNK_SYSTEMS } from '../shared/engine/version.ts';
 import { createEnginePool } from '../server/engine-pool/engine-pool.ts';
@@ -14,7 +14,8 @@ import { runScenario } from '../server/engine-pool/run-scenario.ts';
 /**
  * `npm run bench`: the engine's figures from one run on this machine. It prints, it does not
  * assert. Figures: raw generator draws per second; kernel systems per second per thread for
- * the baseline with fixedReach and with track; the track grid build time; the 2-worker versus
+ * the baseline with fixedReach and with track; the track grid build time and the onset-state
+ * lookup rate (engine 2's per-system cost of the common-envelope onset); the 2-worker versus
  * 1-worker speed-up on a warm pool; peak RSS at 1e6 and 1e8 systems (child processes); and the
  * ratios the targets are stated in.
  */
@@ -42,6 +43,28 @@ function kernelSystemsPerSecond(prepared: PreparedScenario, chunks: number): num
   const t = performance.now();
   for (let i = 3; i < 3 + chunks; i++) runChunk(prepared, i);
   return (chunks * CHUNK_SYSTEMS) / ((performance.now() - t) / 1000);
+}
+
+/** The onset-state lookup on its own: random (M1, M2, a0) inside the grid, all inside a_crit or not. */
+function onsetLookupsPerSecond(grid: ReturnType<typeof buildEngulfmentGrid>): number {
+  const u = chunkUniform('bench-onset', 0);
+  const out = new Float64Array(4);
+  const n = 2e6;
+  const m1 = new Float64Array(n);
+  const m2 = new Float64Array(n);
+  const a0 = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    m1[i] = 1 + 4 * u();
+    m2[i] = 1e-3 * 500 ** u();
+    a0[i] = 0.01 * 1000 ** u();
+  }
+  let hits = 0;
+  for (let i = 0; i < n / 10; i++) if (commonEnvelopeOnset(grid, m1[i], m2[i], a0[i], out)) hits++; // warm-up
+  const t = performance.now();
+  for (let i = 0; i < n; i++) if (commonEnvelopeOnset(grid, m1[i], m2[i], a0[i], out)) hits++;
+  const seconds = (performance.now() - t) / 1000;
+  if (hits < 0) throw new Error('unreachable');
+  return n / seconds;
 }
 
 async function poolSeconds(workers: number, systems: number): Promise<number> {
@@ -73,7 +96,9 @@ const trackScenario = load('baseline-track', { systems: 64 * CHUNK_SYSTEMS });
 const gridStart = performance.now();
 const grid = buildEngulfmentGrid(engulfmentGridInputFor(trackScenario));
 const gridSeconds = (performance.now() - gridStart) / 1000;
-line('track boundary grid (24 × 16) build time, s', fmt(gridSeconds));
+line('track grid (24 × 16, 64 onset samples each) build time, s', fmt(gridSeconds));
+const onsetRate = onsetLookupsPerSecond(grid);
+line('common-envelope onset lookups / s (engine 2 table)', fmt(onsetRate));
 const trackRate = kernelSystemsPerSecond(prepareScenario(trackScenario, { engulfmentGrid: grid }), 60);
 line('kernel, baseline track, systems / s / thread', fmt(trackRate));
 
@@ -95,7 +120,8 @@ const speedUp = one / two;
 const rssGrowth = big.maxRssMB - small.maxRssMB;
 line('generator draws per kernel system (fixedReach)', fmt(drawsPerSystem));
 line('generator draws per kernel system (track)', fmt(draws / trackRate));
-line('track / fixedReach kernel speed', fmt(trackRate / fixedRate));
+line('track / fixedReach kernel speed (engine 1: 0.73)', fmt(trackRate / fixedRate));
+line('onset lookups per track kernel system', fmt(onsetRate / trackRate));
 line('grid build time in fixedReach kernel systems', fmt(gridSeconds * fixedRate));
 line('2-worker speed-up', fmt(speedUp));
 line('RSS growth 1e6 → 1e8 systems, MB', fmt(rssGrowth));

@@ -210,6 +210,14 @@ function CompanionRowEditor({ index, row, count }: { index: number; row: Record<
           />
           <DraftKind choice={shapeChoice} label={<>Distribution inside the row{sr}</>} />
         </FieldGrid>
+        <FieldGrid>
+          <DraftNumber
+            path={[...path, 'hostMassSlope']}
+            label={<>Host-mass slope{sr}</>}
+            unit="dimensionless"
+            hint="Occurrence × (M1 / 1 Msun)^slope, capped at 1 per star; empty or 0 = the same for every host. Giant planets grow more common with host mass (Johnson et al. 2010, from memory)."
+          />
+        </FieldGrid>
         {shapeKind === 'powerlaw' && (
           <FieldGrid>
             <DraftNumber path={[...path, 'shape', 'massSlope']} label={<>Mass slope a{sr}</>} unit="dimensionless" hint="dN ∝ M^a dlnM." />

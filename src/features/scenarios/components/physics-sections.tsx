@@ -5,6 +5,7 @@ import { getAt } from './scenario-draft.ts';
 import {
   CALIBRATION_OPTIONS,
   DISRUPTION_FIELD_CHOICE,
+  DISSOLUTION_CHOICE,
   GIANT_CHOICE,
   HISTORY_CHOICE,
   IFMR_CHOICE,
@@ -109,8 +110,24 @@ export function GiantSection() {
             />
           </FieldGrid>
           <FieldGrid>
+            <DraftNumber
+              path={['giant', 'agbZeroPointMsun']}
+              label="AGB zero point Mc0 of L = 59250 (Mc − Mc0)"
+              unit="Msun"
+              hint="0.522 as usually quoted; 0.495 in a later recalibration (both from memory)."
+              reference="Paczyński 1970, Acta Astron. 20, 47"
+            />
+          </FieldGrid>
+          <FieldGrid>
             <DraftKind choice={SUPERWIND_CHOICE} label="Late-AGB superwind" />
-            {superwind === 'bloecker1995' && <DraftNumber path={['giant', 'superwind', 'eta']} label="Superwind efficiency η_B" unit="dimensionless" />}
+            {superwind === 'bloecker1995' && (
+              <DraftNumber
+                path={['giant', 'superwind', 'eta']}
+                label="Superwind efficiency η_B"
+                unit="dimensionless"
+                hint="Where the wind would empty the envelope before the core reaches the IFMR mass, it is scaled down at that primary mass so that the track ends at the IFMR mass."
+              />
+            )}
           </FieldGrid>
           <DraftKind choice={TIDE_CHOICE} label="Tide on the companion’s orbit" />
         </>
@@ -130,7 +147,8 @@ export function EnvelopeSection() {
         <DraftNumber path={['envelope', 'lambda']} label="Envelope structure λ" unit="dimensionless" hint="In E_bind = G M M_env / (λ R)." reference="de Kool 1990, ApJ 358, 189" />
       </FieldGrid>
       <p className="text-sm text-foam-300">
-        A survivor must also fit inside its Roche lobe after the envelope is gone, or it merges.
+        The budget uses the giant at the onset of the common envelope: for the track, when it fills its Roche lobe towards the companion; for the fixed reach, the final core and the
+        full envelope at R = a0. A survivor must fit inside its Roche lobe after the envelope is gone, or it is destroyed in the envelope.
         <Reference>Roche-lobe radius from Eggleton 1983, ApJ 268, 368</Reference>
       </p>
     </BuilderSection>
@@ -138,16 +156,32 @@ export function EnvelopeSection() {
 }
 
 export function DisruptionSection() {
+  const { doc } = useBuilder();
+  const fieldKind = getAt(doc, ['field', 'disruption', 'kind']);
+  const dissolution = getAt(doc, ['disruption', 'dissolution', 'kind']);
   return (
-    <BuilderSection id="disruption" description="A companion that cannot eject the envelope is torn apart where the tide beats its self-gravity, or merges with the core if it gets there first.">
+    <BuilderSection
+      id="disruption"
+      description="A companion that cannot eject the envelope spirals in and is shredded near the core (the common-envelope merger); its debris disc makes the field of the disruption channel. The star then goes on to its IFMR mass."
+    >
       <FieldGrid>
         <DraftNumber
           path={['disruption', 'eta']}
           label="Tidal-radius factor η"
           unit="dimensionless"
-          hint="In r_t = η R2 (M_core/M2)^(1/3): 2.44 is the fluid Roche limit, about 1 suits stars."
+          hint={
+            fieldKind === 'accretion'
+              ? 'In r_t = η R2 (M_core/M2)^(1/3), the radius of the debris disc: 2.44 is the fluid Roche limit, about 1 suits stars.'
+              : 'Has no effect with the current field prescription: only the accretion field uses η (for the disc’s radius).'
+          }
           reference="Rees 1988, Nature 333, 523; Ryu et al. 2020, ApJ 904, 98"
         />
+      </FieldGrid>
+      <FieldGrid>
+        <DraftKind choice={DISSOLUTION_CHOICE} label="Dissolution in the envelope" />
+        {dissolution === 'belowMass' && (
+          <DraftNumber path={['disruption', 'dissolution', 'massMJup']} label="Companions lighter than this dissolve" unit="MJup" hint="No disc and no field for them." />
+        )}
       </FieldGrid>
       <p className="text-sm text-foam-300">
         Companion radii: one Jupiter radius below 0.08 Msun, a main-sequence power law above; the white dwarf’s radius from its mass.
@@ -160,10 +194,23 @@ export function DisruptionSection() {
 export function FieldSection() {
   const { doc } = useBuilder();
   const kind = getAt(doc, ['field', 'disruption', 'kind']);
+  const disruptionOn = getAt(doc, ['channels', 'disruption']) !== false;
+  const closeOn = getAt(doc, ['channels', 'closeSurvivor']) === true;
   return (
     <BuilderSection id="field" description="The field each magnetizing outcome leaves, and the weakest field that counts as magnetic.">
-      <SubGroup title="After a tidal disruption">
+      <SubGroup
+        title="After a companion is destroyed in the envelope"
+        description={disruptionOn ? undefined : 'Has no effect while the disruption channel is off (Channels).'}
+      >
         <DraftKind choice={DISRUPTION_FIELD_CHOICE} label="Field prescription" />
+        {kind === 'companionScaled' && (
+          <FieldGrid>
+            <DraftNumber path={['field', 'disruption', 'referenceMG']} label="Median field at the reference mass" unit="MG" />
+            <DraftNumber path={['field', 'disruption', 'referenceMassMJup']} label="Reference companion mass" unit="MJup" />
+            <DraftNumber path={['field', 'disruption', 'slope']} label="Slope of log B against log M2" unit="dimensionless" />
+            <DraftNumber path={['field', 'disruption', 'widthDex']} label="Scatter" unit="dex" />
+          </FieldGrid>
+        )}
         {kind === 'lognormal' && (
           <FieldGrid>
             <DraftNumber path={['field', 'disruption', 'medianMG']} label="Median field" unit="MG" />
@@ -179,13 +226,27 @@ export function FieldSection() {
           </FieldGrid>
         )}
       </SubGroup>
-      <SubGroup title="After a merger with the core" description="Log-normal fields.">
+      <SubGroup
+        title="Close post-common-envelope survivors"
+        description={
+          closeOn
+            ? <Reference>The near-merger case of Tout et al. 2008, MNRAS 387, 897</Reference>
+            : 'Has no effect while the close-survivor channel is off (Channels).'
+        }
+      >
         <FieldGrid>
-          <DraftNumber path={['field', 'coreMerger', 'medianMG']} label="Median field" unit="MG" />
-          <DraftNumber path={['field', 'coreMerger', 'widthDex']} label="Width" unit="dex" />
+          <DraftNumber path={['field', 'closeSurvivor', 'medianMG']} label="Median field" unit="MG" />
+          <DraftNumber path={['field', 'closeSurvivor', 'widthDex']} label="Width" unit="dex" />
+          <DraftNumber path={['field', 'closeSurvivor', 'maxPeriodDays']} label="Only for final periods below" unit="days" />
         </FieldGrid>
       </SubGroup>
       <FieldGrid>
+        <DraftNumber
+          path={['field', 'emergenceDelayGyr']}
+          label="Field emerges after a cooling age of"
+          unit="Gyr"
+          hint="Fields made by companions count only once the white dwarf is this old; 0 = at once. Fossil fields are not delayed."
+        />
         <DraftNumber path={['field', 'thresholdMG']} label="Detection threshold" unit="MG" hint="A white dwarf counts as magnetic from this field up; surveys reach about 1 MG." />
       </FieldGrid>
     </BuilderSection>
@@ -199,7 +260,16 @@ export function ChannelsSection() {
     <BuilderSection id="channels" description="Which outcomes make a magnetic white dwarf.">
       <div className="flex flex-col gap-4">
         <DraftCheckbox path={['channels', 'disruption']} label="Tidal disruption of a companion" hint="Its debris is accreted and the field follows the prescription above." />
-        <DraftCheckbox path={['channels', 'coreMerger']} label="Merger of a companion with the core" />
+        <DraftCheckbox
+          path={['channels', 'closeSurvivor']}
+          label="Close post-common-envelope survivors"
+          hint="Survivors whose final period is below the limit set under Field get a field (off by default: no magnetic white dwarf is seen in detached post-common-envelope binaries)."
+        />
+        {(getAt(doc, ['channels', 'coreMerger']) !== undefined || getAt(doc, ['field', 'coreMerger']) !== undefined) && (
+          <p className="text-sm text-foam-300">
+            This scenario still carries engine-1 core-merger settings. Engine 2 has no such channel (a destroyed companion is the disruption channel) and ignores them; a run’s assumptions say so.
+          </p>
+        )}
         <DraftCheckbox
           path={['channels', 'fossil', 'enabled']}
           label="Fossil fields"
@@ -230,6 +300,9 @@ export function SelectionSection() {
         <DraftKind choice={SELECTION_CHOICE} label="Sample" />
         {kind === 'magnitudeLimited' && (
           <DraftNumber path={['selection', 'coolingAgeFloorGyr']} label="Cooling-age floor" unit="Gyr" hint="Younger cooling ages are raised to it (Mestel’s law fails for hot white dwarfs)." />
+        )}
+        {kind === 'magnitudeLimited' && (
+          <DraftNumber path={['selection', 'wavelengthNm']} label="Survey band wavelength" unit="nm" hint="The blackbody flux is taken here; the V band is about 550 nm." />
         )}
       </FieldGrid>
       <CheckboxField

@@ -162,7 +162,7 @@ export const GIANT_CHOICE: KindChoice = {
       label: 'Analytic giant track',
       reference: 'Hurley, Pols & Tout 2000; Reimers 1975; Zahn 1977',
       summary: 'Giant-branch and AGB radii, winds widening the orbit and the equilibrium tide shrinking it, integrated once per scenario.',
-      template: { kind: 'track', reimersEta: 0.477, superwind: { kind: 'bloecker1995', eta: 0.05 }, tide: { kind: 'zahn1977' } },
+      template: { kind: 'track', reimersEta: 0.477, agbZeroPointMsun: 0.522, superwind: { kind: 'bloecker1995', eta: 0.05 }, tide: { kind: 'zahn1977' } },
     },
   ],
 };
@@ -207,15 +207,22 @@ export const DISRUPTION_FIELD_CHOICE: KindChoice = {
   discriminator: 'kind',
   options: [
     {
+      value: 'companionScaled',
+      label: 'Grows with the shredded mass',
+      reference: 'the disc-dynamo trend of Nordhaus et al. 2011 (illustrative defaults, not a fit)',
+      summary: 'B = reference field × (M2 / reference mass)^slope, with log-normal scatter: planets give a few MG, low-mass stars hundreds.',
+      template: { kind: 'companionScaled', referenceMG: 100, referenceMassMJup: 100, slope: 0.6, widthDex: 0.5 },
+    },
+    {
       value: 'lognormal',
       label: 'Log-normal field',
-      summary: 'Fields drawn around a median, with a width in dex.',
+      summary: 'Fields drawn around a median, with a width in dex, whatever the companion.',
       template: { kind: 'lognormal', medianMG: 50, widthDex: 0.5 },
     },
     {
       value: 'accretion',
       label: 'From accretion of the debris',
-      reference: 'magnetospheric radius after Frank, King & Raine 2002; disc viscosity after Shakura & Sunyaev 1973',
+      reference: 'magnetospheric radius r_A = (μ⁴/(2GMṀ²))^(1/7); disc viscosity after Shakura & Sunyaev 1973',
       summary: 'The field whose magnetic pressure balances the ram pressure of the accreted debris disc at the surface.',
       template: { kind: 'accretion', alpha: 0.1, aspectRatio: 0.1, discMassFraction: 1, widthDex: 0 },
     },
@@ -230,9 +237,9 @@ export const SELECTION_CHOICE: KindChoice = {
     {
       value: 'magnitudeLimited',
       label: 'Magnitude-limited',
-      reference: 'Mestel 1952 cooling; Schmidt 1968 volume weighting',
-      summary: 'A white dwarf is kept with probability ∝ L^(3/2), so bright (young, massive) ones are over-represented.',
-      template: { kind: 'magnitudeLimited', coolingAgeFloorGyr: 0.1 },
+      reference: 'Mestel 1952 cooling; Nauenberg 1972 radius; Schmidt 1968 volume weighting',
+      summary: 'A white dwarf is kept with probability ∝ F^(3/2), F its blackbody flux in the survey band: young ones are over-represented, and small (massive) ones under-represented at young ages.',
+      template: { kind: 'magnitudeLimited', coolingAgeFloorGyr: 0.1, wavelengthNm: 550 },
     },
   ],
 };
@@ -288,3 +295,17 @@ export function newCompanionRow(): Record<string, unknown> {
 export function optionOf(options: readonly KindOption[], value: unknown): KindOption | undefined {
   return options.find((o) => o.value === value);
 }
+
+export const DISSOLUTION_CHOICE: KindChoice = {
+  path: ['disruption', 'dissolution'],
+  discriminator: 'kind',
+  options: [
+    { value: 'none', label: 'Every destroyed companion reaches the core', summary: 'Its debris disc makes the field (the default).', template: { kind: 'none' } },
+    {
+      value: 'belowMass',
+      label: 'Light planets dissolve first',
+      summary: 'Companions below a mass dissolve in the envelope before reaching the core: no disc, no field (an assumption).',
+      template: { kind: 'belowMass', massMJup: 1 },
+    },
+  ],
+};
