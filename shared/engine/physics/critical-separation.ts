@@ -32,8 +32,7 @@ const MAX_TIDAL_REACH = 1e3;
  * before use.
  *
  * Units: companion mass in Msun (10⁻⁶–10), hint in AU. Result in AU, relative precision 5×10⁻⁴.
- * Example: 1 MJup around the 1 Msun track (IFMR mass 0.569, default options): a few AU (the
- * Roche-lobe onset sits at R/r_L ≈ 1.3 R for a planet).
+ * Example: 1 MJup around the 1 Msun track (IFMR mass 0.569, default options): ≈ 2.51 AU.
  */
 export function criticalSeparationOnTrackAU(
   track: GiantTrack,

@@ -162,8 +162,8 @@ export function criticalSeparationAU(grid: EngulfmentGrid, m1Msun: number, m2Msu
  * (ln M1, ln M2) nodes, then bilinearly between the nodes (the same weights as a_crit). Below
  * the first sample x is clamped (the onset is then the track's first node for every grid node).
  * Allocation-free: it runs in the hot loop. Units: masses in Msun (> 0, clamped to the grid), a0 in AU.
- * Example: default grid of baseline-track, M1 = 1, M2 = 0.3, a0 = 1.76 AU → a red-giant-branch
- * onset: core ≈ 0.3 Msun, envelope ≈ 0.6 Msun, R ≈ 40 Rsun.
+ * Example: M1 = 1 (IFMR 0.569), M2 = 0.3, a0 = 1.76 AU, default track options → a red-giant-branch
+ * onset; the direct integration gives core 0.325 Msun, envelope 0.64 Msun, R ≈ 41 Rsun, a ≈ 0.40 AU.
  */
 export function commonEnvelopeOnset(grid: EngulfmentGrid, m1Msun: number, m2Msun: number, a0AU: number, out: Float64Array): boolean {
   if (!(m1Msun > 0 && m1Msun < Infinity)) throw new EngineError('m1Msun', m1Msun, '(0, ∞) Msun');

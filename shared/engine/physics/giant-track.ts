@@ -81,8 +81,8 @@ interface Phase {
  *
  * Units: initial mass 0.8–8 Msun; final core mass 0.3–1.44 Msun and below the initial mass.
  * Example: buildGiantTrack(1, 0.569, defaults) reaches L ≈ 2530 Lsun, R ≈ 0.96 AU (207 Rsun) at
- * the RGB tip (Mc = 0.47) after losing ≈ 0.27 Msun, and ends on the AGB at Mc ≈ 0.549, where the
- * superwind has taken the envelope just before the core reached 0.569.
+ * the RGB tip (Mc = 0.47) after losing ≈ 0.27 Msun, and ends on the AGB at Mc = 0.569 with
+ * M ≈ 0.603 Msun (Mc0 = 0.522; the superwind needs no timing there, agbWindScale = 1).
  */
 export function buildGiantTrack(initialMassMsun: number, finalCoreMassMsun: number, options: GiantTrackOptions): GiantTrack {
   requireInRange('initialMassMsun', initialMassMsun, 0.8, 8, 'Msun');

@@ -26,8 +26,9 @@ export function mestelLuminosityLsun(massMsun: number, coolingAgeGyr: number): n
  * λ, F_λ ∝ R² / (exp(hc/λkT) − 1), with R from Nauenberg 1972 and the effective temperature from
  * L = 4πR²σT⁴ (T = 5772 K (L/Lsun)^(1/4) (R/Rsun)^(−1/2)) and Mestel's luminosity.
  * Units: Msun, Gyr, nm; the result is in arbitrary units (only ratios are used).
- * Example: at 550 nm and 1 Gyr, a 1.0 Msun white dwarf (R ≈ 0.0079 Rsun) gives ≈ 0.57 of the
- * flux of a 0.6 Msun one (R ≈ 0.0124 Rsun): it is hotter but smaller.
+ * Example: at 550 nm and 0.2 Gyr, a 1.0 Msun white dwarf (R ≈ 0.0079 Rsun) gives ≈ 0.82 of the
+ * flux of a 0.6 Msun one (R ≈ 0.0124 Rsun): it is hotter but smaller. At 1 Gyr the ratio is ≈ 1.17
+ * (under Mestel cooling the temperature wins on the Wien side of the band).
  */
 export function opticalFlux(massMsun: number, coolingAgeGyr: number, wavelengthNm: number): number {
   const radius = whiteDwarfRadiusRsun(massMsun);
