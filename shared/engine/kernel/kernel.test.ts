@@ -96,7 +96,7 @@ describe('common random numbers', () => {
       expect(buildResult(rerun, sum(rerun, tallies(rerun))).counts.magnetic, `edge ${j}`).toBe(magneticAt[j]);
     }
     for (let j = 1; j < magneticAt.length; j++) expect(magneticAt[j]).toBeGreaterThanOrEqual(magneticAt[j - 1]);
-  });
+  }, 120_000);
 
   it('draws do not depend on α_CE, λ, η, the threshold or the reach (white dwarfs and their masses are unchanged)', () => {
     const ref = buildResult(base, sum(base, tallies(base)));
@@ -110,7 +110,7 @@ describe('common random numbers', () => {
       const fates = (x: typeof r) => Object.values(x.counts.companionFates).reduce((a, b) => a + b, 0);
       expect(fates(r), path).toBe(fates(ref));
     }
-  });
+  }, 120_000);
 });
 
 describe('Monte Carlo error', () => {
@@ -133,7 +133,7 @@ describe('Monte Carlo error', () => {
     // s²/se² is χ²₁₉/19 for binomial counts: its 0.1% and 99.9% points are 0.37 and 2.0.
     expect(variance / (se * se)).toBeGreaterThan(0.37);
     expect(variance / (se * se)).toBeLessThan(2.0);
-  });
+  }, 120_000);
 });
 
 describe('other options run and respond as they should', () => {
