@@ -62,10 +62,9 @@ const fmtMsun = (x: number) => `${x.toFixed(3)} Msun`;
 
 function sentence(sigma: number | null, logP: number, what: string, mcLimited: boolean): string {
   const s = sigma ?? Infinity;
-  const words = verdictWords(s).replace(/^is /, '');
   const lead = s < 2 ? 'Consistent' : s < 3 ? 'Mild tension' : s < 5 ? 'Strong tension' : 'Rejected';
-  const tail = mcLimited ? '; the Monte Carlo error could change this verdict: run more systems' : '';
-  return `${lead}: the observation ${words === 'rules out' ? 'rules out' : words} ${what} (p = ${formatPValue(logP)}, ${formatSigma(s)})${tail}.`;
+  const tail = mcLimited ? `; moving the prediction by its Monte Carlo error moves σ by more than ${MC_LIMITED_SIGMA_SHIFT}: run more systems for a sharper σ` : '';
+  return `${lead}: the observation ${verdictWords(s)} ${what} (p = ${formatPValue(logP)}, ${formatSigma(s)})${tail}.`;
 }
 
 function base(r: ResolvedConstraint, label: string, method: string): Omit<ConstraintEvaluation, 'status' | 'predicted' | 'observed' | 'p' | 'sigma' | 'logLikelihood' | 'mcLimited' | 'verdict'> {
