@@ -117,6 +117,25 @@ describe('evaluateConstraints: masses', () => {
   });
 });
 
+describe('evaluateConstraints: fields', () => {
+  it('compares fields above the survey threshold only, and reads the engine-2 split by channel when present', () => {
+    // Engine 1: a flat histogram of log10 B from −2 to 4 (0.1 dex bins). Fields drawn flat in log10 B
+    // above 1 MG follow it: 8 values at 10^(0.25 + 0.5 i) MG, evenly spread over 0 … 4 dex → consistent.
+    const fields = Array.from({ length: 8 }, (_, i) => Math.pow(10, 0.25 + 0.5 * i));
+    const flat = evaluateConstraints(engineOne(), resolved({ kind: 'fieldDistribution', thresholdMG: 1, fieldsMG: [0.2, ...fields] }), SET).constraints[0];
+    expect(flat.status).toBe('scored');
+    expect(flat.sigma!).toBeLessThan(2);
+    expect(flat.caveats.join(' ')).toMatch(/1 observed field below 1\.00 MG was left out/);
+    expect(flat.overlay?.edges[0]).toBeCloseTo(0, 12);
+    // Engine 2: all model fields in the disruption channel at 10^3.5 MG; the same list is then far off.
+    const one = engineOne();
+    const channel = one.bins.logField.edgesLog10MG.slice(0, 60).map((e) => (Math.abs(e - 3.5) < 1e-9 ? 1000 : 0));
+    const two: EvaluableResult = { ...one, bins: { ...one.bins, logField: { ...one.bins.logField, byChannel: { disruption: channel, closeSurvivor: new Array(60).fill(0), fossil: new Array(60).fill(0) } } } };
+    const split = evaluateConstraints(two, resolved({ kind: 'fieldDistribution', thresholdMG: 1, fieldsMG: fields }), SET).constraints[0];
+    expect(split.sigma!).toBeGreaterThan(2);
+  });
+});
+
 describe('evaluateConstraints: engine-2 observables', () => {
   const ageEdges = edges(-3, Math.log10(14), 30);
   const periodEdges = edges(-2, 4, 60);

@@ -187,7 +187,7 @@ function listScored(
   } catch {
     return unavailable(r, label, '', `none of the observed values lies inside the model's range ${edges[0]} … ${edges[edges.length - 1]}`);
   }
-  if (ks.outside > 0) caveats.push(`${ks.outside} observed value${ks.outside === 1 ? '' : 's'} outside the model's range were left out.`);
+  if (ks.outside > 0) caveats.push(`${ks.outside} observed value${ks.outside === 1 ? ' outside the model’s range was' : 's outside the model’s range were'} left out.`);
   const logP = Math.log(ks.pValue);
   const mcLimited = Math.abs(ks.sigma - ks.sigmaModelExact) > MC_LIMITED_SIGMA_SHIFT;
   const scale = ks.observedCount / modelTotal;
@@ -257,7 +257,7 @@ function evaluateFields(r: ResolvedConstraint & { constraint: Extract<ObservedCo
   const edgeMG = Math.pow(10, edgesLog10MG[first]);
   if (Math.abs(edgesLog10MG[first] - cut) > 1e-9) caveats.push(`The threshold ${c.thresholdMG} MG falls inside a model bin; both sides are compared from ${edgeMG.toPrecision(3)} MG, the next bin edge.`);
   const below = (c.fieldsMG ?? []).filter((b) => Math.log10(b) < edgesLog10MG[first]).length;
-  if (below > 0) caveats.push(`${below} observed field${below === 1 ? '' : 's'} below ${edgeMG.toPrecision(3)} MG were left out.`);
+  if (below > 0) caveats.push(`${below} observed field${below === 1 ? ' below ' + edgeMG.toPrecision(3) + ' MG was' : 's below ' + edgeMG.toPrecision(3) + ' MG were'} left out.`);
   const values = (c.fieldsMG ?? []).map(Math.log10).filter((x) => x >= edgesLog10MG[first]);
   if (values.length === 0) return unavailable(r, label, '', `no observed field lies above ${edgeMG.toPrecision(3)} MG`);
   const edges = edgesLog10MG.slice(first);
