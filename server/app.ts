@@ -43,6 +43,8 @@ import { createPaymentGateway } from './modules/billing/payment-gateway.ts';
 import { invitationsRoutes } from './modules/invitations/invitations.routes.ts';
 import { createInvitationsService } from './modules/invitations/invitations.service.ts';
 import { createMailer } from './modules/mail/mailer.ts';
+import { constraintsRoutes } from './modules/constraints/constraints.routes.ts';
+import { createConstraintSetsService } from './modules/constraints/constraint-sets.service.ts';
 import { outboxRoutes } from './modules/mail/outbox.routes.ts';
 import { createRunNotices } from './modules/mail/run-notices.ts';
 
@@ -115,6 +117,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   const invitations = createInvitationsService({ db, config, mailer, sessions, logger });
   const runs = createRunsService({ db, scheduler, scenarios, tables, samples, billing: deps.billing ?? billing.runBilling });
   const sweeps = createSweepsService({ db, runs, scenarios, samples, scheduler });
+  const constraintSets = createConstraintSetsService(db);
 
   const app = express();
   app.disable('x-powered-by');
@@ -151,6 +154,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   app.use('/api/samples', samplesRoutes(registry, samples));
   app.use('/api', runsRoutes(registry, runs, events));
   app.use('/api/sweeps', sweepsRoutes(registry, sweeps));
+  app.use('/api', constraintsRoutes(registry, constraintSets, runs));
   app.use('/api', accountRoutes(registry, config, account));
   app.use('/api/invitations', invitationsRoutes(registry, invitations, sessions));
   app.use('/api/billing', billingRoutes(registry, billing));

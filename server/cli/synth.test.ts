@@ -62,3 +62,27 @@ describe('synth CLI', () => {
     expect((await run([])).code).toBe(2);
   });
 });
+
+describe('synth CLI --constraints', () => {
+  it('adds the evaluation against a constraint set (library references and CSV lists) to the output', async () => {
+    const scenario = file('eval.json', { ...checkOne, systems: 50_000 });
+    const set = file('set.json', {
+      name: 'CLI set (illustrative)',
+      constraints: [{ libraryId: 'tout2008-wd-dm-zero' }, { kind: 'meanMass', population: 'magnetic', csv: 'massMsun\n0.8\n0.9\n1.0\n' }],
+    });
+    const r = await run([scenario, '--workers', '1', '--constraints', set]);
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out.evaluation.constraintSet.name).toBe('CLI set (illustrative)');
+    expect(out.evaluation.constraints.map((c: { id: string }) => c.id)).toEqual(['tout2008-wd-dm-zero', 'c2']);
+    expect(out.evaluation.combined.method).toMatch(/independent/);
+    expect(r.stderr).toMatch(/evaluation: /);
+  }, 60_000);
+
+  it('names the line and column of a bad CSV row in a constraint-set file', async () => {
+    const set = file('bad-set.json', { constraints: [{ kind: 'fieldDistribution', csv: 'fieldMG\n12\nstrong\n' }] });
+    const r = await run([file('eval2.json', { ...checkOne, systems: 2000 }), '--constraints', set]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/line 3, column fieldMG: fieldMG must be a number \(got "strong"\)/);
+  });
+});

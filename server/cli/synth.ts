@@ -4,8 +4,12 @@ import { occurrenceTableSchema } from '../../shared/contracts/occurrence-table.t
 import { parseScenario, ScenarioValidationError } from '../../shared/contracts/scenario.ts';
 import { EngineError } from '../../shared/engine/errors.ts';
 import { runScenario } from '../engine-pool/run-scenario.ts';
+import type { Constraint } from '../../shared/contracts/constraints.ts';
+import { AppError } from '../lib/errors.ts';
+import { checkConstraints, resolveConstraints } from '../modules/constraints/constraint-sets.service.ts';
+import { evaluateConstraints } from '../modules/constraints/evaluate.ts';
 
-const USAGE = 'usage: npm run synth -- <scenario.json> [--workers N] [--out result.json]';
+const USAGE = 'usage: npm run synth -- <scenario.json> [--workers N] [--out result.json] [--constraints set.json]';
 /** Stored occurrence tables the CLI resolves `companions.tableId` against. */
 const TABLE_DIR = new URL('../../shared/scenarios/', import.meta.url);
 
@@ -24,12 +28,14 @@ interface CliArgs {
   scenarioPath: string;
   workers?: number;
   out?: string;
+  constraints?: string;
 }
 
 function parseArgs(argv: readonly string[]): CliArgs {
   let scenarioPath: string | undefined;
   let workers: number | undefined;
   let out: string | undefined;
+  let constraints: string | undefined;
   for (let i = 0; i < argv.length; i++) {
     const arg = argv[i];
     if (arg === '--workers') {
@@ -39,6 +45,9 @@ function parseArgs(argv: readonly string[]): CliArgs {
     } else if (arg === '--out') {
       out = argv[++i];
       if (!out) throw new CliError(`--out needs a file name\n${USAGE}`);
+    } else if (arg === '--constraints') {
+      constraints = argv[++i];
+      if (!constraints) throw new CliError(`--constraints needs a constraint-set file name\n${USAGE}`);
     } else if (arg === '--help' || arg === '-h') {
       throw new CliError(USAGE, 0);
     } else if (arg.startsWith('--')) {
@@ -50,7 +59,7 @@ function parseArgs(argv: readonly string[]): CliArgs {
     }
   }
   if (!scenarioPath) throw new CliError(`no scenario file given\n${USAGE}`);
-  return { scenarioPath, workers, out };
+  return { scenarioPath, workers, out, constraints };
 }
 
 async function readScenarioDocument(path: string): Promise<unknown> {
@@ -86,12 +95,30 @@ async function resolveTable(document: unknown): Promise<unknown> {
   return { ...(document as object), companions: { ...rest, rows: parsed.data.rows } };
 }
 
+/** A constraint set file: { "name"?, "constraints": [ … ] }, checked exactly as the API checks a set. */
+async function readConstraintSet(path: string): Promise<{ name: string; constraints: Constraint[] }> {
+  const document = (await readScenarioDocument(path).catch((error: Error) => {
+    throw new CliError(error.message.replace('scenario file', 'constraint-set file'));
+  })) as { name?: unknown; constraints?: unknown } | null;
+  if (!document || !Array.isArray(document.constraints)) throw new CliError(`constraint-set file ${path} must hold { "constraints": [ … ] }`);
+  try {
+    return { name: typeof document.name === 'string' ? document.name : path, constraints: checkConstraints(document.constraints as Record<string, unknown>[]) };
+  } catch (error) {
+    if (error instanceof AppError) {
+      const details = (error.details ?? []).map((d) => `\n  line ${d.line}${d.column ? `, column ${d.column}` : ''}: ${d.message}`).join('');
+      throw new CliError(`constraint-set file ${path}: ${error.message}${details}`);
+    }
+    throw error;
+  }
+}
+
 /** The CLI without process globals: returns the exit code. */
 export async function main(argv: readonly string[], io: CliIo): Promise<number> {
   try {
     const args = parseArgs(argv);
     const document = await resolveTable(await readScenarioDocument(args.scenarioPath));
     const scenario = parseScenario(document);
+    const constraintSet = args.constraints ? await readConstraintSet(args.constraints) : undefined;
     const started = performance.now();
     let lastReport = 0;
     const result = await runScenario(scenario, {
@@ -107,7 +134,10 @@ export async function main(argv: readonly string[], io: CliIo): Promise<number> 
     });
     const seconds = (performance.now() - started) / 1000;
     io.stderr(`done: ${scenario.systems} systems in ${seconds.toFixed(2)} s; magnetic fraction ${result.fraction.value} ± ${result.fraction.se}\n`);
-    const json = `${JSON.stringify(result, null, 2)}\n`;
+    const evaluation = constraintSet && evaluateConstraints(result, resolveConstraints(constraintSet.constraints), { id: args.constraints!, name: constraintSet.name, version: null });
+    if (evaluation) io.stderr(`evaluation: ${evaluation.combined.verdict}\n`);
+    const output = evaluation ? { ...result, evaluation } : result;
+    const json = `${JSON.stringify(output, null, 2)}\n`;
     if (args.out) {
       await writeFile(args.out, json);
       io.stderr(`result written to ${args.out}\n`);

@@ -11,6 +11,8 @@ const EVERYONE = [
   'Sweeps',
   'Implied occurrence',
   'Compare',
+  'Constraint sets',
+  'Two-sample test',
   'Samples',
   'Occurrence tables',
   'API tokens',

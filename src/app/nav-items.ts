@@ -62,6 +62,18 @@ export const NAV_GROUPS: readonly NavGroup[] = [
         minimumRole: 'observer',
       },
       {
+        key: 'constraintSets',
+        label: 'Constraint sets',
+        summary: 'The observations a run is judged by at once: published constraints and your own counts, masses, fields, cooling ages and periods.',
+        minimumRole: 'observer',
+      },
+      {
+        key: 'twoSample',
+        label: 'Two-sample test',
+        summary: 'Whether two observed samples can share one magnetic fraction: Fisher exact test, σ and both intervals.',
+        minimumRole: 'observer',
+      },
+      {
         key: 'samples',
         label: 'Samples',
         summary: 'Observed counts of white dwarfs, magnetic or not, kept for comparison with runs.',

@@ -49,6 +49,8 @@ export const routes: RouteObject[] = [
               { path: paths.runs.new.path, lazy: () => import('./routes/runs-new.tsx') },
               { path: paths.runs.detail.path, lazy: () => import('./routes/runs-detail.tsx') },
               { path: paths.compare.path, lazy: () => import('./routes/compare.tsx') },
+              { path: paths.constraintSets.path, lazy: () => import('./routes/constraint-sets.tsx') },
+              { path: paths.twoSample.path, lazy: () => import('./routes/two-sample.tsx') },
               { path: paths.notifications.path, lazy: () => import('./routes/notifications.tsx') },
               {
                 element: <RequireRole minimum="admin" />,

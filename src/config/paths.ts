@@ -66,6 +66,8 @@ export const paths = {
     ...page('/occurrence-tables'),
     detail: { path: '/occurrence-tables/:id', getHref: (id: string) => `/occurrence-tables/${encodeURIComponent(id)}` },
   },
+  constraintSets: page('/constraint-sets'),
+  twoSample: page('/two-sample'),
   apiTokens: page('/api-tokens'),
   settings: page('/settings'),
   members: page('/members'),

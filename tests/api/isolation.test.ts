@@ -11,7 +11,7 @@ import { checkScenario, createScenario, waitForRun } from '../support/runs.ts';
 let ctx: TestContext;
 let a: Awaited<ReturnType<typeof signUp>>;
 let b: Awaited<ReturnType<typeof signUp>>;
-const ids = {} as Record<'scenario' | 'table' | 'sample' | 'run' | 'sweep' | 'token', string>;
+const ids = {} as Record<'scenario' | 'table' | 'sample' | 'run' | 'sweep' | 'token' | 'constraintSet', string>;
 
 beforeAll(async () => {
   ctx = await createTestApp();
@@ -24,6 +24,7 @@ beforeAll(async () => {
   await waitForRun(a.agent, ids.run);
   ids.sweep = (await a.agent.post('/api/sweeps').send({ scenarioId: ids.scenario, axes: [{ path: 'envelope.alpha', values: [0.1, 1] }] }).expect(201)).body.id;
   ids.token = (await a.agent.post('/api/tokens').send({ name: 'A token' }).expect(201)).body.id;
+  ids.constraintSet = (await a.agent.post('/api/constraint-sets').send({ name: 'A set', constraints: [{ kind: 'fraction', magnetic: 1, total: 10 }] }).expect(201)).body.id;
 });
 afterAll(() => ctx.close());
 
@@ -56,6 +57,10 @@ describe('tenant isolation', () => {
     ['get', 'sweep', (x) => `/api/sweeps/${x.sweep}`],
     ['post', 'sweep', (x) => `/api/sweeps/${x.sweep}/cancel`],
     ['delete', 'token', (x) => `/api/tokens/${x.token}`],
+    ['get', 'constraint set', (x) => `/api/constraint-sets/${x.constraintSet}`],
+    ['put', 'constraint set', (x) => `/api/constraint-sets/${x.constraintSet}`, () => ({ name: 'Stolen', constraints: [{ kind: 'fraction', magnetic: 0, total: 1 }] })],
+    ['delete', 'constraint set', (x) => `/api/constraint-sets/${x.constraintSet}`],
+    ['get', 'run', (x) => `/api/runs/${x.run}/evaluation?constraintSet=library`],
   ];
 
   for (const [method, what, url, body] of attempts) {
@@ -74,10 +79,12 @@ describe('tenant isolation', () => {
     await b.agent.get(`/api/runs/${run}/comparison?sample=${ids.sample}`).expect(404);
     await b.agent.get(`/api/runs/${run}/implied-occurrence?sample=${ids.sample}`).expect(404);
     await b.agent.post('/api/implied-occurrence').send({ scenarioId: mine, sampleId: ids.sample }).expect(404);
+    await b.agent.get(`/api/runs/${run}/evaluation?constraintSet=${ids.constraintSet}`).expect(404);
+    await b.agent.get(`/api/runs/${run}/evaluation?constraintSet=library`).expect(200);
   });
 
   it('leaves the other department out of every list (library entries excepted)', async () => {
-    const lists = await Promise.all(['/api/scenarios', '/api/occurrence-tables', '/api/samples', '/api/runs', '/api/sweeps', '/api/tokens'].map((u) => b.agent.get(u).expect(200)));
+    const lists = await Promise.all(['/api/scenarios', '/api/occurrence-tables', '/api/samples', '/api/runs', '/api/sweeps', '/api/tokens', '/api/constraint-sets'].map((u) => b.agent.get(u).expect(200)));
     const text = JSON.stringify(lists.map((l) => l.body));
     for (const id of Object.values(ids)) expect(text).not.toContain(id);
     const samples = lists[2].body.samples as { library: boolean }[];

@@ -87,6 +87,15 @@ export const EXPECTED_ACCESS: Record<string, Minimum> = {
   'GET /api/invitations/preview/:token': 'public',
   'POST /api/invitations/accept': 'public',
   'GET /api/outbox': 'admin',
+  // Constraint sets are observers' data, like samples; the evaluation and the two-sample test read only.
+  'GET /api/constraint-sets': 'observer',
+  'POST /api/constraint-sets': 'observer',
+  'GET /api/constraint-sets/:id': 'observer',
+  'PUT /api/constraint-sets/:id': 'observer',
+  'DELETE /api/constraint-sets/:id': 'observer',
+  'GET /api/constraint-library': 'observer',
+  'GET /api/runs/:id/evaluation': 'observer',
+  'POST /api/stats/two-sample': 'observer',
 };
 
 const RANK: Record<Who, number> = { anonymous: -1, observer: 0, modeller: 1, admin: 2 };

@@ -18,8 +18,14 @@ export interface PredictedCounts {
   whiteDwarfs: number;
 }
 
+type Counted = { whiteDwarfs: number; magnetic: number };
+/** The parts of a result predictedFor reads (so that other result readers can pass a narrower type). */
+export interface SettingCountsSource {
+  counts: Counted & { bySetting: { single: Counted; wide: Counted; postCE: Counted } };
+}
+
 /** Model counts of the white dwarfs a sample of this setting describes. */
-export function predictedFor(result: ScenarioResult, setting: string): PredictedCounts {
+export function predictedFor(result: SettingCountsSource, setting: string): PredictedCounts {
   const s = result.counts.bySetting;
   switch (setting) {
     case 'single':

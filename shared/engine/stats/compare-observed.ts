@@ -39,8 +39,8 @@ export interface ObservedComparison {
  */
 export const MC_ERROR_NEGLIGIBLE_RATIO = 0.1;
 
-// Wording by Gaussian-equivalent significance: < 2σ, 2–3σ, 3–5σ, ≥ 5σ (common practice, no source).
-function verdict(sigma: number): string {
+/** Wording by Gaussian-equivalent significance: < 2σ, 2–3σ, 3–5σ, ≥ 5σ (common practice, no source). */
+export function verdict(sigma: number): string {
   if (sigma < 2) return 'is consistent with';
   if (sigma < 3) return 'is in mild tension with';
   if (sigma < 5) return 'is in strong tension with';

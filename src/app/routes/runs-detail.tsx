@@ -1,6 +1,7 @@
 import { useCallback } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
+import { RunScorecardCard } from '../../features/constraints/components/run-scorecard-card.tsx';
 import { RunPage } from '../../features/runs/components/run-page.tsx';
 
 export function Component() {
@@ -18,6 +19,7 @@ export function Component() {
       role={me.role}
       sampleId={search.get('sample')}
       onSampleChange={onSampleChange}
+      resultSections={<RunScorecardCard departmentId={me.department.id} runId={id} />}
     />
   );
 }

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import type { RunSummary } from '../../../../shared/contracts/runs.ts';
 import { roleAtLeast, type Role } from '../../../../shared/contracts/roles.ts';
@@ -42,12 +43,14 @@ export interface RunPageProps {
   role: Role;
   sampleId: string | null;
   onSampleChange: (sampleId: string) => void;
+  /** Sections of other features shown under a finished run's result (the scorecard), passed in by the route. */
+  resultSections?: ReactNode;
 }
 
 const runsLink = <Link to={paths.runs.getHref()}>Runs</Link>;
 
 /** One run from queue to result: live progress while it works, then its result with charts, tests and exports. */
-export function RunPage({ departmentId, runId, userId, role, sampleId, onSampleChange }: RunPageProps) {
+export function RunPage({ departmentId, runId, userId, role, sampleId, onSampleChange, resultSections }: RunPageProps) {
   const { run, source } = useLiveRun(departmentId, runId);
 
   if (run.isPending) return <LoadingState label="Loading the run…" />;
@@ -91,7 +94,7 @@ export function RunPage({ departmentId, runId, userId, role, sampleId, onSampleC
           </Link>
         }
       />
-      <RunBody departmentId={departmentId} run={r} source={source} canCancel={canCancel} sampleId={sampleId} onSampleChange={onSampleChange} />
+      <RunBody departmentId={departmentId} run={r} source={source} canCancel={canCancel} sampleId={sampleId} onSampleChange={onSampleChange} resultSections={resultSections} />
     </>
   );
 }
@@ -103,7 +106,8 @@ function RunBody({
   canCancel,
   sampleId,
   onSampleChange,
-}: Pick<RunPageProps, 'departmentId' | 'sampleId' | 'onSampleChange'> & { run: RunSummary; source: ReturnType<typeof useLiveRun>['source']; canCancel: boolean }) {
+  resultSections,
+}: Pick<RunPageProps, 'departmentId' | 'sampleId' | 'onSampleChange' | 'resultSections'> & { run: RunSummary; source: ReturnType<typeof useLiveRun>['source']; canCancel: boolean }) {
   const result = useRunResult(departmentId, run.id, run.status === 'succeeded');
 
   if (run.status === 'queued' || run.status === 'running') {
@@ -165,6 +169,7 @@ function RunBody({
             onSampleChange={onSampleChange}
             scenarioTest={data.comparison && { ...data.comparison, label: 'all white dwarfs', predictedCounts: { magnetic: data.fraction.k, whiteDwarfs: data.fraction.n } }}
           />
+          {resultSections}
           <div className="grid gap-6 xl:grid-cols-2">
             <RunSplitCharts result={data} />
             <WdMassChart bins={data.bins.wdMass} />
