@@ -25,6 +25,9 @@ function limiter(windowMs: number, limit: number, key: (req: Request, res: Respo
   });
 }
 
+/** The address the caller reached this server at (used for links when PUBLIC_URL is not set). */
+const requestBase = (req: Request) => `${req.protocol}://${req.get('host')}`;
+
 /**
  * Read-only share links: members create them for a run or sweep, the department lists and
  * revokes them, and anyone holding the secret URL reads exactly that object.
@@ -40,12 +43,12 @@ export function sharesRoutes(registry: RouteRegistry, config: Config, shares: Sh
   defineRoute(router, registry, mount, {
     method: 'post', path: '/runs/:id/share', tag, access: 'modeller', status: 201, params: idParamsSchema, response: createShareResponseSchema, before: [creating],
     summary: 'Create a read-only link to a finished run (the URL holds a secret and is shown once)',
-  }, ({ auth, params }) => shares.createForRun(auth, params.id));
+  }, ({ auth, params, req }) => shares.createForRun(auth, params.id, requestBase(req)));
 
   defineRoute(router, registry, mount, {
     method: 'post', path: '/sweeps/:id/share', tag, access: 'modeller', status: 201, params: idParamsSchema, response: createShareResponseSchema, before: [creating],
     summary: 'Create a read-only link to a sweep (the URL holds a secret and is shown once)',
-  }, ({ auth, params }) => shares.createForSweep(auth, params.id));
+  }, ({ auth, params, req }) => shares.createForSweep(auth, params.id, requestBase(req)));
 
   defineRoute(router, registry, mount, {
     method: 'get', path: '/share-links', tag, access: 'observer', response: shareLinkListSchema,

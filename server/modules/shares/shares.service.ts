@@ -44,7 +44,7 @@ export function createSharesService(deps: { db: Db; config: Config; runs: RunsSe
     return row;
   }
 
-  async function create(auth: RequestAuth, kind: ShareKind, objectId: string) {
+  async function create(auth: RequestAuth, kind: ShareKind, objectId: string, requestBase: string) {
     const department = departmentOf(auth);
     if (kind === 'run') {
       const found = await findRun(db, department.id, objectId);
@@ -64,12 +64,13 @@ export function createSharesService(deps: { db: Db; config: Config; runs: RunsSe
       });
       await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'share.created', target: id, detail: { kind, objectId } });
     });
-    return { id, url: `${base}/shared/${secret}` };
+    // PUBLIC_URL when configured, else the address the creator reached this server at.
+    return { id, url: `${config.PUBLIC_URL ? base : requestBase}/shared/${secret}` };
   }
 
   return {
-    createForRun: (auth: RequestAuth, runId: string) => create(auth, 'run', runId),
-    createForSweep: (auth: RequestAuth, sweepId: string) => create(auth, 'sweep', sweepId),
+    createForRun: (auth: RequestAuth, runId: string, requestBase: string) => create(auth, 'run', runId, requestBase),
+    createForSweep: (auth: RequestAuth, sweepId: string, requestBase: string) => create(auth, 'sweep', sweepId, requestBase),
 
     /** Every link of the department, newest first (revoked ones included, marked). Never the secret. */
     async list(auth: RequestAuth): Promise<ShareLinkSummary[]> {
