@@ -58,6 +58,11 @@ describe('share link', () => {
       const api = await fresh.request.get(`/api/shared/${url.split('/shared/')[1]}`);
       expect(api.status()).toBe(404);
       await stack.screenshot(fresh, 'share-link-revoked');
+
+      // The department's list shows the link as revoked.
+      await page.goto('/api-tokens');
+      const list = page.getByRole('region', { name: 'Read-only links' });
+      await list.getByText(/^revoked /).first().waitFor({ timeout: 30_000 });
     } finally {
       await modeller.context.close();
       await visitor.context.close();
