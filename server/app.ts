@@ -47,6 +47,10 @@ import { constraintsRoutes } from './modules/constraints/constraints.routes.ts';
 import { createConstraintSetsService } from './modules/constraints/constraint-sets.service.ts';
 import { outboxRoutes } from './modules/mail/outbox.routes.ts';
 import { createRunNotices } from './modules/mail/run-notices.ts';
+import { exportsRoutes } from './modules/exports/exports.routes.ts';
+import { createExportsService } from './modules/exports/exports.service.ts';
+import { sharesRoutes } from './modules/shares/shares.routes.ts';
+import { createSharesService } from './modules/shares/shares.service.ts';
 
 export interface AppDeps {
   config: Config;
@@ -118,6 +122,8 @@ export function createApp(deps: AppDeps): TidefieldApp {
   const runs = createRunsService({ db, scheduler, scenarios, tables, samples, billing: deps.billing ?? billing.runBilling });
   const sweeps = createSweepsService({ db, runs, scenarios, samples, scheduler });
   const constraintSets = createConstraintSetsService(db);
+  const exports = createExportsService({ db, config, runs, sweeps });
+  const shares = createSharesService({ db, config, runs, sweeps, exports });
 
   const app = express();
   app.disable('x-powered-by');
@@ -155,6 +161,8 @@ export function createApp(deps: AppDeps): TidefieldApp {
   app.use('/api', runsRoutes(registry, runs, events));
   app.use('/api/sweeps', sweepsRoutes(registry, sweeps));
   app.use('/api', constraintsRoutes(registry, constraintSets, runs));
+  app.use('/api', exportsRoutes(registry, exports));
+  app.use('/api', sharesRoutes(registry, config, shares));
   app.use('/api', accountRoutes(registry, config, account));
   app.use('/api/invitations', invitationsRoutes(registry, invitations, sessions));
   app.use('/api/billing', billingRoutes(registry, billing));

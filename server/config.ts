@@ -31,6 +31,9 @@ export const configSchema = z.object({
   /** Sign-in attempts allowed per client address and e-mail in each window. */
   SIGN_IN_LIMIT: z.coerce.number().int().min(1).max(10_000).default(10),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().min(0.01).max(24 * 60).default(15),
+  /** Share links a member may create per hour, and reads of shared objects per client address per minute. */
+  SHARE_LINKS_PER_HOUR: z.coerce.number().int().min(1).max(10_000).default(30),
+  SHARED_READS_PER_MINUTE: z.coerce.number().int().min(1).max(100_000).default(120),
   /** Largest JSON body accepted by the API. */
   JSON_BODY_LIMIT: z.string().regex(/^\d+(b|kb|mb)$/i).default('256kb'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),

@@ -1,6 +1,6 @@
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { LoadingState } from '../components/ui/loading-state.tsx';
-import { paths, type PathKey } from '../config/paths.ts';
+import { paths, sharedPath, type PathKey } from '../config/paths.ts';
 import { RequireRole } from './require-role.tsx';
 import type { ComingSoonHandle } from './routes/coming-soon.tsx';
 import { RouteError } from './routes/route-error.tsx';
@@ -22,6 +22,7 @@ export const routes: RouteObject[] = [
       { path: paths.forgotPassword.path, lazy: () => import('./routes/forgot-password.tsx') },
       { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password.tsx') },
       { path: paths.acceptInvitation.path, lazy: () => import('./routes/accept-invitation.tsx') },
+      { path: sharedPath.path, lazy: () => import('./routes/shared.tsx') },
       {
         lazy: () => import('./routes/app-root.tsx'),
         children: [

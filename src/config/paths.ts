@@ -79,6 +79,12 @@ export const paths = {
 /** Pages outside the signed-in app (no navigation entry). */
 export const PUBLIC_PAGE_KEYS: readonly PathKey[] = ['signIn', 'signUp', 'forgotPassword', 'resetPassword', 'acceptInvitation'];
 
+/**
+ * A read-only share link to a run or sweep, opened without signing in. Kept beside `paths`
+ * (not in it) because it is never a navigation target: the server makes these URLs.
+ */
+export const sharedPath = { path: '/shared/:token', getHref: (token: string) => `/shared/${encodeURIComponent(token)}` } as const;
+
 export type PathKey = keyof typeof paths;
 
 /**

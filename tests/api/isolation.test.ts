@@ -11,7 +11,7 @@ import { checkScenario, createScenario, waitForRun } from '../support/runs.ts';
 let ctx: TestContext;
 let a: Awaited<ReturnType<typeof signUp>>;
 let b: Awaited<ReturnType<typeof signUp>>;
-const ids = {} as Record<'scenario' | 'table' | 'sample' | 'run' | 'sweep' | 'token' | 'constraintSet', string>;
+const ids = {} as Record<'scenario' | 'table' | 'sample' | 'run' | 'sweep' | 'token' | 'constraintSet' | 'share', string>;
 
 beforeAll(async () => {
   ctx = await createTestApp();
@@ -25,6 +25,7 @@ beforeAll(async () => {
   ids.sweep = (await a.agent.post('/api/sweeps').send({ scenarioId: ids.scenario, axes: [{ path: 'envelope.alpha', values: [0.1, 1] }] }).expect(201)).body.id;
   ids.token = (await a.agent.post('/api/tokens').send({ name: 'A token' }).expect(201)).body.id;
   ids.constraintSet = (await a.agent.post('/api/constraint-sets').send({ name: 'A set', constraints: [{ kind: 'fraction', magnetic: 1, total: 10 }] }).expect(201)).body.id;
+  ids.share = (await a.agent.post(`/api/runs/${ids.run}/share`).expect(201)).body.id;
 });
 afterAll(() => ctx.close());
 
@@ -61,6 +62,15 @@ describe('tenant isolation', () => {
     ['put', 'constraint set', (x) => `/api/constraint-sets/${x.constraintSet}`, () => ({ name: 'Stolen', constraints: [{ kind: 'fraction', magnetic: 0, total: 1 }] })],
     ['delete', 'constraint set', (x) => `/api/constraint-sets/${x.constraintSet}`],
     ['get', 'run', (x) => `/api/runs/${x.run}/evaluation?constraintSet=library`],
+    ['get', 'run', (x) => `/api/runs/${x.run}/export`],
+    ['get', 'run', (x) => `/api/runs/${x.run}/export?format=ecsv&table=wd-mass`],
+    ['get', 'run', (x) => `/api/runs/${x.run}/export?format=votable&table=wd-mass`],
+    ['get', 'run', (x) => `/api/runs/${x.run}/references.bib`],
+    ['post', 'run', (x) => `/api/runs/${x.run}/share`],
+    ['get', 'sweep', (x) => `/api/sweeps/${x.sweep}/export`],
+    ['get', 'sweep', (x) => `/api/sweeps/${x.sweep}/export?format=ecsv&table=curve`],
+    ['post', 'sweep', (x) => `/api/sweeps/${x.sweep}/share`],
+    ['delete', 'share link', (x) => `/api/share-links/${x.share}`],
   ];
 
   for (const [method, what, url, body] of attempts) {
@@ -84,7 +94,7 @@ describe('tenant isolation', () => {
   });
 
   it('leaves the other department out of every list (library entries excepted)', async () => {
-    const lists = await Promise.all(['/api/scenarios', '/api/occurrence-tables', '/api/samples', '/api/runs', '/api/sweeps', '/api/tokens', '/api/constraint-sets'].map((u) => b.agent.get(u).expect(200)));
+    const lists = await Promise.all(['/api/scenarios', '/api/occurrence-tables', '/api/samples', '/api/runs', '/api/sweeps', '/api/tokens', '/api/constraint-sets', '/api/share-links'].map((u) => b.agent.get(u).expect(200)));
     const text = JSON.stringify(lists.map((l) => l.body));
     for (const id of Object.values(ids)) expect(text).not.toContain(id);
     const samples = lists[2].body.samples as { library: boolean }[];

@@ -96,6 +96,18 @@ export const EXPECTED_ACCESS: Record<string, Minimum> = {
   'GET /api/constraint-library': 'observer',
   'GET /api/runs/:id/evaluation': 'observer',
   'POST /api/stats/two-sample': 'observer',
+  // Exports in astronomers' formats and the references of a run.
+  'GET /api/runs/:id/export': 'observer',
+  'GET /api/runs/:id/references.bib': 'observer',
+  'GET /api/sweeps/:id/export': 'observer',
+  // Share links: modellers create and revoke, every member sees the list; the link's secret is the credential of /shared.
+  'POST /api/runs/:id/share': 'modeller',
+  'POST /api/sweeps/:id/share': 'modeller',
+  'GET /api/share-links': 'observer',
+  'DELETE /api/share-links/:id': 'modeller',
+  'GET /api/shared/:token': 'public',
+  'GET /api/shared/:token/export': 'public',
+  'GET /api/shared/:token/references.bib': 'public',
 };
 
 const RANK: Record<Who, number> = { anonymous: -1, observer: 0, modeller: 1, admin: 2 };

@@ -21,7 +21,7 @@ import type { RunsService } from './runs.service.ts';
 const FINAL = new Set(['succeeded', 'failed', 'cancelled']);
 const HEARTBEAT_MS = 15_000;
 
-function attachment(res: import('express').Response, type: string, filename: string, body: string) {
+export function attachment(res: import('express').Response, type: string, filename: string, body: string) {
   res.setHeader('Content-Type', `${type}; charset=utf-8`);
   res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
   res.send(body);

@@ -118,7 +118,12 @@ export function createSweepsService(deps: { db: Db; runs: RunsService; scenarios
     },
 
     async detail(auth: RequestAuth, id: string, sampleId?: string): Promise<SweepDetail> {
-      const department = departmentOf(auth);
+      return this.detailIn(departmentOf(auth).id, id, sampleId);
+    },
+
+    /** A sweep of the given department (also read through a share link, which names its department). */
+    async detailIn(departmentId: string, id: string, sampleId?: string): Promise<SweepDetail> {
+      const department = { id: departmentId };
       const { row, points } = await load(department.id, id);
       const sample: Sample | null = sampleId ? await samples.visible(department.id, sampleId) : null;
       const counts = sample?.kind === 'counts' && sample.magnetic !== null && sample.total !== null ? { k: sample.magnetic, n: sample.total } : null;

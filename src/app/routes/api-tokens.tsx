@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Card } from '../../components/ui/card.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
+import { DepartmentShareLinks } from '../../features/exports/components/department-share-links.tsx';
 import { CreateTokenForm, type CreatedToken } from '../../features/tokens/components/create-token-form.tsx';
 import { CurlExample } from '../../features/tokens/components/curl-example.tsx';
 import { NewTokenSecret } from '../../features/tokens/components/new-token-secret.tsx';
@@ -15,7 +16,7 @@ export function Component() {
       <PageHeader
         eyebrow={me.department.name}
         title="API tokens"
-        description="Personal tokens for the REST API and the command line: a script sends one in the Authorization header instead of signing in."
+        description="Personal tokens for the REST API and the command line (a script sends one in the Authorization header instead of signing in), and the department's read-only links."
       />
       <div className="flex flex-col gap-6">
         {created ? (
@@ -28,6 +29,7 @@ export function Component() {
           </Card>
         )}
         <TokensPanel departmentId={me.department.id} userId={me.user.id} departmentName={me.department.name} />
+        <DepartmentShareLinks departmentId={me.department.id} role={me.role} />
       </div>
     </>
   );

@@ -4,6 +4,7 @@ import { PageHeader } from '../../components/ui/page-header.tsx';
 import { QueryState } from '../../components/ui/query-state.tsx';
 import { paths } from '../../config/paths.ts';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
+import { SweepExportsSection } from '../../features/exports/components/sweep-exports-section.tsx';
 import { useSweep } from '../../features/sweeps/api/get-sweep.ts';
 import { SweepProgress } from '../../features/sweeps/components/sweep-progress.tsx';
 import { SweepResults } from '../../features/sweeps/components/sweep-results.tsx';
@@ -48,6 +49,7 @@ export function Component() {
                   )
                 }
               />
+              <SweepExportsSection sweepId={detail.id} />
             </div>
           </>
         );

@@ -28,7 +28,7 @@ import {
   WdMassBySettingChart,
   WdMassChart,
 } from './run-distribution-charts.tsx';
-import { RunExports } from './run-exports.tsx';
+import { RunExportsSection } from '../../exports/components/run-exports-section.tsx';
 import { RunHeadline } from './run-headline.tsx';
 import { RunProgressCard } from './run-progress-card.tsx';
 import { RunSplitCharts } from './run-split-charts.tsx';
@@ -183,7 +183,7 @@ function RunBody({
           <div className="grid items-start gap-6 xl:grid-cols-2">
             <RunAssumptions result={data} />
             <div className="flex flex-col gap-6">
-              <RunExports runId={run.id} />
+              <RunExportsSection runId={run.id} />
               <RunDetails run={run} />
             </div>
           </div>
