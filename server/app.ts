@@ -44,7 +44,7 @@ import { invitationsRoutes } from './modules/invitations/invitations.routes.ts';
 import { createInvitationsService } from './modules/invitations/invitations.service.ts';
 import { createMailer } from './modules/mail/mailer.ts';
 import { outboxRoutes } from './modules/mail/outbox.routes.ts';
-import { createRunNotices } from './modules/mail/run-notices.ts';
+import { createRunNotices } from './modules/runs/run-notices.ts';
 
 export interface AppDeps {
   config: Config;
