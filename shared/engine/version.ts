@@ -6,4 +6,4 @@
 export const CHUNK_SYSTEMS = 65536;
 
 /** Version of the engine's numbers: bump on any change to physics, draw order or chunking. */
-export const ENGINE_VERSION = `1.0.0+chunk${CHUNK_SYSTEMS}`;
+export const ENGINE_VERSION = `1.0.1+chunk${CHUNK_SYSTEMS}`; // 1.0.1: Φ from the 1e-15 normal tail (log-normal period truncation)
