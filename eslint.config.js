@@ -6,6 +6,7 @@
  */
 import fs from 'node:fs';
 import { builtinModules } from 'node:module';
+import { fileURLToPath } from 'node:url';
 import js from '@eslint/js';
 import { createNodeResolver, importX } from 'eslint-plugin-import-x';
 import reactHooks from 'eslint-plugin-react-hooks';
@@ -63,7 +64,10 @@ export default tseslint.config(
     files: ['**/*.{ts,tsx,js,mjs}'],
     languageOptions: { globals: { ...globals.node } },
     plugins: { 'import-x': importX, 'react-hooks': reactHooks, tidefield: { rules: { 'no-folder-cycle': noFolderCycle } } },
-    settings: { 'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs'] })] },
+    settings: {
+      'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs'] })],
+      'tidefield/root': fileURLToPath(new URL('.', import.meta.url)),
+    },
     linterOptions: { reportUnusedDisableDirectives: 'error' },
     rules: {
       // The rules of hooks (hooks at the top level, complete effect dependencies). The React Compiler

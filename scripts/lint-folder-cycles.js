@@ -153,7 +153,8 @@ export const noFolderCycle = {
     },
   },
   create(context) {
-    const rootDir = context.cwd;
+    // The project root: eslint.config.js passes its own folder, so linting from a subfolder works.
+    const rootDir = /** @type {string | undefined} */ (context.settings['tidefield/root']) ?? context.cwd;
     let components = cache.get(rootDir);
     if (!components) {
       components = buildComponents(rootDir);
