@@ -32,6 +32,9 @@ export default defineConfig({
             'server/cli/**/*.test.ts',
           ],
           environment: 'node',
+          // On two shared cores a test that takes 1 s alone can take 10 s; the heaviest suites
+          // (kernel, direct integration, engine pool) also carry their own explicit timeouts.
+          testTimeout: 30_000,
         },
       },
       {

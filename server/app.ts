@@ -46,11 +46,11 @@ import { createMailer } from './modules/mail/mailer.ts';
 import { constraintsRoutes } from './modules/constraints/constraints.routes.ts';
 import { createConstraintSetsService } from './modules/constraints/constraint-sets.service.ts';
 import { outboxRoutes } from './modules/mail/outbox.routes.ts';
-import { createRunNotices } from './modules/mail/run-notices.ts';
 import { exportsRoutes } from './modules/exports/exports.routes.ts';
 import { createExportsService } from './modules/exports/exports.service.ts';
 import { sharesRoutes } from './modules/shares/shares.routes.ts';
 import { createSharesService } from './modules/shares/shares.service.ts';
+import { createRunNotices } from './modules/runs/run-notices.ts';
 
 export interface AppDeps {
   config: Config;

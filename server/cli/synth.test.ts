@@ -60,6 +60,12 @@ describe('synth CLI', () => {
     expect((await run([file('broken.json', '{"seed": ')])).stderr).toMatch(/is not valid JSON/);
     expect((await run([file('ok.json', checkOne), '--workers', '0'])).stderr).toMatch(/--workers must be an integer/);
     expect((await run([])).code).toBe(2);
+    // Option errors come from node:util parseArgs and name the option.
+    const ok = file('ok.json', checkOne);
+    expect((await run([ok, '--speed', '3'])).stderr).toMatch(/Unknown option '--speed'/);
+    expect((await run([ok, '--out'])).stderr).toMatch(/--out <value>' argument missing/);
+    expect((await run([ok, ok])).stderr).toMatch(/only one scenario file may be given/);
+    expect((await run(['--help'])).code).toBe(0);
   });
 });
 

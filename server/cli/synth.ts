@@ -1,5 +1,6 @@
 import { readFile, writeFile } from 'node:fs/promises';
 import { fileURLToPath } from 'node:url';
+import { parseArgs } from 'node:util';
 import { occurrenceTableSchema } from '../../shared/contracts/occurrence-table.ts';
 import { parseScenario, ScenarioValidationError } from '../../shared/contracts/scenario.ts';
 import { EngineError } from '../../shared/engine/errors.ts';
@@ -31,35 +32,31 @@ interface CliArgs {
   constraints?: string;
 }
 
-function parseArgs(argv: readonly string[]): CliArgs {
-  let scenarioPath: string | undefined;
-  let workers: number | undefined;
-  let out: string | undefined;
-  let constraints: string | undefined;
-  for (let i = 0; i < argv.length; i++) {
-    const arg = argv[i];
-    if (arg === '--workers') {
-      const value = Number(argv[++i]);
-      if (!Number.isInteger(value) || value < 1 || value > 256) throw new CliError(`--workers must be an integer between 1 and 256 (got ${argv[i] ?? 'nothing'})\n${USAGE}`);
-      workers = value;
-    } else if (arg === '--out') {
-      out = argv[++i];
-      if (!out) throw new CliError(`--out needs a file name\n${USAGE}`);
-    } else if (arg === '--constraints') {
-      constraints = argv[++i];
-      if (!constraints) throw new CliError(`--constraints needs a constraint-set file name\n${USAGE}`);
-    } else if (arg === '--help' || arg === '-h') {
-      throw new CliError(USAGE, 0);
-    } else if (arg.startsWith('--')) {
-      throw new CliError(`unknown option ${arg}\n${USAGE}`);
-    } else if (scenarioPath === undefined) {
-      scenarioPath = arg;
-    } else {
-      throw new CliError(`only one scenario file may be given (got ${scenarioPath} and ${arg})\n${USAGE}`);
-    }
+function readArgs(argv: readonly string[]): CliArgs {
+  let parsed: { values: { workers?: string; out?: string; constraints?: string; help?: boolean }; positionals: string[] };
+  try {
+    parsed = parseArgs({
+      args: [...argv],
+      allowPositionals: true,
+      strict: true,
+      options: { workers: { type: 'string' }, out: { type: 'string' }, constraints: { type: 'string' }, help: { type: 'boolean', short: 'h' } },
+    });
+  } catch (error) {
+    // parseArgs names the option in its message (unknown option, or an option missing its value).
+    throw new CliError(`${(error as Error).message}\n${USAGE}`);
   }
-  if (!scenarioPath) throw new CliError(`no scenario file given\n${USAGE}`);
-  return { scenarioPath, workers, out, constraints };
+  const { values, positionals } = parsed;
+  if (values.help) throw new CliError(USAGE, 0);
+  let workers: number | undefined;
+  if (values.workers !== undefined) {
+    workers = Number(values.workers);
+    if (!Number.isInteger(workers) || workers < 1 || workers > 256) throw new CliError(`--workers must be an integer between 1 and 256 (got ${values.workers})\n${USAGE}`);
+  }
+  if (values.out === '') throw new CliError(`--out needs a file name\n${USAGE}`);
+  if (values.constraints === '') throw new CliError(`--constraints needs a constraint-set file name\n${USAGE}`);
+  if (positionals.length === 0) throw new CliError(`no scenario file given\n${USAGE}`);
+  if (positionals.length > 1) throw new CliError(`only one scenario file may be given (got ${positionals.join(' and ')})\n${USAGE}`);
+  return { scenarioPath: positionals[0], workers, out: values.out, constraints: values.constraints };
 }
 
 async function readScenarioDocument(path: string): Promise<unknown> {
@@ -115,7 +112,7 @@ async function readConstraintSet(path: string): Promise<{ name: string; constrai
 /** The CLI without process globals: returns the exit code. */
 export async function main(argv: readonly string[], io: CliIo): Promise<number> {
   try {
-    const args = parseArgs(argv);
+    const args = readArgs(argv);
     const document = await resolveTable(await readScenarioDocument(args.scenarioPath));
     const scenario = parseScenario(document);
     const constraintSet = args.constraints ? await readConstraintSet(args.constraints) : undefined;

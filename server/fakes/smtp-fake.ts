@@ -49,9 +49,15 @@ export async function startSmtpFake(options: { host?: string; smtpPort?: number;
     onData(stream, session, callback) {
       const chunks: Buffer[] = [];
       stream.on('data', (chunk: Buffer) => chunks.push(chunk));
-      stream.on('end', () => {
+      stream.on('end', async () => {
         const raw = Buffer.concat(chunks).toString('utf8');
-        const parsed = parseMessage(raw);
+        let parsed: Awaited<ReturnType<typeof parseMessage>>;
+        try {
+          parsed = await parseMessage(raw);
+        } catch (error) {
+          callback(error as Error);
+          return;
+        }
         stored.push({
           id: randomBytes(8).toString('hex'),
           receivedAt: new Date().toISOString(),

@@ -5,7 +5,7 @@ import { describeIssues } from '../../shared/contracts/schema-issues.ts';
 import { AppError, badRequest, forbidden, unauthenticated } from './errors.ts';
 
 const ZOD_DEFAULT_MESSAGE = /^(Too (big|small)|Invalid (input|option|element|key|value|union)|Expected)/;
-import type { RequestAuth } from '../modules/auth/auth.context.ts';
+import type { RequestAuth } from './request-auth.ts';
 
 /**
  * Who may call a route: anyone, any signed-in user (even one without a department), or a

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { occurrenceTableSchema } from '../../shared/contracts/occurrence-table.ts';
 import type { Role } from '../../shared/contracts/roles.ts';
-import type { RequestAuth } from '../modules/auth/auth.context.ts';
+import type { RequestAuth } from '../lib/request-auth.ts';
 import { createOccurrenceTablesService } from '../modules/occurrence-tables/occurrence-tables.service.ts';
 import { createSamplesService } from '../modules/samples/samples.service.ts';
 import { loadPresets } from '../modules/scenarios/presets.ts';

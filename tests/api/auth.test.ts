@@ -2,7 +2,7 @@ import { eq } from 'drizzle-orm';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sessions } from '../../server/modules/auth/sessions.table.ts';
-import { users } from '../../server/modules/auth/users.table.ts';
+import { users } from '../../server/modules/users/users.table.ts';
 import { GOOD_PASSWORD, createTestApp, signUp, uniqueEmail, type TestContext } from '../support/test-app.ts';
 
 let ctx: TestContext;

@@ -6,7 +6,7 @@ import request from 'supertest';
 import Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createEnginePool } from '../../server/engine-pool/engine-pool.ts';
-import { balanceOf, buyPack, expectSelfContained, ledgerCheck, payOnStandIn, startCheckout } from '../support/billing.ts';
+import { balanceOf, expectSelfContained, ledgerCheck, payOnStandIn, startCheckout } from '../support/billing.ts';
 import { checkScenario, createScenario, waitForRun } from '../support/runs.ts';
 import { addMember, createTestApp, signUp, TEST_STRIPE_SECRETS, type TestContext } from '../support/test-app.ts';
 

@@ -1,6 +1,6 @@
 import { and, eq, isNull } from 'drizzle-orm';
 import type { NotificationSettings } from '../../../shared/contracts/account.ts';
-import { users } from '../auth/users.table.ts';
+import { users } from '../users/users.table.ts';
 import type { DbOrTx } from '../departments/departments.repository.ts';
 import { notificationSettings, passwordResets } from './account.table.ts';
 

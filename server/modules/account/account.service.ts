@@ -4,7 +4,7 @@ import { publicBaseUrl, type Config } from '../../config.ts';
 import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { recordAudit } from '../audit/audit.service.ts';
-import type { RequestAuth } from '../auth/auth.context.ts';
+import type { RequestAuth } from '../../lib/request-auth.ts';
 import { findUserByEmail } from '../auth/auth.repository.ts';
 import { hashPassword } from '../auth/password.ts';
 import type { SessionStore } from '../auth/session.ts';

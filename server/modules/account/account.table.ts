@@ -1,6 +1,6 @@
 import { boolean, char, index, mysqlTable } from 'drizzle-orm/mysql-core';
 import { idColumn, timestamp } from '../../db/columns.ts';
-import { users } from '../auth/users.table.ts';
+import { users } from '../users/users.table.ts';
 
 /** A password-reset link; only the token's SHA-256 is stored. Single use, valid for an hour. */
 export const passwordResets = mysqlTable(

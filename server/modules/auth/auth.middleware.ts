@@ -1,7 +1,7 @@
 import type { RequestHandler } from 'express';
 import type { Db } from '../../db/client.ts';
 import { unauthenticated } from '../../lib/errors.ts';
-import type { RequestAuth } from './auth.context.ts';
+import type { RequestAuth } from '../../lib/request-auth.ts';
 import { setActiveDepartment } from './auth.repository.ts';
 import { loadCaller } from './caller.ts';
 import type { SessionStore } from './session.ts';

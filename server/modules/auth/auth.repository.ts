@@ -3,7 +3,7 @@ import type { Db } from '../../db/client.ts';
 import { isDuplicateKey } from '../../lib/errors.ts';
 import type { DbOrTx } from '../departments/departments.repository.ts';
 import { sessions } from './sessions.table.ts';
-import { users } from './users.table.ts';
+import { users } from '../users/users.table.ts';
 import { emailTaken } from './auth.errors.ts';
 
 export async function findUserByEmail(db: DbOrTx, email: string) {

@@ -3,7 +3,7 @@ import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { recordAudit } from '../audit/audit.service.ts';
 import { insertDepartment, insertMembership } from '../departments/departments.repository.ts';
-import type { RequestAuth } from './auth.context.ts';
+import type { RequestAuth } from '../../lib/request-auth.ts';
 import { notAMember, wrongCredentials } from './auth.errors.ts';
 import { findUserByEmail, insertUser, setActiveDepartment } from './auth.repository.ts';
 import { loadCaller } from './caller.ts';

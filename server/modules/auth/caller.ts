@@ -1,6 +1,6 @@
 import type { Db } from '../../db/client.ts';
 import { membershipsOfUser } from '../departments/departments.repository.ts';
-import type { RequestAuth } from './auth.context.ts';
+import type { RequestAuth } from '../../lib/request-auth.ts';
 
 /**
  * Builds the caller's RequestAuth from their memberships, read fresh (a removed member loses

@@ -2,7 +2,7 @@ import { DrizzleMySQLAdapter } from '@lucia-auth/adapter-drizzle';
 import { Lucia, TimeSpan } from 'lucia';
 import type { Db } from '../../db/client.ts';
 import { sessions } from './sessions.table.ts';
-import { users } from './users.table.ts';
+import { users } from '../users/users.table.ts';
 
 /**
  * Sessions through lucia 3 and its Drizzle adapter. lucia is deprecated upstream; keeping it

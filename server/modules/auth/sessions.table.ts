@@ -1,6 +1,6 @@
 import { index, mysqlTable, datetime, varchar } from 'drizzle-orm/mysql-core';
 import { idColumn } from '../../db/columns.ts';
-import { users } from './users.table.ts';
+import { users } from '../users/users.table.ts';
 import { departments } from '../departments/departments.table.ts';
 
 /** Lucia's session table: id, userId and expiresAt are required by its Drizzle adapter. */

@@ -1,8 +1,8 @@
 import { and, count, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { LedgerKind } from '../../../shared/contracts/billing.ts';
-import type { Db, Tx } from '../../db/client.ts';
+import type { Tx } from '../../db/client.ts';
 import { isDuplicateKey } from '../../lib/errors.ts';
-import { users } from '../auth/users.table.ts';
+import { users } from '../users/users.table.ts';
 import type { DbOrTx } from '../departments/departments.repository.ts';
 import { departments } from '../departments/departments.table.ts';
 import { runs } from '../runs/runs.table.ts';

@@ -7,7 +7,7 @@ import type { Db, Tx } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { AppError, badRequest, isDuplicateKey } from '../../lib/errors.ts';
 import { recordAudit } from '../audit/audit.service.ts';
-import { departmentOf, type RequestAuth } from '../auth/auth.context.ts';
+import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import { receiptEmail } from '../mail/mail-templates.ts';
 import type { Mailer } from '../mail/mailer.ts';
 import type { RunBilling } from '../runs/runs.service.ts';

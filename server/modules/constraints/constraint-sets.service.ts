@@ -18,7 +18,7 @@ import { sameFractionTest } from '../../../shared/engine/stats/two-sample.ts';
 import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { recordAudit } from '../audit/audit.service.ts';
-import { departmentOf, type RequestAuth } from '../auth/auth.context.ts';
+import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import { parseConstraintCsv } from './constraint-csv.ts';
 import {
   findConstraintSet,

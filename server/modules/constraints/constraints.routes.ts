@@ -13,7 +13,7 @@ import {
 } from '../../../shared/contracts/constraints.ts';
 import { idResponseSchema } from '../../../shared/contracts/scenarios-api.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
-import { departmentOf } from '../auth/auth.context.ts';
+import { departmentOf } from '../../lib/request-auth.ts';
 import type { RunsService } from '../runs/runs.service.ts';
 import { twoSample, type ConstraintSetsService } from './constraint-sets.service.ts';
 

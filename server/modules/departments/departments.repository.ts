@@ -1,7 +1,7 @@
 import { and, asc, eq, sql } from 'drizzle-orm';
 import type { Role } from '../../../shared/contracts/roles.ts';
 import type { Db, Tx } from '../../db/client.ts';
-import { users } from '../auth/users.table.ts';
+import { users } from '../users/users.table.ts';
 import { departments, memberships } from './departments.table.ts';
 
 export type DbOrTx = Db | Tx;

@@ -1,7 +1,7 @@
 import { mysqlEnum, mysqlTable, primaryKey, index, varchar } from 'drizzle-orm/mysql-core';
 import { ROLES } from '../../../shared/contracts/roles.ts';
 import { idColumn, timestamp } from '../../db/columns.ts';
-import { users } from '../auth/users.table.ts';
+import { users } from '../users/users.table.ts';
 
 export const departments = mysqlTable('departments', {
   id: idColumn().primaryKey(),

@@ -2,8 +2,8 @@ import type { Member } from '../../../shared/contracts/members.ts';
 import type { Role } from '../../../shared/contracts/roles.ts';
 import type { Db } from '../../db/client.ts';
 import { recordAudit } from '../audit/audit.service.ts';
-import type { RequestAuth } from '../auth/auth.context.ts';
-import { departmentOf } from '../auth/auth.context.ts';
+import type { RequestAuth } from '../../lib/request-auth.ts';
+import { departmentOf } from '../../lib/request-auth.ts';
 import { deleteMembership, lockMemberships, membersOfDepartment, updateRole } from './departments.repository.ts';
 import { lastAdmin, memberNotFound } from './members.errors.ts';
 

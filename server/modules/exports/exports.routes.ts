@@ -2,7 +2,7 @@ import { Router, type Response } from 'express';
 import { idParamsSchema } from '../../../shared/contracts/common.ts';
 import { exportListingSchema, exportQuerySchema } from '../../../shared/contracts/exports.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
-import { departmentOf } from '../auth/auth.context.ts';
+import { departmentOf } from '../../lib/request-auth.ts';
 import { attachment } from '../runs/runs.routes.ts';
 import type { ExportAnswer, ExportsService } from './exports.service.ts';
 

@@ -2,7 +2,8 @@ import { parseScenario, type Scenario } from '../../../shared/contracts/scenario
 import { EXPORT_FORMATS, type ExportListing, type ExportQuery } from '../../../shared/contracts/exports.ts';
 import { publicBaseUrl, type Config } from '../../config.ts';
 import type { Db } from '../../db/client.ts';
-import { methodsUsed, scenarioHash } from '../../engine.ts';
+import { scenarioHash } from '../../../shared/engine/kernel/scenario-hash.ts';
+import { methodsUsed } from '../../../shared/engine/result/methods.ts';
 import { AppError, badRequest } from '../../lib/errors.ts';
 import { runsOfSweep } from '../runs/runs.repository.ts';
 import type { RunsService } from '../runs/runs.service.ts';

@@ -4,7 +4,7 @@ import type { Config } from '../../config.ts';
 import type { Db } from '../../db/client.ts';
 import { AppError } from '../../lib/errors.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
-import { departmentOf } from '../auth/auth.context.ts';
+import { departmentOf } from '../../lib/request-auth.ts';
 import { membersOfDepartment } from '../departments/departments.repository.ts';
 import { DEPARTMENT_HEADER } from './mailer.ts';
 

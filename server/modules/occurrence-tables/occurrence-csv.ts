@@ -5,38 +5,13 @@ import {
   STORED_TABLE_MAX_ROWS,
   type CsvProblem,
 } from '../../../shared/contracts/occurrence-tables-api.ts';
-import { companionRowSchema, type CompanionRow } from '../../../shared/contracts/occurrence-table.ts';
-import { describeIssues } from '../../../shared/contracts/schema-issues.ts';
-
-type Column = (typeof OCCURRENCE_CSV_COLUMNS)[number];
-
-const MASS_KEYS = { MJup: 'massMJup', Msun: 'massMsun', q: 'massRatio' } as const;
-const NUMERIC: Column[] = ['massMin', 'massMax', 'periodMinDays', 'periodMaxDays', 'occurrence', 'massSlope', 'periodSlope', 'meanLog10PeriodDays', 'sigmaLog10Period'];
+import { readRowCells } from '../../../shared/contracts/occurrence-row-cells.ts';
+import type { CompanionRow } from '../../../shared/contracts/occurrence-table.ts';
 
 export interface ParsedCsv {
   rows: CompanionRow[];
   problems: CsvProblem[];
   rowCount: number;
-}
-
-/** "massMJup[0]" → ['massMJup', 0]. */
-function fieldPath(field: string): PropertyKey[] {
-  if (!field) return [];
-  return field
-    .replace(/\[(\d+)\]/g, '.$1')
-    .split('.')
-    .filter(Boolean)
-    .map((part) => (/^\d+$/.test(part) ? Number(part) : part));
-}
-
-/** Which CSV column a schema path of a companion row came from. */
-function columnOf(path: readonly PropertyKey[]): Column {
-  const [first, second] = path;
-  if (first === 'massMJup' || first === 'massMsun' || first === 'massRatio') return second === 1 ? 'massMax' : 'massMin';
-  if (first === 'periodDays') return second === 1 ? 'periodMaxDays' : 'periodMinDays';
-  if (first === 'shape') return second === 'kind' || second === undefined ? 'shape' : (second as Column);
-  if (first === undefined) return 'massUnit';
-  return first as Column;
 }
 
 /**
@@ -73,45 +48,13 @@ export function parseOccurrenceCsv(text: string): ParsedCsv {
   const rows: CompanionRow[] = [];
   parsed.data.forEach((record, index) => {
     const line = index + 2;
-    const rowProblems: CsvProblem[] = [];
-    const cell = (c: Column) => (record[c] ?? '').trim();
-    const numbers: Partial<Record<Column, number>> = {};
-    for (const c of NUMERIC) {
-      const raw = cell(c);
-      if (raw === '') continue;
-      const value = Number(raw);
-      if (!Number.isFinite(value)) rowProblems.push({ line, column: c, message: `${c} must be a number (got "${raw}")` });
-      else numbers[c] = value;
-    }
-    const unit = cell('massUnit');
-    const massKey = MASS_KEYS[unit as keyof typeof MASS_KEYS];
-    if (!massKey) rowProblems.push({ line, column: 'massUnit', message: `massUnit must be one of MJup, Msun, q (got "${unit}")` });
-    if (rowProblems.length > 0) {
-      problems.push(...rowProblems);
+    const check = readRowCells(record);
+    if (check.ok) {
+      rows.push(check.row);
       return;
     }
-    const shapeKind = cell('shape') || 'powerlaw';
-    const shape =
-      shapeKind === 'lognormalPeriod'
-        ? { kind: shapeKind, meanLog10PeriodDays: numbers.meanLog10PeriodDays, sigmaLog10Period: numbers.sigmaLog10Period }
-        : { kind: shapeKind, massSlope: numbers.massSlope, periodSlope: numbers.periodSlope };
-    const candidate: Record<string, unknown> = {
-      class: cell('class'),
-      [massKey]: [numbers.massMin, numbers.massMax],
-      periodDays: [numbers.periodMinDays, numbers.periodMaxDays],
-      occurrence: numbers.occurrence,
-      shape: Object.fromEntries(Object.entries(shape).filter(([, v]) => v !== undefined)),
-    };
-    for (const c of ['label', 'source', 'assumed'] as const) if (cell(c) !== '') candidate[c] = cell(c);
-    const result = companionRowSchema.safeParse(candidate, { reportInput: true });
-    if (result.success) {
-      rows.push(result.data);
-      return;
-    }
-    for (const issue of describeIssues(companionRowSchema, candidate, result.error.issues)) {
-      const column = columnOf(fieldPath(issue.field));
-      const message = issue.field && issue.message.startsWith(issue.field) ? column + issue.message.slice(issue.field.length) : `${column}: ${issue.message}`;
-      problems.push({ line, column, message });
+    for (const { column, field, message } of check.problems) {
+      problems.push({ line, column, message: field && message.startsWith(field) ? column + message.slice(field.length) : `${column}: ${message}` });
     }
   });
   return { rows, problems, rowCount: parsed.data.length };

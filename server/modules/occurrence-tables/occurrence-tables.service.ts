@@ -3,7 +3,7 @@ import type { CreateTableBody, TableDetail, TableSummary, UpdateTableBody } from
 import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { recordAudit } from '../audit/audit.service.ts';
-import { departmentOf, type RequestAuth } from '../auth/auth.context.ts';
+import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import { formatOccurrenceCsv, parseOccurrenceCsv } from './occurrence-csv.ts';
 import { CsvInvalidError, tableNotFound } from './occurrence-tables.errors.ts';
 import { deleteTable, findTable, insertTable, listTables, replaceRows, tableRows, updateTable, type TableRow } from './occurrence-tables.repository.ts';

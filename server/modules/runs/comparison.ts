@@ -1,5 +1,5 @@
 import type { ScenarioResult } from '../../../shared/contracts/result.ts';
-import type { Sample, SampleBin } from '../../../shared/contracts/samples.ts';
+import type { Sample } from '../../../shared/contracts/samples.ts';
 import type {
   CountsComparison,
   FractionConstraint as FractionConstraintComparison,

@@ -1,7 +1,7 @@
 import type { MethodEntry, ScenarioResult } from '../../../shared/contracts/result.ts';
 import type { Scenario } from '../../../shared/contracts/scenario.ts';
 import { formatPercentWithError } from '../../../shared/engine/stats/format.ts';
-import { methodsUsed } from '../../engine.ts';
+import { methodsUsed } from '../../../shared/engine/result/methods.ts';
 
 /** A CSV with one section per table of the result: headline counts, then every histogram. */
 export function resultCsv(result: ScenarioResult): string {

@@ -3,7 +3,7 @@ import type { ScenarioResult } from '../../../shared/contracts/result.ts';
 import type { RunProgressEvent, RunStatus } from '../../../shared/contracts/runs.ts';
 import { parseScenario, type Scenario } from '../../../shared/contracts/scenario.ts';
 import type { Db } from '../../db/client.ts';
-import { addTally, type ChunkTally } from '../../engine.ts';
+import { addTally, type ChunkTally } from '../../../shared/engine/kernel/tally.ts';
 import { ChunkSet } from './chunk-set.ts';
 import { resultBinRows } from './result-bins.ts';
 import type { RunEvents } from './run-events.ts';

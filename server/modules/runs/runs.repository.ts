@@ -2,7 +2,7 @@ import { and, asc, count, desc, eq, inArray, isNull, like, sql, type SQL } from 
 import type { RunListQuery, RunStatus } from '../../../shared/contracts/runs.ts';
 import type { Db } from '../../db/client.ts';
 import type { DbOrTx } from '../departments/departments.repository.ts';
-import { users } from '../auth/users.table.ts';
+import { users } from '../users/users.table.ts';
 import { engulfmentGrids, runBins, runCheckpoints, runResults, runs, type RunRow } from './runs.table.ts';
 
 export type { RunRow };

@@ -4,7 +4,7 @@ import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { AppError, notFound } from '../../lib/errors.ts';
 import { recordAudit } from '../audit/audit.service.ts';
-import { departmentOf, type RequestAuth } from '../auth/auth.context.ts';
+import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import { PUBLISHED_CONSTRAINTS } from './library.ts';
 import {
   binsOf,

@@ -1,7 +1,7 @@
 import { and, desc, eq, isNull } from 'drizzle-orm';
 import type { Db } from '../../db/client.ts';
 import type { DbOrTx } from '../departments/departments.repository.ts';
-import { users } from '../auth/users.table.ts';
+import { users } from '../users/users.table.ts';
 import { scenarios, scenarioVersions } from './scenarios.table.ts';
 
 export type ScenarioRow = typeof scenarios.$inferSelect;

@@ -8,9 +8,9 @@ import { parseScenario, ScenarioValidationError, type Scenario } from '../../../
 import { listPriceCredits } from '../../../shared/contracts/pricing.ts';
 import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
-import { scenarioHash } from '../../engine.ts';
+import { scenarioHash } from '../../../shared/engine/kernel/scenario-hash.ts';
 import { recordAudit } from '../audit/audit.service.ts';
-import { departmentOf, type RequestAuth } from '../auth/auth.context.ts';
+import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import { invalidDocument, scenarioNotFound, versionNotFound } from './scenarios.errors.ts';
 import {
   findScenario,

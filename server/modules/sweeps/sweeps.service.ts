@@ -7,7 +7,7 @@ import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { AppError, notFound } from '../../lib/errors.ts';
 import { recordAudit } from '../audit/audit.service.ts';
-import { departmentOf, type RequestAuth } from '../auth/auth.context.ts';
+import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import type { RunScheduler } from '../runs/run-scheduler.ts';
 import { predictedFor } from '../runs/comparison.ts';
 import { loadResult, runsOfSweep } from '../runs/runs.repository.ts';

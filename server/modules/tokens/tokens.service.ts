@@ -5,9 +5,9 @@ import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { notFound } from '../../lib/errors.ts';
 import { recordAudit } from '../audit/audit.service.ts';
-import { departmentOf, type RequestAuth } from '../auth/auth.context.ts';
+import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import type { CallerResolver } from '../auth/auth.middleware.ts';
-import { users } from '../auth/users.table.ts';
+import { users } from '../users/users.table.ts';
 import { apiTokens } from './tokens.table.ts';
 
 const TOKEN_PREFIX = 'tfk_';

@@ -1,6 +1,6 @@
 import { char, index, mysqlTable, varchar } from 'drizzle-orm/mysql-core';
 import { idColumn, timestamp } from '../../db/columns.ts';
-import { users } from '../auth/users.table.ts';
+import { users } from '../users/users.table.ts';
 
 /** Personal API tokens. Only a sha256 of the secret is stored; the secret is shown once. */
 export const apiTokens = mysqlTable(

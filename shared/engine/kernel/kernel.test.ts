@@ -36,7 +36,7 @@ describe('chunk plan', () => {
   });
 });
 
-describe('kernel determinism and exact sums', () => {
+describe('kernel determinism and exact sums', { timeout: 60_000 }, () => {
   const s = checkOne({ systems: 200_000 });
   const parts = tallies(s);
 
@@ -85,7 +85,7 @@ describe('kernel determinism and exact sums', () => {
   });
 });
 
-describe('common random numbers', () => {
+describe('common random numbers', { timeout: 60_000 }, () => {
   const base = checkOne({ systems: 150_000 });
 
   it('the one-run multiplier response is exact: rerunning at an edge gives exactly magneticAt there', () => {
@@ -113,7 +113,7 @@ describe('common random numbers', () => {
   }, 120_000);
 });
 
-describe('Monte Carlo error', () => {
+describe('Monte Carlo error', { timeout: 60_000 }, () => {
   it('shrinks as 1/√N, and matches the scatter between independent seeds', () => {
     const seN = (n: number) => buildResult(checkOne({ systems: n }), sum(checkOne({ systems: n }), tallies(checkOne({ systems: n })))).fraction.se!;
     // With f nearly equal in both runs, se(4N)/se(N) = 1/2 to within the ~1% change of √(f(1−f)).
@@ -136,7 +136,7 @@ describe('Monte Carlo error', () => {
   }, 120_000);
 });
 
-describe('other options run and respond as they should', () => {
+describe('other options run and respond as they should', { timeout: 60_000 }, () => {
   it('switching a channel off removes its magnetic white dwarfs', () => {
     const s = checkOne({ systems: 70_000, channels: { disruption: false, fossil: { enabled: false } } });
     expect(buildResult(s, sum(s, tallies(s))).counts.magnetic).toBe(0);

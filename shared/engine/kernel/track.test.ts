@@ -22,7 +22,7 @@ const scenario = parseScenario({
   envelope: { alpha: 1, lambda: 0.5 },
 });
 
-describe('giant.kind = "track" wiring', () => {
+describe('giant.kind = "track" wiring', { timeout: 60_000 }, () => {
   const input = engulfmentGridInputFor(scenario);
   const grid = buildEngulfmentGrid(input);
 

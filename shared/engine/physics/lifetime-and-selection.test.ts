@@ -3,7 +3,6 @@ import { mestelLuminosityRatio } from './cooling-mestel1952.ts';
 import { scalingLifetimeGyr } from './lifetime-scaling.ts';
 import { tabulatedLifetimeGyr } from './lifetime-table.ts';
 import { magnitudeLimitedAcceptance, opticalFlux } from './selection-magnitude-limited.ts';
-import { stellarAgeGyr } from './star-formation-history.ts';
 
 describe('main-sequence lifetimes', () => {
   it('scaling: the Sun lives 10 Gyr and a 2 Msun star 10 · 2^-2.5 ≈ 1.77 Gyr (common practice, no source)', () => {
@@ -16,13 +15,6 @@ describe('main-sequence lifetimes', () => {
     expect(tabulatedLifetimeGyr(3, masses, times)).toBeCloseTo(10 * Math.pow(3, -2.5), 12);
     expect(tabulatedLifetimeGyr(6, masses, times)).toBeCloseTo(10 * Math.pow(6, -2.5), 12);
     expect(() => tabulatedLifetimeGyr(Number.NaN, masses, times)).toThrow(/massMsun = NaN/);
-  });
-});
-
-describe('star-formation history', () => {
-  it('burst gives every star the age; constant maps u onto [0, age]', () => {
-    expect(stellarAgeGyr({ kind: 'burst', ageGyr: 10 }, 0.3)).toBe(10);
-    expect(stellarAgeGyr({ kind: 'constant', ageGyr: 10 }, 0.25)).toBe(2.5);
   });
 });
 

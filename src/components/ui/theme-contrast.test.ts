@@ -1,13 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import { colours } from '../../../tailwind.config.ts';
-import { contrastRatio, hexToRgb } from '../../lib/colour-science.ts';
+import { formatHex, parse, wcagContrast, type Rgb } from 'culori';
 
 const { ink, foam, lantern, coral, kelp, tide, dusk } = colours;
 
-/** The colour of `top` at `alpha` over `base`, as the browser composites a tinted badge. */
+// WCAG 2.2 contrast ratio from culori (a reference library).
+const contrastRatio = wcagContrast;
+
+/** The colour of `top` at `alpha` over `base`, as the browser composites a tinted badge (in encoded sRGB). */
 function over(top: string, alpha: number, base: string): string {
-  const [t, b] = [hexToRgb(top), hexToRgb(base)];
-  return `#${t.map((v, i) => Math.round((alpha * v + (1 - alpha) * b[i]) * 255).toString(16).padStart(2, '0')).join('')}`;
+  const [t, b] = [parse(top) as Rgb, parse(base) as Rgb];
+  const mix = (x: number, y: number) => alpha * x + (1 - alpha) * y;
+  return formatHex({ mode: 'rgb', r: mix(t.r, b.r), g: mix(t.g, b.g), b: mix(t.b, b.b) });
 }
 
 const surfaces = { 'ink-950': ink[950], 'ink-900': ink[900], 'ink-850': ink[850], 'ink-800': ink[800] };

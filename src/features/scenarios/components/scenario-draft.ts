@@ -1,3 +1,4 @@
+import canonicalize from 'canonicalize';
 import { parseScenario, scenarioSchema } from '../../../../shared/contracts/scenario.ts';
 import { describeIssues, formatNumber, formatPath, numberBounds, schemaAt, type FieldIssue } from '../../../../shared/contracts/schema-issues.ts';
 
@@ -151,15 +152,9 @@ export function defaultDraft(seed: string = newSeed()): Draft {
   return resolvedDraft({ seed });
 }
 
-/** Key order does not matter; everything else does. */
+/** Key order does not matter; everything else does (RFC 8785 canonical JSON, as the scenario hash uses). */
 export function sameDocument(a: unknown, b: unknown): boolean {
-  return stableJson(a) === stableJson(b);
-}
-
-function stableJson(value: unknown): string {
-  return JSON.stringify(value, (_key, v: unknown) =>
-    isRecord(v) && !Array.isArray(v) ? Object.fromEntries(Object.entries(v).sort(([x], [y]) => (x < y ? -1 : x > y ? 1 : 0))) : v,
-  );
+  return canonicalize(a) === canonicalize(b);
 }
 
 /** The draft as the JSON a power user reads or pastes (NaN, which JSON lacks, shows as null). */

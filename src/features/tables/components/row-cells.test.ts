@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { CompanionRow } from '../../../../shared/contracts/occurrence-table.ts';
-import { blankCells, cellOfServerField, cellsFromRow, checkCells, columnOfPath, serverCellMessage, shapeColumns } from './row-cells.ts';
+import { cellsFromRow, columnOfPath } from '../../../../shared/contracts/occurrence-row-cells.ts';
+import { blankCells, cellOfServerField, checkCells, serverCellMessage, shapeColumns } from './row-cells.ts';
 
 // The first row of the baseline table (shared/scenarios/baseline-occurrence.json).
 const cumming: CompanionRow = {

@@ -12,14 +12,12 @@ import {
   blankCells,
   cellKey,
   cellOfServerField,
-  cellsFromRow,
   checkCells,
   serverCellMessage,
   shapeColumns,
-  type CellColumn,
   type CellProblem,
-  type RowCells,
 } from './row-cells.ts';
+import { cellsFromRow, type CellColumn, type RowCells } from '../../../../shared/contracts/occurrence-row-cells.ts';
 
 const PAGE_SIZE = 25;
 

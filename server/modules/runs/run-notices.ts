@@ -2,9 +2,9 @@ import { publicBaseUrl, type Config } from '../../config.ts';
 import type { Db } from '../../db/client.ts';
 import { findNotificationSettings } from '../account/account.repository.ts';
 import { findUserById } from '../auth/auth.repository.ts';
-import type { RunRow } from '../runs/runs.table.ts';
-import { runFailedEmail, runFinishedEmail } from './mail-templates.ts';
-import type { Mailer } from './mailer.ts';
+import type { RunRow } from './runs.table.ts';
+import { runFailedEmail, runFinishedEmail } from '../mail/mail-templates.ts';
+import type { Mailer } from '../mail/mailer.ts';
 
 /** E-mails a run's owner when it succeeds or fails (not when cancelled), if their settings allow. */
 export function createRunNotices(deps: { db: Db; config: Config; mailer: Mailer }) {

@@ -1,4 +1,4 @@
-import type { Role } from '../../../shared/contracts/roles.ts';
+import type { Role } from '../../shared/contracts/roles.ts';
 
 /** Who is calling, resolved once per request by the authentication middleware. */
 export interface RequestAuth {
