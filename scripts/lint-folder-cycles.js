@@ -43,6 +43,7 @@ function unitOf(rootDir, dir) {
   return segments.join('/');
 }
 const SOURCE = /\.(ts|tsx|mts|js|mjs)$/;
+const TEST_FILE = /\.test\.(ts|tsx|mts|js|mjs)$/;
 const SPECIFIERS = [
   /\b(?:import|export)\s[^'";]*?\sfrom\s*['"](\.{1,2}\/[^'"]+)['"]/g,
   /\bimport\s*['"](\.{1,2}\/[^'"]+)['"]/g,
@@ -61,7 +62,8 @@ function walk(dir, out) {
     if (entry.name === 'node_modules' || entry.name.startsWith('.')) continue;
     const full = path.join(dir, entry.name);
     if (entry.isDirectory()) walk(full, out);
-    else if (SOURCE.test(entry.name)) out.push(full);
+    // Test files sit outside the layering (they may import any folder they check).
+    else if (SOURCE.test(entry.name) && !TEST_FILE.test(entry.name)) out.push(full);
   }
 }
 

@@ -13,12 +13,12 @@ export interface AstropyTable {
 const READER = path.resolve(import.meta.dirname, 'read-table.py');
 export const VOTABLE_XSD = path.resolve(import.meta.dirname, '../../server/modules/exports/schemas/VOTable-v1.4.xsd');
 
-function withFile<T>(name: string, body: string, use: (file: string) => T): T {
+function withFile<T>(name: string, body: string, read: (file: string) => T): T {
   const dir = mkdtempSync(path.join(os.tmpdir(), 'tidefield-export-'));
   try {
     const file = path.join(dir, name);
     writeFileSync(file, body);
-    return use(file);
+    return read(file);
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

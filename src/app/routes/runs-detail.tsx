@@ -2,6 +2,7 @@ import { useCallback } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
 import { RunScorecardCard } from '../../features/constraints/components/run-scorecard-card.tsx';
+import { RunExportsSection } from '../../features/exports/components/run-exports-section.tsx';
 import { RunPage } from '../../features/runs/components/run-page.tsx';
 
 export function Component() {
@@ -20,6 +21,7 @@ export function Component() {
       sampleId={search.get('sample')}
       onSampleChange={onSampleChange}
       resultSections={<RunScorecardCard departmentId={me.department.id} runId={id} />}
+      exportsSection={<RunExportsSection departmentId={me.department.id} role={me.role} runId={id} />}
     />
   );
 }

@@ -49,7 +49,7 @@ export function Component() {
                   )
                 }
               />
-              <SweepExportsSection sweepId={detail.id} />
+              <SweepExportsSection departmentId={me.department.id} role={me.role} sweepId={detail.id} />
             </div>
           </>
         );

@@ -1,8 +1,8 @@
 import type { ReactNode } from 'react';
+import type { Role } from '../../../../shared/contracts/roles.ts';
 import { Link } from 'react-router-dom';
 import { Card } from '../../../components/ui/card.tsx';
 import { paths } from '../../../config/paths.ts';
-import { useSignedInMe } from '../../auth/hooks/use-signed-in-me.ts';
 import { useRunExports } from '../api/get-run-exports.ts';
 import { ShareLinkPanel } from './share-link-panel.tsx';
 
@@ -19,9 +19,8 @@ function ExportItem({ title, description, children }: { title: string; descripti
 }
 
 /** Everything a run can be taken out as: standard tables with units, the documents, references, notebook access and a read-only link. */
-export function RunExportsSection({ runId }: { runId: string }) {
-  const me = useSignedInMe();
-  const exports = useRunExports(me.department.id, runId);
+export function RunExportsSection({ departmentId, role, runId }: { departmentId: string; role: Role; runId: string }) {
+  const exports = useRunExports(departmentId, runId);
   const base = `/api/runs/${encodeURIComponent(runId)}`;
   const file = (query: string) => `${base}/export?${query}`;
 
@@ -59,7 +58,7 @@ export function RunExportsSection({ runId }: { runId: string }) {
           <code className="text-sm text-foam-300">tf.table("{runId}", "wd-mass")</code>
         </ExportItem>
         <ExportItem title="Read-only link" description="A link that shows this run's result page to anyone who has it, without signing in; revoke it at any time.">
-          <ShareLinkPanel departmentId={me.department.id} role={me.role} kind="run" objectId={runId} />
+          <ShareLinkPanel departmentId={departmentId} role={role} kind="run" objectId={runId} />
         </ExportItem>
       </ul>
     </Card>

@@ -1,12 +1,11 @@
 import { Card } from '../../../components/ui/card.tsx';
-import { useSignedInMe } from '../../auth/hooks/use-signed-in-me.ts';
+import type { Role } from '../../../../shared/contracts/roles.ts';
 import { useSweepExports } from '../api/get-sweep-exports.ts';
 import { ShareLinkPanel } from './share-link-panel.tsx';
 
 /** A sweep's curve as ECSV or VOTable, and a read-only link to the sweep. */
-export function SweepExportsSection({ sweepId }: { sweepId: string }) {
-  const me = useSignedInMe();
-  const exports = useSweepExports(me.department.id, sweepId);
+export function SweepExportsSection({ departmentId, role, sweepId }: { departmentId: string; role: Role; sweepId: string }) {
+  const exports = useSweepExports(departmentId, sweepId);
   const base = `/api/sweeps/${encodeURIComponent(sweepId)}/export`;
   return (
     <Card title="Exports" description="The curve with units and provenance, and a link for a paper.">
@@ -25,7 +24,7 @@ export function SweepExportsSection({ sweepId }: { sweepId: string }) {
         <li className="flex flex-col gap-1 border-l-2 border-ink-600 pl-4">
           <span className="font-bold text-foam-50">Read-only link</span>
           <span className="text-sm text-foam-400">A link that shows this sweep's points to anyone who has it, without signing in; revoke it at any time.</span>
-          <ShareLinkPanel departmentId={me.department.id} role={me.role} kind="sweep" objectId={sweepId} />
+          <ShareLinkPanel departmentId={departmentId} role={role} kind="sweep" objectId={sweepId} />
         </li>
       </ul>
     </Card>

@@ -28,7 +28,6 @@ import {
   WdMassBySettingChart,
   WdMassChart,
 } from './run-distribution-charts.tsx';
-import { RunExportsSection } from '../../exports/components/run-exports-section.tsx';
 import { RunHeadline } from './run-headline.tsx';
 import { RunProgressCard } from './run-progress-card.tsx';
 import { RunSplitCharts } from './run-split-charts.tsx';
@@ -45,12 +44,14 @@ export interface RunPageProps {
   onSampleChange: (sampleId: string) => void;
   /** Sections of other features shown under a finished run's result (the scorecard), passed in by the route. */
   resultSections?: ReactNode;
+  /** The exports section of a finished run (another feature), passed in by the route. */
+  exportsSection?: ReactNode;
 }
 
 const runsLink = <Link to={paths.runs.getHref()}>Runs</Link>;
 
 /** One run from queue to result: live progress while it works, then its result with charts, tests and exports. */
-export function RunPage({ departmentId, runId, userId, role, sampleId, onSampleChange, resultSections }: RunPageProps) {
+export function RunPage({ departmentId, runId, userId, role, sampleId, onSampleChange, resultSections, exportsSection }: RunPageProps) {
   const { run, source } = useLiveRun(departmentId, runId);
 
   if (run.isPending) return <LoadingState label="Loading the run…" />;
@@ -94,7 +95,7 @@ export function RunPage({ departmentId, runId, userId, role, sampleId, onSampleC
           </Link>
         }
       />
-      <RunBody departmentId={departmentId} run={r} source={source} canCancel={canCancel} sampleId={sampleId} onSampleChange={onSampleChange} resultSections={resultSections} />
+      <RunBody departmentId={departmentId} run={r} source={source} canCancel={canCancel} sampleId={sampleId} onSampleChange={onSampleChange} resultSections={resultSections} exportsSection={exportsSection} />
     </>
   );
 }
@@ -107,7 +108,8 @@ function RunBody({
   sampleId,
   onSampleChange,
   resultSections,
-}: Pick<RunPageProps, 'departmentId' | 'sampleId' | 'onSampleChange' | 'resultSections'> & { run: RunSummary; source: ReturnType<typeof useLiveRun>['source']; canCancel: boolean }) {
+  exportsSection,
+}: Pick<RunPageProps, 'departmentId' | 'sampleId' | 'onSampleChange' | 'resultSections' | 'exportsSection'> & { run: RunSummary; source: ReturnType<typeof useLiveRun>['source']; canCancel: boolean }) {
   const result = useRunResult(departmentId, run.id, run.status === 'succeeded');
 
   if (run.status === 'queued' || run.status === 'running') {
@@ -183,7 +185,7 @@ function RunBody({
           <div className="grid items-start gap-6 xl:grid-cols-2">
             <RunAssumptions result={data} />
             <div className="flex flex-col gap-6">
-              <RunExportsSection runId={run.id} />
+              {exportsSection}
               <RunDetails run={run} />
             </div>
           </div>
