@@ -17,10 +17,12 @@ export const configSchema = z.object({
   /** Where the app listens. */
   HOST: z.string().default('127.0.0.1'),
   PORT: port(3000),
-  /** The address users reach the app at; https here makes session cookies Secure. */
+  /** The address users reach the app at (links in e-mails); https here makes session cookies Secure. */
   PUBLIC_URL: z.url().optional(),
-  /** Express `trust proxy` (set when running behind a TLS-terminating proxy). */
+  /** Express `trust proxy`: believe X-Forwarded-For/-Proto/-Host (set only behind a proxy that writes them). */
   TRUST_PROXY: bool(false),
+  /** Host names the server answers to, comma-separated (`*`: any); default the PUBLIC_URL host plus 127.0.0.1 and localhost. */
+  ALLOWED_HOSTS: z.string().optional(),
   DB_HOST: z.string().default('127.0.0.1'),
   DB_PORT: port(3407),
   DB_USER: z.string().default('tidefield'),
@@ -31,6 +33,12 @@ export const configSchema = z.object({
   /** Sign-in attempts allowed per client address and e-mail in each window. */
   SIGN_IN_LIMIT: z.coerce.number().int().min(1).max(10_000).default(10),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().min(0.01).max(24 * 60).default(15),
+  /** Failed sign-ins per client address over all e-mails in each window (password spraying). */
+  SIGN_IN_CLIENT_LIMIT: z.coerce.number().int().min(1).max(100_000).default(50),
+  /** Sign-ups per client address per hour (each address may also sign up at most 3 times an hour). */
+  SIGN_UP_LIMIT: z.coerce.number().int().min(1).max(100_000).default(20),
+  /** Invitations a department may send per hour (each invited address gets at most 3 an hour). */
+  INVITATION_LIMIT: z.coerce.number().int().min(1).max(100_000).default(50),
   /** Largest JSON body accepted by the API. */
   JSON_BODY_LIMIT: z.string().regex(/^\d+(b|kb|mb)$/i).default('256kb'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),

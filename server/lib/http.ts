@@ -148,7 +148,8 @@ export function defineRoute<
       res.status(204).end();
       return;
     }
-    res.status(spec.status ?? 200).json(result);
+    // A handler may choose another status itself (health answers 503 with its usual body).
+    res.status(res.statusCode !== 200 ? res.statusCode : (spec.status ?? 200)).json(result);
   };
   router[spec.method](spec.path, requireAccess(spec.access), ...(spec.before ?? []), run);
 }

@@ -59,3 +59,24 @@ describe('error bodies', () => {
     expect(res.body).toMatchObject({ status: 'ok', database: { reachable: true } });
   });
 });
+
+describe('Host check (issue 9, DNS rebinding)', () => {
+  it('refuses a request whose Host is not an allowed host, and serves 127.0.0.1 and localhost', async () => {
+    const rebound = await request(ctx.app).get('/api/health').set('Host', 'attacker.example:3000').expect(421);
+    expect(rebound.body.error.code).toBe('host_not_allowed');
+    expect(rebound.body.error.message).toMatch(/ALLOWED_HOSTS/);
+    await request(ctx.app).get('/api/health').set('Host', 'localhost:3000').expect(200);
+    await request(ctx.app).get('/api/health').expect(200);
+  });
+
+  it('answers only the configured ALLOWED_HOSTS when set', async () => {
+    const own = await createTestApp({ ALLOWED_HOSTS: 'tidefield.example, 127.0.0.1' });
+    try {
+      await request(own.app).get('/api/health').set('Host', 'tidefield.example').expect(200);
+      await request(own.app).get('/api/health').set('Host', 'localhost').expect(421);
+      await request(own.app).get('/api/health').expect(200);
+    } finally {
+      await own.close();
+    }
+  });
+});
