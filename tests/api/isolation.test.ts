@@ -136,3 +136,22 @@ describe('the published library', () => {
     expect(res.body.error.code).toBe('read_only');
   });
 });
+
+describe('sample ownership (issue 9, item 11)', () => {
+  it("observers cannot edit or delete another member's sample; the owner and modellers can", async () => {
+    const { addMember } = await import('../support/test-app.ts');
+    const observer = await addMember(ctx, a.me.department.id, 'observer');
+    const modeller = await addMember(ctx, a.me.department.id, 'modeller');
+    const body = { name: 'Renamed', magnetic: 2, total: 10 };
+    // The admin's sample: an observer is refused, and the numbers stay as stored.
+    const edit = await observer.agent.put(`/api/samples/${ids.sample}`).send(body).expect(403);
+    expect(edit.body.error.code).toBe('forbidden');
+    await observer.agent.delete(`/api/samples/${ids.sample}`).expect(403);
+    expect((await a.agent.get(`/api/samples/${ids.sample}`).expect(200)).body).toMatchObject({ name: 'A sample', magnetic: 1 });
+    // The observer's own sample: theirs to change; a modeller may change and delete it too.
+    const own = (await observer.agent.post('/api/samples').send({ name: 'Mine', magnetic: 1, total: 5 }).expect(201)).body.id;
+    await observer.agent.put(`/api/samples/${own}`).send(body).expect(200);
+    await modeller.agent.put(`/api/samples/${ids.sample}`).send({ ...body, name: 'A sample', magnetic: 1 }).expect(200);
+    await modeller.agent.delete(`/api/samples/${own}`).expect(204);
+  });
+});
