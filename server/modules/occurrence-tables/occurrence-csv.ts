@@ -7,6 +7,7 @@ import {
 } from '../../../shared/contracts/occurrence-tables-api.ts';
 import { companionRowSchema, type CompanionRow } from '../../../shared/contracts/occurrence-table.ts';
 import { describeIssues } from '../../../shared/contracts/schema-issues.ts';
+import { toCsv } from '../../lib/csv.ts';
 
 type Column = (typeof OCCURRENCE_CSV_COLUMNS)[number];
 
@@ -140,5 +141,5 @@ export function formatOccurrenceCsv(rows: readonly CompanionRow[]): string {
       assumed: row.assumed ?? '',
     };
   });
-  return Papa.unparse({ fields: [...OCCURRENCE_CSV_COLUMNS], data: records.map((r) => OCCURRENCE_CSV_COLUMNS.map((c) => r[c])) }, { newline: '\n' }) + '\n';
+  return toCsv(OCCURRENCE_CSV_COLUMNS, records.map((r) => OCCURRENCE_CSV_COLUMNS.map((c) => r[c])));
 }

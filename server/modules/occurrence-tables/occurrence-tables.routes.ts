@@ -11,6 +11,7 @@ import {
   uploadTableFieldsSchema,
 } from '../../../shared/contracts/occurrence-tables-api.ts';
 import { idResponseSchema } from '../../../shared/contracts/scenarios-api.ts';
+import { sendDownload } from '../../lib/csv.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
 import { fileMissing, fileTooLarge } from './occurrence-tables.errors.ts';
 import type { OccurrenceTablesService } from './occurrence-tables.service.ts';
@@ -72,9 +73,7 @@ export function occurrenceTablesRoutes(registry: RouteRegistry, tables: Occurren
     method: 'get', path: '/:id/csv', tag, access: 'observer', summary: 'Download a table as CSV', params: idParamsSchema, produces: 'text/csv',
   }, async ({ auth, params, res }) => {
     const { name, csv } = await tables.csv(auth, params.id);
-    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
-    res.setHeader('Content-Disposition', `attachment; filename="${name.replace(/[^A-Za-z0-9._-]+/g, '_')}.csv"`);
-    res.send(csv);
+    sendDownload(res, `${name.replace(/[^A-Za-z0-9._-]+/g, '_')}.csv`, csv);
   });
 
   return router;

@@ -14,18 +14,13 @@ import {
   type RunProgressEvent,
 } from '../../../shared/contracts/runs.ts';
 import { idResponseSchema } from '../../../shared/contracts/scenarios-api.ts';
+import { sendDownload } from '../../lib/csv.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
 import type { RunEvents } from './run-events.ts';
 import type { RunsService } from './runs.service.ts';
 
 const FINAL = new Set(['succeeded', 'failed', 'cancelled']);
 const HEARTBEAT_MS = 15_000;
-
-function attachment(res: import('express').Response, type: string, filename: string, body: string) {
-  res.setHeader('Content-Type', `${type}; charset=utf-8`);
-  res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
-  res.send(body);
-}
 
 export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: RunEvents): Router {
   const router = Router();
@@ -97,12 +92,12 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
 
   defineRoute(router, registry, mount, {
     method: 'get', path: '/runs/:id/export.csv', tag, access: 'observer', summary: 'The result as CSV', params: idParamsSchema, produces: 'text/csv',
-  }, async ({ auth, params, res }) => attachment(res, 'text/csv', `tidefield-run-${params.id}.csv`, await runs.exportCsv(auth, params.id)));
+  }, async ({ auth, params, res }) => sendDownload(res, `tidefield-run-${params.id}.csv`, await runs.exportCsv(auth, params.id)));
 
   defineRoute(router, registry, mount, {
     method: 'get', path: '/runs/:id/export.json', tag, access: 'observer', summary: 'The result document as a JSON file', params: idParamsSchema, produces: 'application/json',
   }, async ({ auth, params, res }) =>
-    attachment(res, 'application/json', `tidefield-run-${params.id}.json`, JSON.stringify(await runs.result(auth, params.id), null, 2) + '\n'));
+    sendDownload(res, `tidefield-run-${params.id}.json`, JSON.stringify(await runs.result(auth, params.id), null, 2) + '\n'));
 
   defineRoute(router, registry, mount, {
     method: 'get', path: '/runs/:id/methods.txt', tag, access: 'observer',
