@@ -68,10 +68,31 @@ export class RouteRegistry {
   readonly routes: RegisteredRoute[] = [];
 }
 
+const FORBIDDEN_KEYS = new Set(['__proto__']);
+
+/**
+ * Refuses what no schema should have to think about: a NUL character in any text (it ends
+ * strings in C libraries, logs and file names) and keys that reach an object's prototype.
+ */
+function refuseHostileValues(value: unknown, path: string[] = [], depth = 0): void {
+  if (typeof value === 'string') {
+    if (value.includes('\u0000')) throw badRequest(`${path.join('.') || 'body'} must not contain a NUL character (\\u0000)`, path.join('.') || undefined);
+    return;
+  }
+  if (!value || typeof value !== 'object' || depth > 64) return;
+  for (const key of Object.keys(value)) {
+    const field = [...path, key];
+    if (FORBIDDEN_KEYS.has(key)) throw badRequest(`${field.join('.')} is not a field this request accepts`, field.join('.'));
+    if (key.includes('\u0000')) throw badRequest(`${path.join('.') || 'body'} has a key with a NUL character (\\u0000)`, path.join('.') || undefined);
+    refuseHostileValues((value as Record<string, unknown>)[key], field, depth + 1);
+  }
+}
+
 /** Parses one part of the request with its shared schema; a ZodError reaches the error middleware as a 400. */
 function parsePart(schema: z.ZodType | undefined, value: unknown, where: 'body' | 'query' | 'params'): unknown {
   // A missing body is validated as undefined ("body is required"); missing params/query as {}.
   if (!schema) return undefined;
+  refuseHostileValues(value);
   const input = value ?? (where === 'body' ? undefined : {});
   const result = schema.safeParse(input, { reportInput: true });
   if (result.success) return result.data;

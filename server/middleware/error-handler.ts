@@ -65,6 +65,11 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       res.status(415).json({ error: { code: 'unsupported_encoding', message: 'The request body encoding is not supported; send UTF-8 JSON.' } });
       return;
     }
+    // Other body-parser refusals (a compressed body that does not decompress, an aborted upload) are the client's.
+    if (parserError?.status && parserError.status >= 400 && parserError.status < 500 && (error as { expose?: boolean }).expose) {
+      res.status(parserError.status).json({ error: { code: 'unreadable_body', message: 'The request body could not be read: it does not match its Content-Encoding or Content-Type. Send UTF-8 JSON, uncompressed or correctly compressed.' } });
+      return;
+    }
     logger.error({ err: error, method: req.method, path: req.path }, 'unhandled error');
     res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side; it has been logged.' } });
   };

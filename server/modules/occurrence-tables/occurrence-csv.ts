@@ -58,6 +58,9 @@ export function parseOccurrenceCsv(text: string): ParsedCsv {
   for (const c of missing) problems.push({ line: 1, column: c, message: `the header has no column ${c} (required: ${OCCURRENCE_CSV_REQUIRED.join(', ')})` });
   for (const c of unknown) problems.push({ line: 1, column: c, message: `the header has an unknown column ${c} (allowed: ${OCCURRENCE_CSV_COLUMNS.join(', ')})` });
   if (problems.length > 0) return { rows: [], problems, rowCount: parsed.data.length };
+  if (parsed.data.length === 0) {
+    return { rows: [], problems: [{ line: 2, message: 'the file has no rows below its header; add at least one companion row' }], rowCount: 0 };
+  }
   if (parsed.data.length > STORED_TABLE_MAX_ROWS) {
     return {
       rows: [],

@@ -13,16 +13,16 @@ import {
 import { idResponseSchema } from '../../../shared/contracts/scenarios-api.ts';
 import { sendDownload } from '../../lib/csv.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
-import { fileMissing, fileTooLarge } from './occurrence-tables.errors.ts';
+import { fileMissing, uploadRefused } from './occurrence-tables.errors.ts';
 import type { OccurrenceTablesService } from './occurrence-tables.service.ts';
 
 /** One CSV file of at most 1 MB in the multipart field "file", kept in memory. */
 function csvUpload(): RequestHandler {
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: CSV_MAX_BYTES, files: 1, fields: 10 } }).single('file');
+  const limits = { fileSize: CSV_MAX_BYTES, files: 1, fields: 10 };
+  const upload = multer({ storage: multer.memoryStorage(), limits }).single('file');
   return (req, res, next) =>
     upload(req, res, (error?: unknown) => {
-      if (error instanceof multer.MulterError && error.code === 'LIMIT_FILE_SIZE') return next(fileTooLarge(CSV_MAX_BYTES));
-      if (error) return next(error);
+      if (error) return next(uploadRefused(error, limits));
       if (!req.file) return next(fileMissing());
       next();
     });
