@@ -158,7 +158,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   app.use('/api', accountRoutes(registry, config, account));
   app.use('/api/invitations', invitationsRoutes(registry, config, invitations, sessions));
   app.use('/api/billing', billingRoutes(registry, billing));
-  app.use('/api', outboxRoutes(registry, config, db));
+  app.use('/api', outboxRoutes(registry, config, logger));
   app.use('/api', openApiRoutes(registry));
   app.use('/api', apiNotFound);
 

@@ -91,6 +91,19 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
   return { ...configSchema.parse({ NODE_ENV: 'test', LOG_LEVEL: 'silent' }), ...overrides };
 }
 
+const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1', '[::1]']);
+/** Whether a host name or address is this machine (where the local stand-ins run). */
+export const isLoopback = (host: string) => LOOPBACK.has(host.toLowerCase()) || host.startsWith('127.');
+
+/**
+ * The development outbox's address, or null when it is off: it is on only while e-mail goes to
+ * the local SMTP stand-in and DEV_OUTBOX_URL names that stand-in on this machine.
+ */
+export function devOutboxUrl(config: Pick<Config, 'SMTP_HOST' | 'DEV_OUTBOX_URL'>): string | null {
+  if (!config.DEV_OUTBOX_URL || !isLoopback(config.SMTP_HOST)) return null;
+  return isLoopback(new URL(config.DEV_OUTBOX_URL).hostname) ? config.DEV_OUTBOX_URL.replace(/\/+$/, '') : null;
+}
+
 /** The address links in e-mails and payment redirects point at: PUBLIC_URL, else this server's own. */
 export function publicBaseUrl(config: Pick<Config, 'PUBLIC_URL' | 'HOST' | 'PORT'>): string {
   if (config.PUBLIC_URL) return config.PUBLIC_URL.replace(/\/+$/, '');
