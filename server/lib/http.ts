@@ -1,6 +1,7 @@
 import type { NextFunction, Request, RequestHandler, Response, Router } from 'express';
 import type { z } from 'zod';
 import { roleAtLeast, type Role } from '../../shared/contracts/roles.ts';
+import type { TokenScope } from '../../shared/contracts/tokens.ts';
 import { describeIssues } from '../../shared/contracts/schema-issues.ts';
 import { AppError, badRequest, forbidden, unauthenticated } from './errors.ts';
 
@@ -29,6 +30,12 @@ export interface RouteSpec<B extends z.ZodType | undefined, Q extends z.ZodType 
   response?: z.ZodType;
   /** Status of a successful answer (default 200). */
   status?: number;
+  /**
+   * What an API token needs to call this route: `read` (the default for GET), `run` (starting
+   * and cancelling runs and sweeps) or `never` (the default for every other method: account,
+   * member, billing and token management need a signed-in session).
+   */
+  tokenScope?: TokenScope | 'never';
   /** Extra middleware run after access checks and before validation (e.g. a rate limiter). */
   before?: RequestHandler[];
   /** Non-JSON success bodies, for the API description. */
@@ -110,11 +117,21 @@ function parsePart(schema: z.ZodType | undefined, value: unknown, where: 'body' 
   throw result.error;
 }
 
-export function requireAccess(access: Access): RequestHandler {
+/** Refuses a token caller whose token's scope does not allow the route. */
+function tokenAllows(auth: RequestAuth, needed: TokenScope | 'never'): AppError | null {
+  if (!auth.tokenId) return null;
+  if (needed === 'never') return forbidden('API tokens cannot do this; sign in to Tidefield to manage your account, members, billing and tokens.');
+  if (needed === 'run' && auth.tokenScope !== 'run') return forbidden('This API token has the read scope; starting and cancelling runs and sweeps needs a token with the run scope.');
+  return null;
+}
+
+export function requireAccess(access: Access, tokenScope: TokenScope | 'never' = 'never'): RequestHandler {
   return (_req, res, next) => {
     if (access === 'public') return next();
     const auth = res.locals.auth;
     if (!auth) return next(unauthenticated());
+    const refused = tokenAllows(auth, tokenScope);
+    if (refused) return next(refused);
     if (access === 'signedIn') return next();
     if (!auth.department || !auth.role) return next(forbidden('You are not a member of any department yet.'));
     if (!roleAtLeast(auth.role, access)) {
@@ -172,7 +189,8 @@ export function defineRoute<
     // A handler may choose another status itself (health answers 503 with its usual body).
     res.status(res.statusCode !== 200 ? res.statusCode : (spec.status ?? 200)).json(result);
   };
-  router[spec.method](spec.path, requireAccess(spec.access), ...(spec.before ?? []), run);
+  const tokenScope = spec.tokenScope ?? (spec.method === 'get' ? 'read' : 'never');
+  router[spec.method](spec.path, requireAccess(spec.access, tokenScope), ...(spec.before ?? []), run);
 }
 
 /** Wraps an error-first callback middleware (e.g. express.json) so its errors become AppErrors. */

@@ -32,13 +32,13 @@ export function accountRoutes(registry: RouteRegistry, config: Config, account: 
 
   defineRoute(router, registry, mount, {
     method: 'post', path: '/auth/password-reset/confirm', tag, access: 'public', status: 204, body: passwordResetConfirmSchema,
-    summary: 'Set a new password with the link token; every session of the account ends',
+    summary: 'Set a new password with the link token; every session and API token of the account ends',
   }, async ({ body }) => {
     await account.confirmPasswordReset(body);
   });
 
   defineRoute(router, registry, mount, {
-    method: 'get', path: '/me/notifications', tag, access: 'signedIn', response: notificationSettingsSchema,
+    method: 'get', path: '/me/notifications', tag, access: 'signedIn', tokenScope: 'never', response: notificationSettingsSchema,
     summary: 'Which e-mail notices you get (run finished, run failed)',
   }, ({ auth }) => account.notificationSettings(auth));
 

@@ -44,7 +44,7 @@ export function invitationsRoutes(registry: RouteRegistry, config: Config, invit
   }, ({ auth, body }) => invitations.create(auth, body));
 
   defineRoute(router, registry, mount, {
-    method: 'get', path: '/', tag, access: 'admin', response: invitationListResponseSchema,
+    method: 'get', path: '/', tag, access: 'admin', tokenScope: 'never', response: invitationListResponseSchema,
     summary: "The department's open invitations",
   }, async ({ auth }) => ({ invitations: await invitations.list(auth) }));
 

@@ -39,7 +39,7 @@ export function outboxRoutes(registry: RouteRegistry, config: Config, logger: Lo
       : 'Development outbox off (e-mail goes to a real mail server, or DEV_OUTBOX_URL is empty)',
   );
   defineRoute(router, registry, '/api', {
-    method: 'get', path: '/outbox', tag: 'Development', access: 'signedIn', response: outboxResponseSchema,
+    method: 'get', path: '/outbox', tag: 'Development', access: 'signedIn', tokenScope: 'never', response: outboxResponseSchema,
     summary: 'Mail the local SMTP stand-in received for you, and (admins) your department\'s notices; off unless mail goes to the stand-in',
   }, async ({ auth }) => {
     if (!outbox) return { enabled: false, messages: [] };

@@ -28,7 +28,7 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
   const tag = 'Runs';
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/runs', tag, access: 'observer', status: 201,
+    method: 'post', path: '/runs', tag, access: 'observer', status: 201, tokenScope: 'run',
     summary: 'Queue a run of a scenario (observers: at most 10^6 systems)', body: createRunBodySchema, response: idResponseSchema,
   }, ({ auth, body }) => runs.create(auth, body));
 
@@ -65,7 +65,7 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
   });
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/runs/:id/cancel', tag, access: 'observer', summary: 'Cancel a queued or running run (its owner, or a modeller)', params: idParamsSchema, response: runSummarySchema,
+    method: 'post', path: '/runs/:id/cancel', tag, access: 'observer', tokenScope: 'run', summary: 'Cancel a queued or running run (its owner, or a modeller)', params: idParamsSchema, response: runSummarySchema,
   }, ({ auth, params }) => runs.cancel(auth, params.id));
 
   defineRoute(router, registry, mount, {
@@ -113,7 +113,7 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
   }, ({ auth, query }) => runs.compare(auth, query.runs));
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/implied-occurrence', tag, access: 'observer', status: 201,
+    method: 'post', path: '/implied-occurrence', tag, access: 'observer', status: 201, tokenScope: 'read',
     summary: 'Start the run that answers "what occurrence does this sample imply?" for a scenario; then read /runs/{runId}/implied-occurrence',
     body: impliedOccurrenceBodySchema, response: z.object({ runId: z.string(), sampleId: z.string() }),
   }, ({ auth, body }) => runs.startImpliedOccurrence(auth, body));
