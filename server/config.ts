@@ -77,12 +77,38 @@ export const configSchema = z.object({
 
 export type Config = z.output<typeof configSchema>;
 
+/** The documented secrets of the local payment stand-in: anyone can read them, so they never sign real money. */
+export const LOCAL_STRIPE_SECRETS = { STRIPE_SECRET_KEY: 'sk_test_tidefield_local', STRIPE_WEBHOOK_SECRET: 'whsec_tidefield_local' } as const;
+
+/**
+ * Problems of a configuration that points at hosted services: with a payment host other than
+ * this machine, the local default secrets (or none) would let anyone sign a completed
+ * checkout and mint credit, so each one that is missing or default is named.
+ */
+export function hostedConfigProblems(config: Config, env: Record<string, string | undefined>): string[] {
+  if (isLoopback(config.STRIPE_API_HOST)) return [];
+  return (Object.keys(LOCAL_STRIPE_SECRETS) as (keyof typeof LOCAL_STRIPE_SECRETS)[])
+    .filter((name) => !env[name] || config[name] === LOCAL_STRIPE_SECRETS[name])
+    .map(
+      (name) =>
+        `${name}: the payment service at ${config.STRIPE_API_HOST} is not this machine, so the local default (or a missing value) cannot be used; set ${name} to that account's own secret`,
+    );
+}
+
+/**
+ * The local demo: the app, payments and e-mail all on this machine with the local stand-ins,
+ * as `npm start` runs by default. Only then are demo accounts with the published password seeded.
+ */
+export function isLocalDemo(config: Pick<Config, 'HOST' | 'STRIPE_API_HOST' | 'STRIPE_API_PROTOCOL' | 'SMTP_HOST'>): boolean {
+  return isLoopback(config.HOST) && isLoopback(config.STRIPE_API_HOST) && config.STRIPE_API_PROTOCOL === 'http' && isLoopback(config.SMTP_HOST);
+}
+
 export function loadConfig(env: Record<string, string | undefined> = process.env): Config {
   const parsed = configSchema.safeParse(env);
-  if (!parsed.success) {
-    const problems = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`).join('\n');
-    throw new Error(`Invalid configuration:\n${problems}`);
-  }
+  const problems = parsed.success
+    ? hostedConfigProblems(parsed.data, env)
+    : parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
+  if (!parsed.success || problems.length > 0) throw new Error(`Invalid configuration:\n${problems.map((p) => `  ${p}`).join('\n')}`);
   return parsed.data;
 }
 
