@@ -17,17 +17,17 @@ import type { InvitationsService } from './invitations.service.ts';
 
 const INVITATIONS_PER_ADDRESS = 3;
 
-/** Invitations per department, and per invited address over all departments, in an hour. */
+/** Invitations per invited address over all departments, then per department, in an hour (a refusal of the first is not counted by the second). */
 function invitationLimiters(config: Config) {
   const windowMs = 3_600_000;
   return [
     limiter({
-      name: 'invitationsDepartment', windowMs, limit: config.INVITATION_LIMIT, key: (_req, res) => res.locals.auth?.department?.id ?? '',
-      message: (m) => `This department has sent ${config.INVITATION_LIMIT} invitations in the last hour, the most allowed. Try again in ${minutesText(m)}.`,
-    }),
-    limiter({
       name: 'invitationsAddress', windowMs, limit: INVITATIONS_PER_ADDRESS, key: bodyEmailKey,
       message: (m) => `This address has been sent ${INVITATIONS_PER_ADDRESS} invitations in the last hour, the most allowed. Try again in ${minutesText(m)}.`,
+    }),
+    limiter({
+      name: 'invitationsDepartment', windowMs, limit: config.INVITATION_LIMIT, key: (_req, res) => res.locals.auth?.department?.id ?? '',
+      message: (m) => `This department has sent ${config.INVITATION_LIMIT} invitations in the last hour, the most allowed. Try again in ${minutesText(m)}.`,
     }),
   ];
 }

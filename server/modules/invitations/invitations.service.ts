@@ -154,7 +154,7 @@ export function createInvitationsService(deps: { db: Db; config: Config; mailer:
       const { invitation } = found;
       return {
         departmentName: found.departmentName, email: invitation.email, role: invitation.role, invitedByName: found.invitedByName,
-        expiresAt: invitation.expiresAt.toISOString(), accountExists: Boolean(await findUserByEmail(db, invitation.email)),
+        expiresAt: invitation.expiresAt.toISOString(),
       };
     },
 
