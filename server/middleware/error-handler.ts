@@ -66,7 +66,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       return;
     }
     // Other body-parser refusals (a compressed body that does not decompress, an aborted upload) are the client's.
-    if (parserError?.status && parserError.status >= 400 && parserError.status < 500 && (error as { expose?: boolean }).expose) {
+    if ((parserError?.status === 400 || parserError?.status === 415) && (error as { expose?: boolean }).expose) {
       res.status(parserError.status).json({ error: { code: 'unreadable_body', message: 'The request body could not be read: it does not match its Content-Encoding or Content-Type. Send UTF-8 JSON, uncompressed or correctly compressed.' } });
       return;
     }
