@@ -5,7 +5,7 @@
  * Beside it run the local stand-ins for payments and e-mail (server/fakes) whenever the
  * configuration points at loopback addresses, as it does by default.
  */
-import { loadConfig, publicBaseUrl } from '../server/config.ts';
+import { isLocalDemo, loadConfig, publicBaseUrl } from '../server/config.ts';
 import { startLocalFakes } from '../server/fakes/local-fakes.ts';
 import { startServer } from '../server/index.ts';
 import { countDepartments } from '../server/modules/departments/departments.repository.ts';
@@ -28,23 +28,30 @@ async function main() {
     throw error;
   });
 
+  // Demo accounts share a published password: they exist only in the local demo mode.
+  const localDemo = isLocalDemo(config);
   const empty = (await countDepartments(running.database.db)) === 0;
-  if (empty) await seedDemo(running.database.db, config.DEMO_PASSWORD);
+  if (empty && localDemo) await seedDemo(running.database.db, config.DEMO_PASSWORD);
 
   const lines = [
     '',
     `  Tidefield is running at ${running.url}`,
     `  Database: private MariaDB on 127.0.0.1:${conn.port} (data in .data/mariadb; stop it with npm run db:stop)`,
     '',
-    `  Demo department: ${DEMO_DEPARTMENT}${empty ? ' (seeded just now)' : ''}`,
-    ...DEMO_USERS.map((u) => `    ${u.role.padEnd(9)} ${u.email}`),
-    `  Demo password: ${config.DEMO_PASSWORD}  (for the local demo only; set DEMO_PASSWORD to change it before the first start)`,
+    ...(localDemo
+      ? [
+          '  Local demo mode: the app, payments and e-mail are on this machine (local stand-ins).',
+          `  Demo department: ${DEMO_DEPARTMENT}${empty ? ' (seeded just now)' : ''}`,
+          ...DEMO_USERS.map((u) => `    ${u.role.padEnd(9)} ${u.email}`),
+          `  Demo password: ${config.DEMO_PASSWORD}  (for the local demo only; set DEMO_PASSWORD to change it before the first start)`,
+        ]
+      : ['  Hosted mode: payments, e-mail or the app are not on this machine alone, so no demo accounts are seeded.']),
     '',
     fakes.payment
       ? `  Payments: local stand-in at ${fakes.payment.url} (test cards 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined)`
       : `  Payments: ${config.STRIPE_API_PROTOCOL}://${config.STRIPE_API_HOST}:${config.STRIPE_API_PORT}`,
     fakes.mail
-      ? `  E-mail: local SMTP stand-in on ${fakes.mail.host}:${fakes.mail.smtpPort}; admins read it at ${running.url}/outbox`
+      ? `  E-mail: local SMTP stand-in on ${fakes.mail.host}:${fakes.mail.smtpPort}; each user reads their own mail at ${running.url}/outbox`
       : `  E-mail: SMTP ${config.SMTP_HOST}:${config.SMTP_PORT}`,
     '',
     '  Press Ctrl+C to stop the app (MariaDB keeps running for the next start).',

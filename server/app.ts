@@ -10,7 +10,9 @@ import type { Database } from './db/client.ts';
 import { createEnginePool } from './engine-pool/engine-pool.ts';
 import { runScenario } from './engine-pool/run-scenario.ts';
 import { RouteRegistry } from './lib/http.ts';
+import { serializeError } from './logger.ts';
 import { apiNotFound, errorHandler } from './middleware/error-handler.ts';
+import { allowedHosts, hostCheck } from './middleware/host-check.ts';
 import { originCheck } from './middleware/origin-check.ts';
 import { authenticate } from './modules/auth/auth.middleware.ts';
 import { authRoutes } from './modules/auth/auth.routes.ts';
@@ -107,7 +109,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
       pollIntervalMs: 2000,
     },
   });
-  const sessions = createSessionStore(db, config.SESSION_DAYS);
+  const sessions = createSessionStore(db, config.SESSION_DAYS, config.PUBLIC_URL);
   const auth = createAuthService(db, sessions);
   const members = createMembersService(db);
   const tokens = createTokensService(db);
@@ -143,15 +145,17 @@ export function createApp(deps: AppDeps): TidefieldApp {
       strictTransportSecurity: config.PUBLIC_URL?.startsWith('https:') ?? false,
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(pinoHttp({ logger, serializers: { err: serializeError }, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(hostCheck(allowedHosts(config)));
 
   // The payment webhook is verified on its exact bytes: it gets the raw body, before the JSON parser.
   app.use(WEBHOOK_PATH, express.raw({ type: 'application/json', limit: '1mb' }));
   app.use('/api', express.json({ limit: config.JSON_BODY_LIMIT }));
   app.use('/api', originCheck([WEBHOOK_PATH.slice('/api'.length)]));
+  // Health answers every caller alike, also when the database (and so every session) is unreachable.
+  app.use('/api', healthRoutes(registry, db));
   app.use('/api', authenticate(db, sessions, tokens.resolver()));
 
-  app.use('/api', healthRoutes(registry, db));
   app.use('/api', authRoutes(registry, config, auth, sessions));
   app.use('/api/members', membersRoutes(registry, members));
   app.use('/api/tokens', tokensRoutes(registry, tokens));
@@ -164,9 +168,9 @@ export function createApp(deps: AppDeps): TidefieldApp {
   app.use('/api', exportsRoutes(registry, exports));
   app.use('/api', sharesRoutes(registry, config, shares));
   app.use('/api', accountRoutes(registry, config, account));
-  app.use('/api/invitations', invitationsRoutes(registry, invitations, sessions));
+  app.use('/api/invitations', invitationsRoutes(registry, config, invitations, sessions));
   app.use('/api/billing', billingRoutes(registry, billing));
-  app.use('/api', outboxRoutes(registry, config, db));
+  app.use('/api', outboxRoutes(registry, config, logger));
   app.use('/api', openApiRoutes(registry));
   app.use('/api', apiNotFound);
 

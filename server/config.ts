@@ -17,10 +17,12 @@ export const configSchema = z.object({
   /** Where the app listens. */
   HOST: z.string().default('127.0.0.1'),
   PORT: port(3000),
-  /** The address users reach the app at; https here makes session cookies Secure. */
+  /** The address users reach the app at (links in e-mails); https here makes session cookies Secure. */
   PUBLIC_URL: z.url().optional(),
-  /** Express `trust proxy` (set when running behind a TLS-terminating proxy). */
+  /** Express `trust proxy`: believe X-Forwarded-For/-Proto/-Host (set only behind a proxy that writes them). */
   TRUST_PROXY: bool(false),
+  /** Host names the server answers to, comma-separated (`*`: any); default the PUBLIC_URL host plus 127.0.0.1 and localhost. */
+  ALLOWED_HOSTS: z.string().optional(),
   DB_HOST: z.string().default('127.0.0.1'),
   DB_PORT: port(3407),
   DB_USER: z.string().default('tidefield'),
@@ -34,6 +36,12 @@ export const configSchema = z.object({
   /** Share links a member may create per hour, and reads of shared objects per client address per minute. */
   SHARE_LINKS_PER_HOUR: z.coerce.number().int().min(1).max(10_000).default(30),
   SHARED_READS_PER_MINUTE: z.coerce.number().int().min(1).max(100_000).default(120),
+  /** Failed sign-ins per client address over all e-mails in each window (password spraying). */
+  SIGN_IN_CLIENT_LIMIT: z.coerce.number().int().min(1).max(100_000).default(50),
+  /** Sign-ups per client address per hour (each address may also sign up at most 3 times an hour). */
+  SIGN_UP_LIMIT: z.coerce.number().int().min(1).max(100_000).default(20),
+  /** Invitations a department may send per hour (each invited address gets at most 3 an hour). */
+  INVITATION_LIMIT: z.coerce.number().int().min(1).max(100_000).default(50),
   /** Largest JSON body accepted by the API. */
   JSON_BODY_LIMIT: z.string().regex(/^\d+(b|kb|mb)$/i).default('256kb'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
@@ -72,18 +80,57 @@ export const configSchema = z.object({
 
 export type Config = z.output<typeof configSchema>;
 
+/** The documented secrets of the local payment stand-in: anyone can read them, so they never sign real money. */
+export const LOCAL_STRIPE_SECRETS = { STRIPE_SECRET_KEY: 'sk_test_tidefield_local', STRIPE_WEBHOOK_SECRET: 'whsec_tidefield_local' } as const;
+
+/**
+ * Problems of a configuration that points at hosted services: with a payment host other than
+ * this machine, the local default secrets (or none) would let anyone sign a completed
+ * checkout and mint credit, so each one that is missing or default is named.
+ */
+export function hostedConfigProblems(config: Config, env: Record<string, string | undefined>): string[] {
+  if (isLoopback(config.STRIPE_API_HOST)) return [];
+  return (Object.keys(LOCAL_STRIPE_SECRETS) as (keyof typeof LOCAL_STRIPE_SECRETS)[])
+    .filter((name) => !env[name] || config[name] === LOCAL_STRIPE_SECRETS[name])
+    .map(
+      (name) =>
+        `${name}: the payment service at ${config.STRIPE_API_HOST} is not this machine, so the local default (or a missing value) cannot be used; set ${name} to that account's own secret`,
+    );
+}
+
+/**
+ * The local demo: the app, payments and e-mail all on this machine with the local stand-ins,
+ * as `npm start` runs by default. Only then are demo accounts with the published password seeded.
+ */
+export function isLocalDemo(config: Pick<Config, 'HOST' | 'STRIPE_API_HOST' | 'STRIPE_API_PROTOCOL' | 'SMTP_HOST'>): boolean {
+  return isLoopback(config.HOST) && isLoopback(config.STRIPE_API_HOST) && config.STRIPE_API_PROTOCOL === 'http' && isLoopback(config.SMTP_HOST);
+}
+
 export function loadConfig(env: Record<string, string | undefined> = process.env): Config {
   const parsed = configSchema.safeParse(env);
-  if (!parsed.success) {
-    const problems = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`).join('\n');
-    throw new Error(`Invalid configuration:\n${problems}`);
-  }
+  const problems = parsed.success
+    ? hostedConfigProblems(parsed.data, env)
+    : parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
+  if (!parsed.success || problems.length > 0) throw new Error(`Invalid configuration:\n${problems.map((p) => `  ${p}`).join('\n')}`);
   return parsed.data;
 }
 
 /** A configuration for tests: defaults plus overrides, never read from the environment. */
 export function testConfig(overrides: Partial<Config> = {}): Config {
   return { ...configSchema.parse({ NODE_ENV: 'test', LOG_LEVEL: 'silent' }), ...overrides };
+}
+
+const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1', '[::1]']);
+/** Whether a host name or address is this machine (where the local stand-ins run). */
+export const isLoopback = (host: string) => LOOPBACK.has(host.toLowerCase()) || host.startsWith('127.');
+
+/**
+ * The development outbox's address, or null when it is off: it is on only while e-mail goes to
+ * the local SMTP stand-in and DEV_OUTBOX_URL names that stand-in on this machine.
+ */
+export function devOutboxUrl(config: Pick<Config, 'SMTP_HOST' | 'DEV_OUTBOX_URL'>): string | null {
+  if (!config.DEV_OUTBOX_URL || !isLoopback(config.SMTP_HOST)) return null;
+  return isLoopback(new URL(config.DEV_OUTBOX_URL).hostname) ? config.DEV_OUTBOX_URL.replace(/\/+$/, '') : null;
 }
 
 /** The address links in e-mails and payment redirects point at: PUBLIC_URL, else this server's own. */

@@ -3,7 +3,7 @@
  * stripe SDK is aimed at a loopback address, and the mail server when SMTP is. Pointing the
  * configuration at the hosted services (see README) starts neither, with no code change.
  */
-import type { Config } from '../config.ts';
+import { isLoopback, type Config } from '../config.ts';
 import { startPaymentFake, type PaymentFake } from './payment-fake.ts';
 import { startSmtpFake, type SmtpFake } from './smtp-fake.ts';
 
@@ -12,9 +12,6 @@ export interface LocalFakes {
   mail: SmtpFake | null;
   close(): Promise<void>;
 }
-
-const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1']);
-export const isLoopback = (host: string) => LOOPBACK.has(host) || host.startsWith('127.');
 
 export async function startLocalFakes(config: Config, webhookUrl: string): Promise<LocalFakes> {
   let payment: PaymentFake | null = null;

@@ -1,6 +1,7 @@
 import type { NextFunction, Request, RequestHandler, Response, Router } from 'express';
 import type { z } from 'zod';
 import { roleAtLeast, type Role } from '../../shared/contracts/roles.ts';
+import type { TokenScope } from '../../shared/contracts/tokens.ts';
 import { describeIssues } from '../../shared/contracts/schema-issues.ts';
 import { AppError, badRequest, forbidden, unauthenticated } from './errors.ts';
 
@@ -29,6 +30,12 @@ export interface RouteSpec<B extends z.ZodType | undefined, Q extends z.ZodType 
   response?: z.ZodType;
   /** Status of a successful answer (default 200). */
   status?: number;
+  /**
+   * What an API token needs to call this route: `read` (the default for GET), `run` (starting
+   * and cancelling runs and sweeps) or `never` (the default for every other method: account,
+   * member, billing and token management need a signed-in session).
+   */
+  tokenScope?: TokenScope | 'never';
   /** Extra middleware run after access checks and before validation (e.g. a rate limiter). */
   before?: RequestHandler[];
   /** Non-JSON success bodies, for the API description. */
@@ -68,10 +75,31 @@ export class RouteRegistry {
   readonly routes: RegisteredRoute[] = [];
 }
 
+const FORBIDDEN_KEYS = new Set(['__proto__']);
+
+/**
+ * Refuses what no schema should have to think about: a NUL character in any text (it ends
+ * strings in C libraries, logs and file names) and keys that reach an object's prototype.
+ */
+function refuseHostileValues(value: unknown, path: string[] = [], depth = 0): void {
+  if (typeof value === 'string') {
+    if (value.includes('\u0000')) throw badRequest(`${path.join('.') || 'body'} must not contain a NUL character (\\u0000)`, path.join('.') || undefined);
+    return;
+  }
+  if (!value || typeof value !== 'object' || depth > 64) return;
+  for (const key of Object.keys(value)) {
+    const field = [...path, key];
+    if (FORBIDDEN_KEYS.has(key)) throw badRequest(`${field.join('.')} is not a field this request accepts`, field.join('.'));
+    if (key.includes('\u0000')) throw badRequest(`${path.join('.') || 'body'} has a key with a NUL character (\\u0000)`, path.join('.') || undefined);
+    refuseHostileValues((value as Record<string, unknown>)[key], field, depth + 1);
+  }
+}
+
 /** Parses one part of the request with its shared schema; a ZodError reaches the error middleware as a 400. */
 function parsePart(schema: z.ZodType | undefined, value: unknown, where: 'body' | 'query' | 'params'): unknown {
   // A missing body is validated as undefined ("body is required"); missing params/query as {}.
   if (!schema) return undefined;
+  refuseHostileValues(value);
   const input = value ?? (where === 'body' ? undefined : {});
   const result = schema.safeParse(input, { reportInput: true });
   if (result.success) return result.data;
@@ -89,11 +117,21 @@ function parsePart(schema: z.ZodType | undefined, value: unknown, where: 'body' 
   throw result.error;
 }
 
-export function requireAccess(access: Access): RequestHandler {
+/** Refuses a token caller whose token's scope does not allow the route. */
+function tokenAllows(auth: RequestAuth, needed: TokenScope | 'never'): AppError | null {
+  if (!auth.tokenId) return null;
+  if (needed === 'never') return forbidden('API tokens cannot do this; sign in to Tidefield to manage your account, members, billing and tokens.');
+  if (needed === 'run' && auth.tokenScope !== 'run') return forbidden('This API token has the read scope; starting and cancelling runs and sweeps needs a token with the run scope.');
+  return null;
+}
+
+export function requireAccess(access: Access, tokenScope: TokenScope | 'never' = 'never'): RequestHandler {
   return (_req, res, next) => {
     if (access === 'public') return next();
     const auth = res.locals.auth;
     if (!auth) return next(unauthenticated());
+    const refused = tokenAllows(auth, tokenScope);
+    if (refused) return next(refused);
     if (access === 'signedIn') return next();
     if (!auth.department || !auth.role) return next(forbidden('You are not a member of any department yet.'));
     if (!roleAtLeast(auth.role, access)) {
@@ -148,9 +186,11 @@ export function defineRoute<
       res.status(204).end();
       return;
     }
-    res.status(spec.status ?? 200).json(result);
+    // A handler may choose another status itself (health answers 503 with its usual body).
+    res.status(res.statusCode !== 200 ? res.statusCode : (spec.status ?? 200)).json(result);
   };
-  router[spec.method](spec.path, requireAccess(spec.access), ...(spec.before ?? []), run);
+  const tokenScope = spec.tokenScope ?? (spec.method === 'get' ? 'read' : 'never');
+  router[spec.method](spec.path, requireAccess(spec.access, tokenScope), ...(spec.before ?? []), run);
 }
 
 /** Wraps an error-first callback middleware (e.g. express.json) so its errors become AppErrors. */

@@ -1,4 +1,5 @@
 import type { Role } from '../../shared/contracts/roles.ts';
+import type { TokenScope } from '../../shared/contracts/tokens.ts';
 
 /** Who is calling, resolved once per request by the authentication middleware. */
 export interface RequestAuth {
@@ -7,6 +8,8 @@ export interface RequestAuth {
   sessionId?: string;
   /** Present when the caller came with a personal API token. */
   tokenId?: string;
+  /** What that token may do (only with tokenId). */
+  tokenScope?: TokenScope;
   /** The active department and the caller's role in it; null when the user belongs to none. */
   department: { id: string; name: string } | null;
   role: Role | null;

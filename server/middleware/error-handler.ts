@@ -1,7 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Logger } from 'pino';
 import { ZodError, type z } from 'zod';
-import { AppError } from '../lib/errors.ts';
+import { AppError, databaseUnavailable, isDatabaseUnavailable } from '../lib/errors.ts';
 
 /** Turns one zod issue into a message that names the field (its dotted path). */
 export function describeIssue(issue: z.core.$ZodIssue): { field: string | undefined; message: string } {
@@ -39,6 +39,11 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       res.status(400).json({ error: { code: 'invalid_input', message, ...(field ? { field } : {}) } });
       return;
     }
+    if (!(error instanceof AppError) && isDatabaseUnavailable(error)) {
+      // Logged without the request's query string or the query's bound values (session ids).
+      logger.warn({ err: error, method: req.method, path: req.path }, 'database unreachable');
+      error = databaseUnavailable(error);
+    }
     if (error instanceof AppError && error.expose) {
       for (const [k, v] of Object.entries(error.headers ?? {})) res.setHeader(k, v);
       res.status(error.status).json({
@@ -60,7 +65,12 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       res.status(415).json({ error: { code: 'unsupported_encoding', message: 'The request body encoding is not supported; send UTF-8 JSON.' } });
       return;
     }
-    logger.error({ err: error, method: req.method, url: req.originalUrl }, 'unhandled error');
+    // Other body-parser refusals (a compressed body that does not decompress, an aborted upload) are the client's.
+    if ((parserError?.status === 400 || parserError?.status === 415) && (error as { expose?: boolean }).expose) {
+      res.status(parserError.status).json({ error: { code: 'unreadable_body', message: 'The request body could not be read: it does not match its Content-Encoding or Content-Type. Send UTF-8 JSON, uncompressed or correctly compressed.' } });
+      return;
+    }
+    logger.error({ err: error, method: req.method, path: req.path }, 'unhandled error');
     res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side; it has been logged.' } });
   };
 }

@@ -62,7 +62,8 @@ export type MeResponse = z.infer<typeof meResponseSchema>;
 
 export const healthResponseSchema = z.object({
   status: z.enum(['ok', 'degraded']),
-  database: z.object({ reachable: z.boolean(), latencyMs: z.number().optional(), error: z.string().optional() }),
+  /** Whether the database answered; never its error text (the answer is public). */
+  database: z.object({ reachable: z.boolean(), latencyMs: z.number().optional() }),
   version: z.string(),
   time: z.string(),
 });

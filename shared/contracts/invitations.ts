@@ -37,7 +37,6 @@ export const invitationPreviewSchema = z.object({
   invitedByName: z.string(),
   expiresAt: z.string(),
   /** An account with this e-mail exists: the invitee signs in instead of creating one. */
-  accountExists: z.boolean(),
 });
 export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
 

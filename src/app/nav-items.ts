@@ -93,6 +93,7 @@ export const NAV_GROUPS: readonly NavGroup[] = [
       { key: 'apiTokens', label: 'API tokens', summary: 'Tokens for the REST API and the command line.', minimumRole: 'observer' },
       { key: 'settings', label: 'Settings', summary: 'Your name, e-mail address and password.', minimumRole: 'observer' },
       { key: 'notifications', label: 'E-mail notices', summary: 'Whether you get an e-mail when a run of yours finishes or fails.', minimumRole: 'observer' },
+      { key: 'outbox', label: 'Outbox', summary: "Your e-mail, and admins' department notices, as the local mail stand-in received them (development).", minimumRole: 'observer' },
     ],
   },
   {
@@ -100,7 +101,6 @@ export const NAV_GROUPS: readonly NavGroup[] = [
     items: [
       { key: 'members', label: 'Members', summary: 'Who belongs to the department, with which role.', minimumRole: 'admin' },
       { key: 'credits', label: 'Credits', summary: 'Compute credit for heavy runs: buy it, see usage and receipts.', minimumRole: 'admin' },
-      { key: 'outbox', label: 'Outbox', summary: 'E-mail this Tidefield sent through the local mail stand-in (development).', minimumRole: 'admin' },
     ],
   },
 ];

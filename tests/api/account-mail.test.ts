@@ -83,19 +83,57 @@ describe('run notices', () => {
     expect(ctx.fakes.mail.messages().filter((m) => m.to.includes(user.email) && m.subject.startsWith('Run finished'))).toHaveLength(1);
   });
 
-  it('shows an admin the outbox of their own department only', async () => {
+  it("outbox takeover (issue 9, item 1): no admin sees another person's reset or invitation link; each user reads their own mail", async () => {
+    const { addMember } = await import('../support/test-app.ts');
     const a = await signUp(ctx.app);
     const b = await signUp(ctx.app);
-    await a.agent.post('/api/invitations').send({ email: uniqueEmail('for-a'), role: 'observer' }).expect(201);
-    await b.agent.post('/api/invitations').send({ email: uniqueEmail('for-b'), role: 'observer' }).expect(201);
-    await requestReset(a.email);
-    await ctx.fakes.mail.waitFor((m) => m.to.includes(a.email));
-    const outbox = (await a.agent.get('/api/outbox').expect(200)).body;
-    expect(outbox.enabled).toBe(true);
-    const to = outbox.messages.flatMap((m: { to: string[] }) => m.to);
-    expect(to.some((t: string) => t.startsWith('for-a'))).toBe(true);
-    expect(to.some((t: string) => t.startsWith('for-b'))).toBe(false);
-    expect(to).toContain(a.email);
-    expect(to).not.toContain(b.email);
+    // The victim is a member of both departments; each department has its own admin.
+    const victim = await addMember(ctx, a.me.department.id, 'observer');
+    const { insertMembership } = await import('../../server/modules/departments/departments.repository.ts');
+    await insertMembership(ctx.database.db, { userId: victim.userId, departmentId: b.me.department.id, role: 'modeller', createdAt: new Date() });
+    const invitee = uniqueEmail('for-a');
+    await a.agent.post('/api/invitations').send({ email: invitee, role: 'observer' }).expect(201);
+    await requestReset(victim.email);
+    const reset = await ctx.fakes.mail.waitFor((m) => m.to.includes(victim.email) && m.subject === 'Reset your Tidefield password');
+    await ctx.fakes.mail.waitFor((m) => m.to.includes(invitee));
+    const token = linkToken(reset, '/reset-password');
+
+    // Neither admin (of either department of the victim) sees the reset link or the invitation link.
+    for (const admin of [a, b]) {
+      const outbox = (await admin.agent.get('/api/outbox').expect(200)).body;
+      expect(outbox.enabled).toBe(true);
+      const text = JSON.stringify(outbox.messages);
+      expect(text).not.toContain(token);
+      expect(text).not.toContain(victim.email);
+      expect(text).not.toContain(invitee);
+    }
+    // The victim reads their own reset mail; another member of the department does not.
+    const own = (await victim.agent.get('/api/outbox').expect(200)).body.messages;
+    expect(own.map((m: { subject: string }) => m.subject)).toContain('Reset your Tidefield password');
+    const colleague = await addMember(ctx, a.me.department.id, 'modeller');
+    expect(JSON.stringify((await colleague.agent.get('/api/outbox').expect(200)).body.messages)).not.toContain(token);
+  });
+
+  it("shows an admin their department's notices (receipts, run notices) but never another department's", async () => {
+    const a = await signUp(ctx.app);
+    const b = await signUp(ctx.app);
+    const scenarioId = await createScenario(a.agent, checkScenario({ systems: 2000 }), 'Outbox notice');
+    const run = await a.agent.post('/api/runs').send({ scenarioId }).expect(201);
+    expect((await waitForRun(a.agent, run.body.id)).status).toBe('succeeded');
+    await ctx.fakes.mail.waitFor((m) => m.to.includes(a.email) && m.subject === 'Run finished: Outbox notice');
+    const mine = (await a.agent.get('/api/outbox').expect(200)).body.messages.map((m: { subject: string }) => m.subject);
+    expect(mine).toContain('Run finished: Outbox notice');
+    const theirs = (await b.agent.get('/api/outbox').expect(200)).body.messages.map((m: { subject: string }) => m.subject);
+    expect(theirs).not.toContain('Run finished: Outbox notice');
+  });
+
+  it('the outbox is off unless e-mail goes to the local stand-in', async () => {
+    const hosted = await createTestApp({ SMTP_HOST: 'smtp.example.org' });
+    try {
+      const { agent } = await signUp(hosted.app);
+      expect((await agent.get('/api/outbox').expect(200)).body).toEqual({ enabled: false, messages: [] });
+    } finally {
+      await hosted.close();
+    }
   });
 });

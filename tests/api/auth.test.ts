@@ -143,8 +143,8 @@ describe('origin check', () => {
     // supertest starts a server on a new port per request, so pin the Host header.
     await agent
       .post('/api/me/department')
-      .set('Host', 'tidefield.test:3000')
-      .set('Origin', 'http://tidefield.test:3000')
+      .set('Host', 'localhost:3000')
+      .set('Origin', 'http://localhost:3000')
       .send({ departmentId: me.body.department.id })
       .expect(200);
     await agent.post('/api/me/department').send({ departmentId: me.body.department.id }).expect(200);
@@ -153,5 +153,52 @@ describe('origin check', () => {
   it('refuses a cross-site fetch even without Origin (Sec-Fetch-Site)', async () => {
     const { agent } = await signUp(ctx.app);
     await agent.post('/api/auth/sign-out').set('Sec-Fetch-Site', 'cross-site').expect(403);
+  });
+});
+
+describe('security fixes (issue 9)', () => {
+  it('https PUBLIC_URL makes the session cookie Secure without a proxy header', async () => {
+    const httpsCtx = await createTestApp({ PUBLIC_URL: 'https://tidefield.example' });
+    try {
+      const res = await request(httpsCtx.app)
+        .post('/api/auth/sign-up')
+        .send({ email: uniqueEmail(), password: GOOD_PASSWORD, name: 'S', department: 'D' })
+        .expect(201);
+      expect(String(res.headers['set-cookie'])).toMatch(/;\s*Secure/i);
+    } finally {
+      await httpsCtx.close();
+    }
+  });
+
+  it('password spraying: failed sign-ins over many e-mails from one client address are limited', async () => {
+    const sprayCtx = await createTestApp({ SIGN_IN_LIMIT: 100, SIGN_IN_CLIENT_LIMIT: 4 });
+    try {
+      for (let i = 0; i < 4; i += 1) {
+        await request(sprayCtx.app).post('/api/auth/sign-in').send({ email: uniqueEmail('spray'), password: 'Summer2026!!' }).expect(401);
+      }
+      const refused = await request(sprayCtx.app).post('/api/auth/sign-in').send({ email: uniqueEmail('spray'), password: 'Summer2026!!' }).expect(429);
+      expect(refused.body.error.code).toBe('rate_limited');
+      expect(Number(refused.headers['retry-after'])).toBeGreaterThan(0);
+    } finally {
+      await sprayCtx.close();
+    }
+  });
+
+  it('sign-up is rate-limited per e-mail address and per client address', async () => {
+    const limited = await createTestApp({ SIGN_UP_LIMIT: 5 });
+    try {
+      const email = uniqueEmail('again');
+      const body = { email, password: GOOD_PASSWORD, name: 'R', department: 'D' };
+      await request(limited.app).post('/api/auth/sign-up').send(body).expect(201);
+      await request(limited.app).post('/api/auth/sign-up').send(body).expect(409);
+      await request(limited.app).post('/api/auth/sign-up').send(body).expect(409);
+      const perAddress = await request(limited.app).post('/api/auth/sign-up').send(body).expect(429);
+      expect(perAddress.body.error.message).toMatch(/this e-mail address/);
+      await request(limited.app).post('/api/auth/sign-up').send({ ...body, email: uniqueEmail() }).expect(201);
+      const perClient = await request(limited.app).post('/api/auth/sign-up').send({ ...body, email: uniqueEmail() }).expect(429);
+      expect(perClient.body.error.message).toMatch(/from your network/);
+    } finally {
+      await limited.close();
+    }
   });
 });

@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createEnginePool } from '../../server/engine-pool/engine-pool.ts';
 import { balanceOf, expectSelfContained, ledgerCheck, payOnStandIn, startCheckout } from '../support/billing.ts';
 import { checkScenario, createScenario, waitForRun } from '../support/runs.ts';
+import { findFreePort } from '../../scripts/mariadb.ts';
 import { addMember, createTestApp, signUp, TEST_STRIPE_SECRETS, type TestContext } from '../support/test-app.ts';
 
 let ctx: TestContext;
@@ -246,6 +247,34 @@ describe('free allowance, settlement and failure refunds', () => {
     } finally {
       await own.close();
       await pool.destroy();
+    }
+  });
+});
+
+describe('stand-ins down (issue 9, item 9)', () => {
+  it('payment service down: checkout answers the 502 text written for it, not a generic 500', async () => {
+    const closedPort = await findFreePort();
+    const down = await createTestApp({ STRIPE_API_PORT: closedPort });
+    try {
+      const { agent } = await signUp(down.app);
+      const res = await agent.post('/api/billing/checkout').send({ packId: 'pack-100' }).expect(502);
+      expect(res.body.error.code).toBe('payment_unavailable');
+      expect(res.body.error.message).toMatch(/nothing was charged/);
+    } finally {
+      await down.close();
+    }
+  });
+
+  it('mail stand-in down: the outbox answers the 502 text written for it, not a generic 500', async () => {
+    const closedPort = await findFreePort();
+    const down = await createTestApp({ DEV_OUTBOX_URL: `http://127.0.0.1:${closedPort}` });
+    try {
+      const { agent } = await signUp(down.app);
+      const res = await agent.get('/api/outbox').expect(502);
+      expect(res.body.error.code).toBe('outbox_unavailable');
+      expect(res.body.error.message).toMatch(/did not answer/);
+    } finally {
+      await down.close();
     }
   });
 });

@@ -35,7 +35,7 @@ describe('invitations', () => {
     expect((await admin.agent.get('/api/invitations').expect(200)).body.invitations.map((i: { email: string }) => i.email)).toContain(email);
 
     const preview = await request(ctx.app).get(`/api/invitations/preview/${token}`).expect(200);
-    expect(preview.body).toMatchObject({ departmentName: 'Invitation Dept', email, role: 'modeller', accountExists: false });
+    expect(preview.body).toMatchObject({ departmentName: 'Invitation Dept', email, role: 'modeller' });
 
     const newcomer = request.agent(ctx.app);
     const missing = await newcomer.post('/api/invitations/accept').send({ token, name: 'New Person' }).expect(400);
@@ -58,7 +58,12 @@ describe('invitations', () => {
   it('let an existing account join after signing in as the invited address, and only that account', async () => {
     const other = await signUp(ctx.app, { name: 'Has Account', department: 'Elsewhere' });
     const { token } = await invite(other.email, 'observer');
-    expect((await request(ctx.app).get(`/api/invitations/preview/${token}`).expect(200)).body.accountExists).toBe(true);
+    // Enumeration (issue 9, item 13): the preview answers alike for an address with and without an account.
+    const fresh = await invite(uniqueEmail('no-account'), 'observer');
+    const withAccount = (await request(ctx.app).get(`/api/invitations/preview/${token}`).expect(200)).body;
+    const withoutAccount = (await request(ctx.app).get(`/api/invitations/preview/${fresh.token}`).expect(200)).body;
+    expect(Object.keys(withAccount).sort()).toEqual(Object.keys(withoutAccount).sort());
+    expect(withAccount).not.toHaveProperty('accountExists');
     const anonymous = await request(ctx.app).post('/api/invitations/accept').send({ token, name: 'X', password: GOOD_PASSWORD }).expect(409);
     expect(anonymous.body.error.message).toMatch(/sign in/);
     const stranger = await signUp(ctx.app);
@@ -95,5 +100,22 @@ describe('invitations', () => {
     const bad = await admin.agent.post('/api/invitations').send({ email: uniqueEmail(), role: 'owner' }).expect(400);
     expect(bad.body.error.field).toBe('role');
     expect(bad.body.error.message).toMatch(/observer, modeller, admin/);
+  });
+
+  it('invitation sending is rate-limited per invited address and per department (issue 9, item 13)', async () => {
+    const limited = await createTestApp({ INVITATION_LIMIT: 4 });
+    try {
+      const boss = await signUp(limited.app);
+      const target = uniqueEmail('flooded');
+      for (let i = 0; i < 3; i += 1) await boss.agent.post('/api/invitations').send({ email: target, role: 'observer' }).expect(201);
+      const perAddress = await boss.agent.post('/api/invitations').send({ email: target, role: 'observer' }).expect(429);
+      expect(perAddress.body.error.message).toMatch(/This address/);
+      await boss.agent.post('/api/invitations').send({ email: uniqueEmail(), role: 'observer' }).expect(201);
+      const perDepartment = await boss.agent.post('/api/invitations').send({ email: uniqueEmail(), role: 'observer' }).expect(429);
+      expect(perDepartment.body.error.message).toMatch(/This department/);
+      expect(perDepartment.headers['retry-after']).toBeDefined();
+    } finally {
+      await limited.close();
+    }
   });
 });

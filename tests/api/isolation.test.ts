@@ -110,23 +110,61 @@ describe('tenant isolation', () => {
 
 describe('API tokens', () => {
   it('authenticates with a Bearer token, lists without the secret, and refuses it once revoked', async () => {
-    const created = await a.agent.post('/api/tokens').send({ name: 'CI script' }).expect(201);
+    const created = await a.agent.post('/api/tokens').send({ name: 'CI script', scope: 'run' }).expect(201);
     const token = created.body.token as string;
     expect(token).toMatch(/^tfk_/);
+    expect(created.body.scope).toBe('run');
     const me = await request(ctx.app).get('/api/me').set('Authorization', `Bearer ${token}`).expect(200);
     expect(me.body.department.name).toBe('Alpha');
-    const id = await request(ctx.app)
-      .post('/api/scenarios')
-      .set('Authorization', `Bearer ${token}`)
-      .send({ name: 'By token', document: checkScenario({ systems: 2000 }) })
-      .expect(201);
-    expect(id.body.id).toBeTruthy();
+    const run = await request(ctx.app).post('/api/runs').set('Authorization', `Bearer ${token}`).send({ scenarioId: ids.scenario, seed: 'by-token' }).expect(201);
+    expect(run.body.id).toBeTruthy();
     const list = await a.agent.get('/api/tokens').expect(200);
     expect(JSON.stringify(list.body)).not.toContain(token);
     expect(list.body.tokens.find((t: { id: string }) => t.id === created.body.id).lastUsedAt).not.toBeNull();
     await a.agent.delete(`/api/tokens/${created.body.id}`).expect(204);
     const refused = await request(ctx.app).get('/api/scenarios').set('Authorization', `Bearer ${token}`).expect(401);
     expect(refused.body.error.message).toMatch(/unknown, expired or revoked/);
+  });
+
+  it('token scopes (issue 9, item 5): read tokens only read, run tokens also start and cancel runs, and no token manages tokens, members, billing or the account', async () => {
+    const bearer = (t: string) => ({ Authorization: `Bearer ${t}` });
+    const read = (await a.agent.post('/api/tokens').send({ name: 'Reader' }).expect(201)).body;
+    expect(read.scope).toBe('read');
+    const runner = (await a.agent.post('/api/tokens').send({ name: 'Runner', scope: 'run' }).expect(201)).body;
+    await request(ctx.app).get('/api/runs').set(bearer(read.token)).expect(200);
+    await request(ctx.app).get(`/api/runs/${ids.run}/export.csv`).set(bearer(read.token)).expect(200);
+    const refused = await request(ctx.app).post('/api/runs').set(bearer(read.token)).send({ scenarioId: ids.scenario }).expect(403);
+    expect(refused.body.error.message).toMatch(/run scope/);
+    const started = await request(ctx.app).post('/api/runs').set(bearer(runner.token)).send({ scenarioId: ids.scenario, seed: 'scoped' }).expect(201);
+    await request(ctx.app).post(`/api/runs/${started.body.id}/cancel`).set(bearer(runner.token));
+    // Not runs: scenarios, tokens, members, billing, the account.
+    await request(ctx.app).post('/api/scenarios').set(bearer(runner.token)).send({ name: 'x', document: checkScenario({ systems: 2000 }) }).expect(403);
+    for (const t of [read.token, runner.token]) {
+      // A token cannot mint a token, and a child cannot revoke its parent.
+      await request(ctx.app).post('/api/tokens').set(bearer(t)).send({ name: 'Child', scope: 'run' }).expect(403);
+      await request(ctx.app).delete(`/api/tokens/${read.id}`).set(bearer(t)).expect(403);
+      await request(ctx.app).get('/api/tokens').set(bearer(t)).expect(403);
+      await request(ctx.app).get('/api/members').set(bearer(t)).expect(403);
+      await request(ctx.app).get('/api/billing/ledger').set(bearer(t)).expect(403);
+      await request(ctx.app).post('/api/billing/checkout').set(bearer(t)).send({ packId: 'pack-100' }).expect(403);
+      await request(ctx.app).put('/api/me/notifications').set(bearer(t)).send({ runFinished: false, runFailed: false }).expect(403);
+    }
+    const list = (await a.agent.get('/api/tokens').expect(200)).body.tokens as { id: string; revokedAt: string | null; scope: string }[];
+    expect(list.find((t) => t.id === read.id)).toMatchObject({ revokedAt: null, scope: 'read' });
+    const bad = await a.agent.post('/api/tokens').send({ name: 'Admin', scope: 'admin' }).expect(400);
+    expect(bad.body.error.field).toBe('scope');
+  });
+
+  it('a password reset revokes the account\'s API tokens (issue 9, item 5)', async () => {
+    const { addMember } = await import('../support/test-app.ts');
+    const { linkToken } = await import('../support/billing.ts');
+    const member = await addMember(ctx, a.me.department.id, 'modeller');
+    const created = (await member.agent.post('/api/tokens').send({ name: 'Before reset', scope: 'run' }).expect(201)).body;
+    await request(ctx.app).get('/api/runs').set('Authorization', `Bearer ${created.token}`).expect(200);
+    await request(ctx.app).post('/api/auth/password-reset').send({ email: member.email }).expect(202);
+    const mail = await ctx.fakes.mail.waitFor((m) => m.to.includes(member.email) && m.subject === 'Reset your Tidefield password');
+    await request(ctx.app).post('/api/auth/password-reset/confirm').send({ token: linkToken(mail, '/reset-password'), password: 'a brand new passphrase' }).expect(204);
+    await request(ctx.app).get('/api/runs').set('Authorization', `Bearer ${created.token}`).expect(401);
   });
 
   it('refuses a made-up token and an expired one', async () => {
@@ -151,5 +189,24 @@ describe('the published library', () => {
     expect(tout.interval95[1]).toBeCloseTo(1 - Math.pow(0.025, 1 / 1253), 8);
     const res = await b.agent.put(`/api/samples/${tout.id}`).send({ name: 'Edited', magnetic: 1, total: 1253 }).expect(403);
     expect(res.body.error.code).toBe('read_only');
+  });
+});
+
+describe('sample ownership (issue 9, item 11)', () => {
+  it("observers cannot edit or delete another member's sample; the owner and modellers can", async () => {
+    const { addMember } = await import('../support/test-app.ts');
+    const observer = await addMember(ctx, a.me.department.id, 'observer');
+    const modeller = await addMember(ctx, a.me.department.id, 'modeller');
+    const body = { name: 'Renamed', magnetic: 2, total: 10 };
+    // The admin's sample: an observer is refused, and the numbers stay as stored.
+    const edit = await observer.agent.put(`/api/samples/${ids.sample}`).send(body).expect(403);
+    expect(edit.body.error.code).toBe('forbidden');
+    await observer.agent.delete(`/api/samples/${ids.sample}`).expect(403);
+    expect((await a.agent.get(`/api/samples/${ids.sample}`).expect(200)).body).toMatchObject({ name: 'A sample', magnetic: 1 });
+    // The observer's own sample: theirs to change; a modeller may change and delete it too.
+    const own = (await observer.agent.post('/api/samples').send({ name: 'Mine', magnetic: 1, total: 5 }).expect(201)).body.id;
+    await observer.agent.put(`/api/samples/${own}`).send(body).expect(200);
+    await modeller.agent.put(`/api/samples/${ids.sample}`).send({ ...body, name: 'A sample', magnetic: 1 }).expect(200);
+    await modeller.agent.delete(`/api/samples/${own}`).expect(204);
   });
 });

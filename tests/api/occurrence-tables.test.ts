@@ -92,3 +92,25 @@ describe('occurrence table CSV', () => {
     expect((await owner.agent.get(`/api/occurrence-tables/${created.body.id}`).expect(200)).body.rows[0].occurrence).toBe(0.2);
   });
 });
+
+describe('CSV formula injection (issue 9, item 12)', () => {
+  it('neutralises formula cells in a table download with a leading apostrophe, and leaves numbers alone', async () => {
+    const hostile = [
+      HEADER,
+      'planet,MJup,0.3,10,2,2000,0.105,powerlaw,-0.31,0.26,,,=HYPERLINK("http://evil.example"),+cmd|calc,@SUM(1)',
+      'planet,MJup,0.3,10,2,2000,0.1,powerlaw,-0.31,0.26,,,-2+3,-cmd,-1.5',
+    ].join('\n');
+    const res = await upload(hostile, 'Hostile').expect(201);
+    const csv = (await owner.agent.get(`/api/occurrence-tables/${res.body.id}/csv`).expect(200)).text;
+    const cells = csv.split('\n').slice(1, 3).map((line) => line.split(/,(?=(?:[^"]*"[^"]*")*[^"]*$)/));
+    const column = (name: string) => HEADER.split(',').indexOf(name);
+    expect(cells[0]![column('label')]).toBe(`"'=HYPERLINK(""http://evil.example"")"`);
+    expect(cells[0]![column('source')]).toBe(`"'+cmd|calc"`);
+    expect(cells[0]![column('assumed')]).toBe(`"'@SUM(1)"`);
+    expect(cells[1]![column('label')]).toBe(`"'-2+3"`);
+    expect(cells[1]![column('source')]).toBe(`"'-cmd"`);
+    // "-1.5" is a number written as text: kept as it is, like the numeric columns.
+    expect(cells[1]![column('assumed')]).toBe('-1.5');
+    expect(cells[0]![column('massSlope')]).toBe('-0.31');
+  });
+});

@@ -29,6 +29,13 @@ async function finishedRun(agent: request.Agent, body: Record<string, unknown>) 
 }
 
 describe('runs for each role', () => {
+  it('CSV formula injection: a seed that looks like a formula comes back neutralised in the result export', async () => {
+    const runId = await finishedRun(modeller.agent, { scenarioId, systems: 20_000, seed: '=HYPERLINK("http://evil.example")' });
+    const csv = (await modeller.agent.get(`/api/runs/${runId}/export.csv`).expect(200)).text;
+    expect(csv).toContain(`run,seed,"'=HYPERLINK(""http://evil.example"")"`);
+    expect(csv).not.toMatch(/(^|,)=HYPERLINK/m);
+  });
+
   it('an observer runs up to 10^6 systems, compares with a sample of their own, and is refused larger runs', async () => {
     const sample = await observer.agent.post('/api/samples').send({ name: 'Pilot (illustrative)', magnetic: 7, total: 60 }).expect(201);
     const runId = await finishedRun(observer.agent, { scenarioId, systems: 50_000 });
@@ -51,6 +58,8 @@ describe('runs for each role', () => {
       expect(csv.text).toContain(`counts,magnetic,${result.body.counts.magnetic}`);
       const json = await who.agent.get(`/api/runs/${runId}/export.json`).expect(200);
       expect(JSON.parse(json.text).scenarioHash).toBe(result.body.scenarioHash);
+      // RFC 6266: the file name as a token or a quoted string.
+      expect(csv.headers['content-disposition']).toMatch(new RegExp(`^attachment; filename="?tidefield-run-${runId}\\.csv"?$`));
       const methods = await who.agent.get(`/api/runs/${runId}/methods.txt`).expect(200);
       expect(methods.text).toContain('Kalirai');
       expect(methods.text).toContain(result.body.scenarioHash);

@@ -1,5 +1,4 @@
-import { Router, type Request } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { Router } from 'express';
 import {
   notificationSettingsSchema,
   passwordResetConfirmSchema,
@@ -7,20 +6,16 @@ import {
   passwordResetRequestSchema,
 } from '../../../shared/contracts/account.ts';
 import type { Config } from '../../config.ts';
-import { tooManyRequests } from '../../lib/errors.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
+import { bodyEmailKey, clientKey, limiter, minutesText } from '../../lib/rate-limit.ts';
 import type { AccountService } from './account.service.ts';
 
 /** Reset requests per client address and e-mail in the sign-in window (the same answer for known and unknown addresses). */
 function resetLimiter(config: Config) {
-  const windowMs = config.SIGN_IN_WINDOW_MINUTES * 60_000;
-  return rateLimit({
-    windowMs,
-    limit: Math.max(1, Math.ceil(config.SIGN_IN_LIMIT / 2)),
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req: Request) => `${ipKeyGenerator(req.ip ?? '')}|${String((req.body as { email?: unknown } | undefined)?.email ?? '').trim().toLowerCase()}`,
-    handler: (_req, _res, next) => next(tooManyRequests('Too many reset requests for this address. Wait a few minutes and try again.', Math.ceil(windowMs / 1000))),
+  return limiter({
+    name: 'passwordReset', windowMs: config.SIGN_IN_WINDOW_MINUTES * 60_000, limit: Math.max(1, Math.ceil(config.SIGN_IN_LIMIT / 2)),
+    key: (req) => `${clientKey(req)}|${bodyEmailKey(req)}`,
+    message: (m) => `Too many reset requests for this address. Try again in ${minutesText(m)}.`,
   });
 }
 
@@ -37,13 +32,13 @@ export function accountRoutes(registry: RouteRegistry, config: Config, account: 
 
   defineRoute(router, registry, mount, {
     method: 'post', path: '/auth/password-reset/confirm', tag, access: 'public', status: 204, body: passwordResetConfirmSchema,
-    summary: 'Set a new password with the link token; every session of the account ends',
+    summary: 'Set a new password with the link token; every session and API token of the account ends',
   }, async ({ body }) => {
     await account.confirmPasswordReset(body);
   });
 
   defineRoute(router, registry, mount, {
-    method: 'get', path: '/me/notifications', tag, access: 'signedIn', response: notificationSettingsSchema,
+    method: 'get', path: '/me/notifications', tag, access: 'signedIn', tokenScope: 'never', response: notificationSettingsSchema,
     summary: 'Which e-mail notices you get (run finished, run failed)',
   }, ({ auth }) => account.notificationSettings(auth));
 

@@ -9,6 +9,7 @@ import { findUserByEmail } from '../auth/auth.repository.ts';
 import { hashPassword } from '../auth/password.ts';
 import type { SessionStore } from '../auth/session.ts';
 import { passwordResetEmail } from '../mail/mail-templates.ts';
+import { revokeTokensOfUser } from '../tokens/tokens.service.ts';
 import type { Mailer } from '../mail/mailer.ts';
 import {
   consumePasswordReset,
@@ -51,7 +52,7 @@ export function createAccountService(deps: { db: Db; config: Config; mailer: Mai
       return { message: RESET_REQUESTED_MESSAGE };
     },
 
-    /** Sets the new password from a single-use link and ends every session of the account. */
+    /** Sets the new password from a single-use link and ends every session and API token of the account. */
     async confirmPasswordReset(body: PasswordResetConfirm): Promise<void> {
       const reset = await findPasswordReset(db, hashLinkToken(body.token));
       if (!reset) throw linkUnknown(KIND);
@@ -63,6 +64,7 @@ export function createAccountService(deps: { db: Db; config: Config; mailer: Mai
         if (!(await consumePasswordReset(tx, reset.id, now))) throw linkUsed(KIND);
         await updatePasswordHash(tx, reset.userId, passwordHash);
         await retirePasswordResets(tx, reset.userId, now);
+        await revokeTokensOfUser(tx, reset.userId, now);
         await recordAudit(tx, { actorUserId: reset.userId, action: 'account.password_reset', target: reset.userId });
       });
       await sessions.invalidateUser(reset.userId);

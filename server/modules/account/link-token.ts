@@ -1,5 +1,6 @@
-import { createHash, randomBytes } from 'node:crypto';
+import { randomBytes } from 'node:crypto';
 import { AppError } from '../../lib/errors.ts';
+import { sha256Hex } from '../../lib/secret-hash.ts';
 
 /** A secret for an e-mailed link (256 bits, URL-safe) and the SHA-256 that is stored instead of it. */
 export function newLinkToken(): { token: string; hash: string } {
@@ -7,7 +8,7 @@ export function newLinkToken(): { token: string; hash: string } {
   return { token, hash: hashLinkToken(token) };
 }
 
-export const hashLinkToken = (token: string) => createHash('sha256').update(token).digest('hex');
+export const hashLinkToken = sha256Hex;
 
 type LinkKind = 'invitation' | 'password-reset link';
 

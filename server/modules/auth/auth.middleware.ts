@@ -1,4 +1,5 @@
 import type { RequestHandler } from 'express';
+import type { TokenScope } from '../../../shared/contracts/tokens.ts';
 import type { Db } from '../../db/client.ts';
 import { unauthenticated } from '../../lib/errors.ts';
 import type { RequestAuth } from '../../lib/request-auth.ts';
@@ -7,7 +8,7 @@ import { loadCaller } from './caller.ts';
 import type { SessionStore } from './session.ts';
 
 /** Resolves a caller from something other than the session cookie (e.g. a Bearer token). */
-export type CallerResolver = (authorization: string) => Promise<{ user: RequestAuth['user']; tokenId: string; departmentId: string } | null>;
+export type CallerResolver = (authorization: string) => Promise<{ user: RequestAuth['user']; tokenId: string; tokenScope: TokenScope; departmentId: string } | null>;
 
 /**
  * Resolves the caller once per request into res.locals.auth: a session cookie (renewed when
@@ -20,7 +21,7 @@ export function authenticate(db: Db, sessions: SessionStore, resolveToken?: Call
     if (authorization && resolveToken) {
       const caller = await resolveToken(authorization);
       if (!caller) return next(unauthenticated('That API token is unknown, expired or revoked.'));
-      res.locals.auth = await loadCaller(db, { user: caller.user, tokenId: caller.tokenId }, caller.departmentId);
+      res.locals.auth = await loadCaller(db, { user: caller.user, tokenId: caller.tokenId, tokenScope: caller.tokenScope }, caller.departmentId);
       return next();
     }
     const sessionId = sessions.readCookie(req.headers.cookie);

@@ -1,5 +1,4 @@
-import { Router, type Request } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { Router } from 'express';
 import {
   meResponseSchema,
   signInBodySchema,
@@ -7,30 +6,41 @@ import {
   switchDepartmentBodySchema,
 } from '../../../shared/contracts/auth.ts';
 import type { Config } from '../../config.ts';
-import { tooManyRequests } from '../../lib/errors.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
+import { bodyEmailKey, clientKey, limiter, minutesText } from '../../lib/rate-limit.ts';
 import { toMe, type AuthService } from './auth.service.ts';
 import type { SessionStore } from './session.ts';
 
-/** Failed sign-ins per client address and e-mail; a successful sign-in does not count. */
-function signInLimiter(config: Config) {
+/** Failed sign-ins per client address and e-mail, and per client address over all e-mails (spraying); a successful sign-in does not count. */
+function signInLimiters(config: Config) {
   const windowMs = config.SIGN_IN_WINDOW_MINUTES * 60_000;
-  return rateLimit({
-    windowMs,
-    limit: config.SIGN_IN_LIMIT,
-    skipSuccessfulRequests: true,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req: Request) =>
-      `${ipKeyGenerator(req.ip ?? '')}|${String((req.body as { email?: unknown } | undefined)?.email ?? '').trim().toLowerCase()}`,
-    handler: (req, _res, next) => {
-      const resetTime = (req as Request & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
-      const seconds = Math.max(1, Math.ceil(((resetTime?.getTime() ?? Date.now() + windowMs) - Date.now()) / 1000));
-      const minutes = Math.ceil(seconds / 60);
-      next(tooManyRequests(`Too many failed sign-in attempts for this address. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`, seconds));
-    },
-  });
+  return [
+    limiter({
+      name: 'signInClient', windowMs, limit: config.SIGN_IN_CLIENT_LIMIT, countFailuresOnly: true, key: clientKey,
+      message: (m) => `Too many failed sign-in attempts from your network. Try again in ${minutesText(m)}.`,
+    }),
+    limiter({
+      name: 'signIn', windowMs, limit: config.SIGN_IN_LIMIT, countFailuresOnly: true, key: (req) => `${clientKey(req)}|${bodyEmailKey(req)}`,
+      message: (m) => `Too many failed sign-in attempts for this address. Try again in ${minutesText(m)}.`,
+    }),
+  ];
 }
+
+/** Sign-ups per client address and per e-mail address in an hour. */
+function signUpLimiters(config: Config) {
+  const windowMs = 3_600_000;
+  return [
+    limiter({
+      name: 'signUpClient', windowMs, limit: config.SIGN_UP_LIMIT, key: clientKey,
+      message: (m) => `Too many sign-ups from your network. Try again in ${minutesText(m)}.`,
+    }),
+    limiter({
+      name: 'signUpEmail', windowMs, limit: SIGN_UPS_PER_EMAIL, key: bodyEmailKey,
+      message: (m) => `Too many sign-ups for this e-mail address. Check your mail, or try again in ${minutesText(m)}.`,
+    }),
+  ];
+}
+const SIGN_UPS_PER_EMAIL = 3;
 
 export function authRoutes(registry: RouteRegistry, config: Config, auth: AuthService, sessions: SessionStore): Router {
   const router = Router();
@@ -40,7 +50,7 @@ export function authRoutes(registry: RouteRegistry, config: Config, auth: AuthSe
   defineRoute(router, registry, mount, {
     method: 'post', path: '/auth/sign-up', tag, access: 'public', status: 201,
     summary: 'Create an account and a department with you as its admin; signs you in',
-    body: signUpBodySchema, response: meResponseSchema,
+    body: signUpBodySchema, response: meResponseSchema, before: signUpLimiters(config),
   }, async ({ body, req, res }) => {
     const { session, me } = await auth.signUp(body);
     res.append('Set-Cookie', sessions.cookieFor(session, req.secure));
@@ -50,7 +60,7 @@ export function authRoutes(registry: RouteRegistry, config: Config, auth: AuthSe
   defineRoute(router, registry, mount, {
     method: 'post', path: '/auth/sign-in', tag, access: 'public',
     summary: 'Sign in with e-mail and password; sets the session cookie',
-    body: signInBodySchema, response: meResponseSchema, before: [signInLimiter(config)],
+    body: signInBodySchema, response: meResponseSchema, before: signInLimiters(config),
   }, async ({ body, req, res }) => {
     const { session, me } = await auth.signIn(body);
     res.append('Set-Cookie', sessions.cookieFor(session, req.secure));

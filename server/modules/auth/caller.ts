@@ -9,7 +9,7 @@ import type { RequestAuth } from '../../lib/request-auth.ts';
  */
 export async function loadCaller(
   db: Db,
-  caller: Pick<RequestAuth, 'user' | 'sessionId' | 'tokenId'>,
+  caller: Pick<RequestAuth, 'user' | 'sessionId' | 'tokenId' | 'tokenScope'>,
   preferredDepartmentId: string | null,
 ): Promise<RequestAuth> {
   const memberships = (await membershipsOfUser(db, caller.user.id)).map(({ departmentId, departmentName, role }) => ({

@@ -10,14 +10,19 @@ import { users } from '../users/users.table.ts';
  */
 export const SESSION_COOKIE = 'tidefield_session';
 
-export function createSessionStore(db: Db, sessionDays: number) {
+/**
+ * `publicUrl` is where users reach the app: when it is https the cookie is always Secure (a
+ * TLS-terminating proxy may talk plain http to us); otherwise it is Secure on https requests only.
+ */
+export function createSessionStore(db: Db, sessionDays: number, publicUrl?: string) {
+  const alwaysSecure = publicUrl?.startsWith('https:') ?? false;
   const adapter = new DrizzleMySQLAdapter(db, sessions, users);
   const lucia = new Lucia(adapter, {
     sessionExpiresIn: new TimeSpan(Math.round(sessionDays * 24 * 3600), 's'),
     sessionCookie: {
       name: SESSION_COOKIE,
       expires: true,
-      // Secure is decided per request (see cookieFor): on for https, off on plain localhost.
+      // Secure is decided in cookieFor: on for an https PUBLIC_URL or request, off on plain localhost.
       attributes: { sameSite: 'lax', secure: false },
     },
     getSessionAttributes: (attributes) => ({ activeDepartmentId: attributes.activeDepartmentId }),
@@ -41,7 +46,7 @@ export function createSessionStore(db: Db, sessionDays: number) {
     /** The Set-Cookie value for a session (or a blank, expired cookie for null). */
     cookieFor(session: { id: string } | null, secure: boolean): string {
       const cookie = session ? lucia.createSessionCookie(session.id) : lucia.createBlankSessionCookie();
-      cookie.attributes.secure = secure;
+      cookie.attributes.secure = secure || alwaysSecure;
       cookie.attributes.httpOnly = true;
       cookie.attributes.path = '/';
       return cookie.serialize();

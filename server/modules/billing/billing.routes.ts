@@ -44,17 +44,17 @@ export function billingRoutes(registry: RouteRegistry, billing: BillingService):
   }, ({ auth, body }) => billing.startCheckout(auth, body.packId));
 
   defineRoute(router, registry, mount, {
-    method: 'get', path: '/checkouts/:id', tag, access: 'admin', params: idParamsSchema, response: checkoutStatusResponseSchema,
+    method: 'get', path: '/checkouts/:id', tag, access: 'admin', tokenScope: 'never', params: idParamsSchema, response: checkoutStatusResponseSchema,
     summary: 'One purchase and its state (open, paid, declined, expired, failed)',
   }, ({ auth, params }) => billing.checkout(auth, params.id));
 
   defineRoute(router, registry, mount, {
-    method: 'get', path: '/receipts', tag, access: 'admin', response: receiptListResponseSchema,
+    method: 'get', path: '/receipts', tag, access: 'admin', tokenScope: 'never', response: receiptListResponseSchema,
     summary: "The department's paid purchases with their receipt numbers",
   }, async ({ auth }) => ({ receipts: await billing.receipts(auth) }));
 
   defineRoute(router, registry, mount, {
-    method: 'get', path: '/ledger', tag, access: 'admin', query: ledgerQuerySchema, response: ledgerResponseSchema,
+    method: 'get', path: '/ledger', tag, access: 'admin', tokenScope: 'never', query: ledgerQuerySchema, response: ledgerResponseSchema,
     summary: "The department's credit ledger, newest first (append-only)",
   }, ({ auth, query }) => billing.ledger(auth, query.page, query.pageSize));
 

@@ -14,7 +14,7 @@ export function membersRoutes(registry: RouteRegistry, members: MembersService):
   const tag = 'Members';
 
   defineRoute(router, registry, mount, {
-    method: 'get', path: '/', tag, access: 'admin', summary: "List the department's members and their roles",
+    method: 'get', path: '/', tag, access: 'admin', tokenScope: 'never', summary: "List the department's members and their roles",
     response: memberListResponseSchema,
   }, async ({ auth }) => ({ members: await members.list(auth) }));
 

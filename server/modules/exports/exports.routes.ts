@@ -3,13 +3,13 @@ import { idParamsSchema } from '../../../shared/contracts/common.ts';
 import { exportListingSchema, exportQuerySchema } from '../../../shared/contracts/exports.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
 import { departmentOf } from '../../lib/request-auth.ts';
-import { attachment } from '../runs/runs.routes.ts';
+import { sendDownload } from '../../lib/csv.ts';
 import type { ExportAnswer, ExportsService } from './exports.service.ts';
 
 /** The listing as JSON, or the table as a file download. */
 export function sendExport(res: Response, answer: ExportAnswer) {
   if ('listing' in answer) return answer.listing;
-  attachment(res, answer.file.contentType, answer.file.filename, answer.file.body);
+  sendDownload(res, answer.file.filename, answer.file.body, answer.file.contentType);
   return undefined;
 }
 
@@ -29,7 +29,7 @@ export function exportsRoutes(registry: RouteRegistry, exports: ExportsService):
     summary: 'BibTeX entries (with DOIs where known) of every published method and constraint the run used',
   }, async ({ auth, params, res }) => {
     const file = await exports.runReferences(departmentOf(auth).id, params.id);
-    attachment(res, file.contentType, file.filename, file.body);
+    sendDownload(res, file.filename, file.body, file.contentType);
   });
 
   defineRoute(router, registry, mount, {

@@ -9,22 +9,42 @@ import {
   invitationPreviewSchema,
   tokenParamsSchema,
 } from '../../../shared/contracts/invitations.ts';
+import type { Config } from '../../config.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
+import { bodyEmailKey, limiter, minutesText } from '../../lib/rate-limit.ts';
 import type { SessionStore } from '../auth/session.ts';
 import type { InvitationsService } from './invitations.service.ts';
 
-export function invitationsRoutes(registry: RouteRegistry, invitations: InvitationsService, sessions: SessionStore): Router {
+const INVITATIONS_PER_ADDRESS = 3;
+
+/** Invitations per invited address over all departments, then per department, in an hour (a refusal of the first is not counted by the second). */
+function invitationLimiters(config: Config) {
+  const windowMs = 3_600_000;
+  return [
+    limiter({
+      name: 'invitationsAddress', windowMs, limit: INVITATIONS_PER_ADDRESS, key: bodyEmailKey,
+      message: (m) => `This address has been sent ${INVITATIONS_PER_ADDRESS} invitations in the last hour, the most allowed. Try again in ${minutesText(m)}.`,
+    }),
+    limiter({
+      name: 'invitationsDepartment', windowMs, limit: config.INVITATION_LIMIT, key: (_req, res) => res.locals.auth?.department?.id ?? '',
+      message: (m) => `This department has sent ${config.INVITATION_LIMIT} invitations in the last hour, the most allowed. Try again in ${minutesText(m)}.`,
+    }),
+  ];
+}
+
+export function invitationsRoutes(registry: RouteRegistry, config: Config, invitations: InvitationsService, sessions: SessionStore): Router {
   const router = Router();
   const mount = '/api/invitations';
   const tag = 'Members';
 
   defineRoute(router, registry, mount, {
     method: 'post', path: '/', tag, access: 'admin', status: 201, body: createInvitationBodySchema, response: createInvitationResponseSchema,
+    before: invitationLimiters(config),
     summary: 'Invite an address to the department with a role; the e-mailed link works once, for 7 days',
   }, ({ auth, body }) => invitations.create(auth, body));
 
   defineRoute(router, registry, mount, {
-    method: 'get', path: '/', tag, access: 'admin', response: invitationListResponseSchema,
+    method: 'get', path: '/', tag, access: 'admin', tokenScope: 'never', response: invitationListResponseSchema,
     summary: "The department's open invitations",
   }, async ({ auth }) => ({ invitations: await invitations.list(auth) }));
 

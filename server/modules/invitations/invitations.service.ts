@@ -154,7 +154,7 @@ export function createInvitationsService(deps: { db: Db; config: Config; mailer:
       const { invitation } = found;
       return {
         departmentName: found.departmentName, email: invitation.email, role: invitation.role, invitedByName: found.invitedByName,
-        expiresAt: invitation.expiresAt.toISOString(), accountExists: Boolean(await findUserByEmail(db, invitation.email)),
+        expiresAt: invitation.expiresAt.toISOString(),
       };
     },
 
@@ -169,6 +169,7 @@ export function createInvitationsService(deps: { db: Db; config: Config; mailer:
       if (refused || !found) throw refused ?? linkUnknown(KIND);
       const { invitation } = found;
 
+      if (caller?.tokenId) throw forbidden('Accept an invitation signed in to Tidefield, not with an API token.');
       if (caller) {
         if (caller.user.email !== invitation.email) {
           throw forbidden(`This invitation is for ${invitation.email}, but you are signed in as ${caller.user.email}. Sign out and open the link again, or ask for an invitation to your address.`);

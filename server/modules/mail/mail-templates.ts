@@ -85,7 +85,7 @@ export function passwordResetEmail(input: { name: string; link: string; expiresA
       heading: 'Choose a new password',
       paragraphs: [
         `Hello ${input.name}, someone (we hope you) asked to reset the password of your Tidefield account.`,
-        `The link works once and until ${formatUtc(input.expiresAt)}. Choosing a new password signs you out everywhere else.`,
+        `The link works once and until ${formatUtc(input.expiresAt)}. Choosing a new password signs you out everywhere else and revokes your API tokens.`,
       ],
       action: { label: 'Choose a new password', url: input.link },
       footer: 'If you did not ask for this, ignore this e-mail: your password stays as it is.',

@@ -7,6 +7,7 @@ import {
 } from '../../../shared/contracts/occurrence-tables-api.ts';
 import { readRowCells } from '../../../shared/contracts/occurrence-row-cells.ts';
 import type { CompanionRow } from '../../../shared/contracts/occurrence-table.ts';
+import { toCsv } from '../../lib/csv.ts';
 
 export interface ParsedCsv {
   rows: CompanionRow[];
@@ -32,6 +33,9 @@ export function parseOccurrenceCsv(text: string): ParsedCsv {
   for (const c of missing) problems.push({ line: 1, column: c, message: `the header has no column ${c} (required: ${OCCURRENCE_CSV_REQUIRED.join(', ')})` });
   for (const c of unknown) problems.push({ line: 1, column: c, message: `the header has an unknown column ${c} (allowed: ${OCCURRENCE_CSV_COLUMNS.join(', ')})` });
   if (problems.length > 0) return { rows: [], problems, rowCount: parsed.data.length };
+  if (parsed.data.length === 0) {
+    return { rows: [], problems: [{ line: 2, message: 'the file has no rows below its header; add at least one companion row' }], rowCount: 0 };
+  }
   if (parsed.data.length > STORED_TABLE_MAX_ROWS) {
     return {
       rows: [],
@@ -83,5 +87,5 @@ export function formatOccurrenceCsv(rows: readonly CompanionRow[]): string {
       assumed: row.assumed ?? '',
     };
   });
-  return Papa.unparse({ fields: [...OCCURRENCE_CSV_COLUMNS], data: records.map((r) => OCCURRENCE_CSV_COLUMNS.map((c) => r[c])) }, { newline: '\n' }) + '\n';
+  return toCsv(OCCURRENCE_CSV_COLUMNS, records.map((r) => OCCURRENCE_CSV_COLUMNS.map((c) => r[c])));
 }

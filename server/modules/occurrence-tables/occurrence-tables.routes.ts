@@ -11,17 +11,18 @@ import {
   uploadTableFieldsSchema,
 } from '../../../shared/contracts/occurrence-tables-api.ts';
 import { idResponseSchema } from '../../../shared/contracts/scenarios-api.ts';
+import { sendDownload } from '../../lib/csv.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
-import { fileMissing, fileTooLarge } from './occurrence-tables.errors.ts';
+import { fileMissing, uploadRefused } from './occurrence-tables.errors.ts';
 import type { OccurrenceTablesService } from './occurrence-tables.service.ts';
 
 /** One CSV file of at most 1 MB in the multipart field "file", kept in memory. */
 function csvUpload(): RequestHandler {
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: CSV_MAX_BYTES, files: 1, fields: 10 } }).single('file');
+  const limits = { fileSize: CSV_MAX_BYTES, files: 1, fields: 10 };
+  const upload = multer({ storage: multer.memoryStorage(), limits }).single('file');
   return (req, res, next) =>
     upload(req, res, (error?: unknown) => {
-      if (error instanceof multer.MulterError && error.code === 'LIMIT_FILE_SIZE') return next(fileTooLarge(CSV_MAX_BYTES));
-      if (error) return next(error);
+      if (error) return next(uploadRefused(error, limits));
       if (!req.file) return next(fileMissing());
       next();
     });
@@ -72,9 +73,7 @@ export function occurrenceTablesRoutes(registry: RouteRegistry, tables: Occurren
     method: 'get', path: '/:id/csv', tag, access: 'observer', summary: 'Download a table as CSV', params: idParamsSchema, produces: 'text/csv',
   }, async ({ auth, params, res }) => {
     const { name, csv } = await tables.csv(auth, params.id);
-    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
-    res.setHeader('Content-Disposition', `attachment; filename="${name.replace(/[^A-Za-z0-9._-]+/g, '_')}.csv"`);
-    res.send(csv);
+    sendDownload(res, `${name.replace(/[^A-Za-z0-9._-]+/g, '_')}.csv`, csv);
   });
 
   return router;

@@ -2,13 +2,12 @@ import type { MethodEntry, ScenarioResult } from '../../../shared/contracts/resu
 import type { Scenario } from '../../../shared/contracts/scenario.ts';
 import { formatPercentWithError } from '../../../shared/engine/stats/format.ts';
 import { methodsUsed } from '../../../shared/engine/result/methods.ts';
+import { toCsv } from '../../lib/csv.ts';
 
 /** A CSV with one section per table of the result: headline counts, then every histogram. */
 export function resultCsv(result: ScenarioResult): string {
-  const lines: string[] = [];
-  const row = (...cells: (string | number | null)[]) =>
-    lines.push(cells.map((c) => (c === null ? '' : typeof c === 'number' ? String(c) : /[",\n]/.test(c) ? `"${c.replace(/"/g, '""')}"` : c)).join(','));
-  row('section', 'key', 'value', 'se', 'lo', 'hi', 'extra');
+  const rows: (string | number | null)[][] = [];
+  const row = (...cells: (string | number | null)[]) => rows.push(cells);
   row('run', 'engineVersion', result.engineVersion);
   row('run', 'scenarioHash', result.scenarioHash);
   row('run', 'seed', result.seed);
@@ -35,7 +34,7 @@ export function resultCsv(result: ScenarioResult): string {
       }),
     ),
   );
-  return lines.join('\n') + '\n';
+  return toCsv(['section', 'key', 'value', 'se', 'lo', 'hi', 'extra'], rows);
 }
 
 /**

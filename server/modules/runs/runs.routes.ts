@@ -14,6 +14,7 @@ import {
   type RunProgressEvent,
 } from '../../../shared/contracts/runs.ts';
 import { idResponseSchema } from '../../../shared/contracts/scenarios-api.ts';
+import { sendDownload } from '../../lib/csv.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
 import type { RunEvents } from './run-events.ts';
 import type { RunsService } from './runs.service.ts';
@@ -21,19 +22,13 @@ import type { RunsService } from './runs.service.ts';
 const FINAL = new Set(['succeeded', 'failed', 'cancelled']);
 const HEARTBEAT_MS = 15_000;
 
-export function attachment(res: import('express').Response, type: string, filename: string, body: string) {
-  res.setHeader('Content-Type', `${type}; charset=utf-8`);
-  res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
-  res.send(body);
-}
-
 export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: RunEvents): Router {
   const router = Router();
   const mount = '/api';
   const tag = 'Runs';
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/runs', tag, access: 'observer', status: 201,
+    method: 'post', path: '/runs', tag, access: 'observer', status: 201, tokenScope: 'run',
     summary: 'Queue a run of a scenario (observers: at most 10^6 systems)', body: createRunBodySchema, response: idResponseSchema,
   }, ({ auth, body }) => runs.create(auth, body));
 
@@ -70,7 +65,7 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
   });
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/runs/:id/cancel', tag, access: 'observer', summary: 'Cancel a queued or running run (its owner, or a modeller)', params: idParamsSchema, response: runSummarySchema,
+    method: 'post', path: '/runs/:id/cancel', tag, access: 'observer', tokenScope: 'run', summary: 'Cancel a queued or running run (its owner, or a modeller)', params: idParamsSchema, response: runSummarySchema,
   }, ({ auth, params }) => runs.cancel(auth, params.id));
 
   defineRoute(router, registry, mount, {
@@ -97,12 +92,12 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
 
   defineRoute(router, registry, mount, {
     method: 'get', path: '/runs/:id/export.csv', tag, access: 'observer', summary: 'The result as CSV', params: idParamsSchema, produces: 'text/csv',
-  }, async ({ auth, params, res }) => attachment(res, 'text/csv', `tidefield-run-${params.id}.csv`, await runs.exportCsv(auth, params.id)));
+  }, async ({ auth, params, res }) => sendDownload(res, `tidefield-run-${params.id}.csv`, await runs.exportCsv(auth, params.id)));
 
   defineRoute(router, registry, mount, {
     method: 'get', path: '/runs/:id/export.json', tag, access: 'observer', summary: 'The result document as a JSON file', params: idParamsSchema, produces: 'application/json',
   }, async ({ auth, params, res }) =>
-    attachment(res, 'application/json', `tidefield-run-${params.id}.json`, JSON.stringify(await runs.result(auth, params.id), null, 2) + '\n'));
+    sendDownload(res, `tidefield-run-${params.id}.json`, JSON.stringify(await runs.result(auth, params.id), null, 2) + '\n'));
 
   defineRoute(router, registry, mount, {
     method: 'get', path: '/runs/:id/methods.txt', tag, access: 'observer',
@@ -118,7 +113,7 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
   }, ({ auth, query }) => runs.compare(auth, query.runs));
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/implied-occurrence', tag, access: 'observer', status: 201,
+    method: 'post', path: '/implied-occurrence', tag, access: 'observer', status: 201, tokenScope: 'read',
     summary: 'Start the run that answers "what occurrence does this sample imply?" for a scenario; then read /runs/{runId}/implied-occurrence',
     body: impliedOccurrenceBodySchema, response: z.object({ runId: z.string(), sampleId: z.string() }),
   }, ({ auth, body }) => runs.startImpliedOccurrence(auth, body));

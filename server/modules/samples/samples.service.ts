@@ -2,7 +2,8 @@ import type { CreateSampleBody, Sample, SampleBin } from '../../../shared/contra
 import { clopperPearson } from '../../../shared/engine/stats/clopper-pearson.ts';
 import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
-import { AppError, notFound } from '../../lib/errors.ts';
+import { roleAtLeast } from '../../../shared/contracts/roles.ts';
+import { AppError, forbidden, notFound } from '../../lib/errors.ts';
 import { recordAudit } from '../audit/audit.service.ts';
 import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import { PUBLISHED_CONSTRAINTS } from './library.ts';
@@ -75,10 +76,14 @@ export function createSamplesService(db: Db) {
     return toSample(row, await binsOf(db, [row.id]));
   }
 
-  async function editable(departmentId: string, id: string) {
-    const row = await findVisibleSample(db, departmentId, id);
+  /** The same rule as runs and scenarios: the owner, or a modeller or admin, changes or deletes a sample. */
+  async function editable(auth: RequestAuth, id: string) {
+    const row = await findVisibleSample(db, departmentOf(auth).id, id);
     if (!row) throw sampleNotFound();
     if (row.departmentId === null) throw libraryReadOnly();
+    if (row.ownerUserId !== auth.user.id && !roleAtLeast(auth.role!, 'modeller')) {
+      throw forbidden("Only the sample's owner or a modeller or admin can change or delete it.");
+    }
     return row;
   }
 
@@ -111,7 +116,7 @@ export function createSamplesService(db: Db) {
 
     async update(auth: RequestAuth, id: string, body: CreateSampleBody): Promise<Sample> {
       const department = departmentOf(auth);
-      await editable(department.id, id);
+      await editable(auth, id);
       await db.transaction(async (tx) => {
         await updateSample(tx, id, {
           name: body.name, magnetic: body.magnetic, total: body.total, setting: body.setting,
@@ -125,7 +130,7 @@ export function createSamplesService(db: Db) {
 
     async remove(auth: RequestAuth, id: string): Promise<void> {
       const department = departmentOf(auth);
-      await editable(department.id, id);
+      await editable(auth, id);
       await db.transaction(async (tx) => {
         await deleteSample(tx, id);
         await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'sample.deleted', target: id });

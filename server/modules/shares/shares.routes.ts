@@ -7,7 +7,7 @@ import type { Config } from '../../config.ts';
 import { tooManyRequests } from '../../lib/errors.ts';
 import { defineRoute, type RouteRegistry } from '../../lib/http.ts';
 import { sendExport } from '../exports/exports.routes.ts';
-import { attachment } from '../runs/runs.routes.ts';
+import { sendDownload } from '../../lib/csv.ts';
 import type { SharesService } from './shares.service.ts';
 
 function limiter(windowMs: number, limit: number, key: (req: Request, res: Response) => string, what: string) {
@@ -77,7 +77,7 @@ export function sharesRoutes(registry: RouteRegistry, config: Config, shares: Sh
     summary: "The shared run's references as BibTeX",
   }, async ({ params, res }) => {
     const file = await shares.referencesOf(params.token);
-    attachment(res, file.contentType, file.filename, file.body);
+    sendDownload(res, file.filename, file.body, file.contentType);
   });
 
   return router;

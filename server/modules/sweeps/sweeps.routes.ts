@@ -11,7 +11,7 @@ export function sweepsRoutes(registry: RouteRegistry, sweeps: SweepsService): Ro
   const tag = 'Sweeps';
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/', tag, access: 'modeller', status: 201,
+    method: 'post', path: '/', tag, access: 'modeller', status: 201, tokenScope: 'run',
     summary: 'Queue a 1-D or 2-D grid over named parameters; every point is a run with the same seed',
     body: createSweepBodySchema, response: idResponseSchema,
   }, ({ auth, body }) => sweeps.create(auth, body));
@@ -26,7 +26,7 @@ export function sweepsRoutes(registry: RouteRegistry, sweeps: SweepsService): Ro
   }, ({ auth, params, query }) => sweeps.detail(auth, params.id, query.sample));
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/:id/cancel', tag, access: 'modeller', summary: 'Cancel every point that has not finished', params: idParamsSchema, response: sweepSummarySchema,
+    method: 'post', path: '/:id/cancel', tag, access: 'modeller', tokenScope: 'run', summary: 'Cancel every point that has not finished', params: idParamsSchema, response: sweepSummarySchema,
   }, ({ auth, params }) => sweeps.cancel(auth, params.id));
 
   return router;

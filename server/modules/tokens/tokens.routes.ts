@@ -11,17 +11,17 @@ export function tokensRoutes(registry: RouteRegistry, tokens: TokensService): Ro
 
   defineRoute(router, registry, mount, {
     method: 'post', path: '/', tag, access: 'observer', status: 201,
-    summary: 'Create a personal API token for the active department (the secret is shown once)',
+    summary: 'Create a personal API token for the active department, with the read or run scope (signed in only; the secret is shown once)',
     body: createTokenBodySchema, response: createTokenResponseSchema,
   }, ({ auth, body }) => tokens.create(auth, body));
 
   defineRoute(router, registry, mount, {
-    method: 'get', path: '/', tag, access: 'observer', summary: 'List your API tokens (never their secrets)',
+    method: 'get', path: '/', tag, access: 'observer', tokenScope: 'never', summary: 'List your API tokens (never their secrets)',
     response: tokenListResponseSchema,
   }, async ({ auth }) => ({ tokens: await tokens.list(auth) }));
 
   defineRoute(router, registry, mount, {
-    method: 'delete', path: '/:id', tag, access: 'observer', status: 204, summary: 'Revoke one of your API tokens',
+    method: 'delete', path: '/:id', tag, access: 'observer', status: 204, summary: 'Revoke one of your API tokens (signed in only)',
     params: idParamsSchema,
   }, async ({ auth, params }) => {
     await tokens.revoke(auth, params.id);

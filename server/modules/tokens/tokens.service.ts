@@ -1,9 +1,11 @@
-import { createHash, randomBytes } from 'node:crypto';
+import { randomBytes } from 'node:crypto';
 import { and, desc, eq, isNull } from 'drizzle-orm';
 import type { CreateTokenBody, TokenSummary } from '../../../shared/contracts/tokens.ts';
 import type { Db } from '../../db/client.ts';
+import type { DbOrTx } from '../departments/departments.repository.ts';
 import { newId } from '../../db/columns.ts';
 import { notFound } from '../../lib/errors.ts';
+import { sha256Hex as hashSecret } from '../../lib/secret-hash.ts';
 import { recordAudit } from '../audit/audit.service.ts';
 import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import type { CallerResolver } from '../auth/auth.middleware.ts';
@@ -11,7 +13,6 @@ import { users } from '../users/users.table.ts';
 import { apiTokens } from './tokens.table.ts';
 
 const TOKEN_PREFIX = 'tfk_';
-const hashSecret = (secret: string) => createHash('sha256').update(secret).digest('hex');
 /** lastUsedAt is written at most once a minute per token, not on every call. */
 const LAST_USED_RESOLUTION_MS = 60_000;
 
@@ -20,12 +21,18 @@ function toSummary(row: typeof apiTokens.$inferSelect): TokenSummary {
     id: row.id,
     name: row.name,
     prefix: row.prefix,
+    scope: row.scope,
     departmentId: row.departmentId,
     createdAt: row.createdAt.toISOString(),
     lastUsedAt: row.lastUsedAt?.toISOString() ?? null,
     expiresAt: row.expiresAt?.toISOString() ?? null,
     revokedAt: row.revokedAt?.toISOString() ?? null,
   };
+}
+
+/** Revokes every open token of a user (a password reset ends all their sessions and tokens). */
+export async function revokeTokensOfUser(db: DbOrTx, userId: string, at: Date): Promise<void> {
+  await db.update(apiTokens).set({ revokedAt: at }).where(and(eq(apiTokens.userId, userId), isNull(apiTokens.revokedAt)));
 }
 
 export function createTokensService(db: Db) {
@@ -40,6 +47,7 @@ export function createTokensService(db: Db) {
         userId: auth.user.id,
         departmentId: department.id,
         name: body.name,
+        scope: body.scope,
         secretHash: hashSecret(secret),
         prefix: secret.slice(0, 10),
         createdAt: now,
@@ -94,7 +102,7 @@ export function createTokensService(db: Db) {
         if (!found.token.lastUsedAt || now - found.token.lastUsedAt.getTime() > LAST_USED_RESOLUTION_MS) {
           await db.update(apiTokens).set({ lastUsedAt: new Date(now) }).where(eq(apiTokens.id, found.token.id));
         }
-        return { user: found.user, tokenId: found.token.id, departmentId: found.token.departmentId };
+        return { user: found.user, tokenId: found.token.id, tokenScope: found.token.scope, departmentId: found.token.departmentId };
       };
     },
   };

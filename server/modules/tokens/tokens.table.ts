@@ -1,4 +1,4 @@
-import { char, index, mysqlTable, varchar } from 'drizzle-orm/mysql-core';
+import { char, index, mysqlEnum, mysqlTable, varchar } from 'drizzle-orm/mysql-core';
 import { idColumn, timestamp } from '../../db/columns.ts';
 import { users } from '../users/users.table.ts';
 
@@ -13,6 +13,8 @@ export const apiTokens = mysqlTable(
     /** The department the token acts in (tokens do not switch departments). */
     departmentId: idColumn('department_id').notNull(),
     name: varchar('name', { length: 120 }).notNull(),
+    /** What the token may do (shared/contracts/tokens.ts): read, or read and start/cancel runs and sweeps. */
+    scope: mysqlEnum('scope', ['read', 'run']).notNull().default('read'),
     secretHash: char('secret_hash', { length: 64 }).notNull().unique(),
     /** The first characters of the token, to recognise it in a list. */
     prefix: varchar('prefix', { length: 16 }).notNull(),

@@ -9,7 +9,11 @@ export function Component() {
       <PageHeader
         eyebrow={me.department.name}
         title="Outbox"
-        description="In local development Tidefield sends e-mail to a stand-in mail server instead of real inboxes. What it sent about this department is here, so invitation and reset links can be followed."
+        description={
+          me.role === 'admin'
+            ? "In local development Tidefield sends e-mail to a stand-in mail server instead of real inboxes. Here is the mail sent to you, and this department's receipts and run notices. Links that grant access (invitations, password resets) are shown to their recipient only."
+            : 'In local development Tidefield sends e-mail to a stand-in mail server instead of real inboxes. Here is the mail sent to you, so that your own links can be followed.'
+        }
       />
       <OutboxList departmentId={me.department.id} />
     </>

@@ -96,20 +96,18 @@ export function AcceptInvitationPanel({ token, me, signInHref, onAccepted, signO
       </>
     );
   }
-  if (invite.accountExists) {
-    return (
-      <>
-        <Offer preview={invite} />
-        <p className="mb-4 text-foam-300">You already have a Tidefield account with {invite.email}. Sign in with it and you come back here to join.</p>
-        <Link to={signInHref} className="font-bold">
-          Sign in to accept
-        </Link>
-      </>
-    );
-  }
+  // The preview never says whether the address has an account (that would let a link holder
+  // probe addresses): both ways are offered, as the e-mail explains.
   return (
     <>
       <Offer preview={invite} />
+      <p className="mb-4 text-foam-300">
+        Already have a Tidefield account with {invite.email}?{' '}
+        <Link to={signInHref} className="font-bold">
+          Sign in to accept
+        </Link>{' '}
+        and you come back here to join. Otherwise create your account below.
+      </p>
       <NewAccountForm token={token} email={invite.email} onAccepted={onAccepted} />
     </>
   );

@@ -47,12 +47,12 @@ export function OutboxList({ departmentId }: { departmentId: string }) {
   if (outbox.isPending) return <LoadingState label="Reading the outbox…" />;
   if (outbox.isError) return <ErrorState error={outbox.error} title="The outbox could not be read" onRetry={() => void outbox.refetch()} retrying={outbox.isFetching} />;
   if (!outbox.data.enabled) {
-    return <EmptyState title="The development outbox is off">This server sends e-mail through a real mail service (DEV_OUTBOX_URL is not set), so there is nothing to show here.</EmptyState>;
+    return <EmptyState title="The development outbox is off">This server sends e-mail through a real mail service (or DEV_OUTBOX_URL is empty), so your mail is in your own inbox.</EmptyState>;
   }
   return (
-    <Card title="Messages" description="Mail about this department or to its members, as the local SMTP stand-in received it. It is kept in memory until the stand-in stops.">
+    <Card title="Messages" description="Mail to you, and (for admins) this department's receipts and run notices, as the local SMTP stand-in received it. It is kept in memory until the stand-in stops.">
       {outbox.data.messages.length === 0 ? (
-        <EmptyState title="No mail yet">Invitations, receipts, reset links and run notices appear here.</EmptyState>
+        <EmptyState title="No mail yet">Your reset links and run notices, and for admins the department's receipts and run notices, appear here.</EmptyState>
       ) : (
         <ul className="flex flex-col gap-4">
           {outbox.data.messages.map((m) => (

@@ -24,7 +24,7 @@ function HealthReport({ report }: { report: HealthResponse }) {
               {database.latencyMs !== undefined && <span className="text-foam-400"> · {Math.round(database.latencyMs)} ms</span>}
             </>
           ) : (
-            <span className="text-coral-300">Not reachable{database.error && `: ${database.error}`}</span>
+            <span className="text-coral-300">Not reachable</span>
           ),
         },
         { term: 'Version', description: <span className="font-mono">{report.version}</span> },

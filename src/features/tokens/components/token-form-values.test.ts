@@ -3,8 +3,8 @@ import { tokenFormSchema } from './token-form-values.ts';
 
 describe('tokenFormSchema', () => {
   it('reads the days as a number and leaves an empty expiry out', () => {
-    expect(tokenFormSchema.parse({ name: ' laptop ', expiresInDays: '30' })).toEqual({ name: 'laptop', expiresInDays: 30 });
-    expect(tokenFormSchema.parse({ name: 'laptop', expiresInDays: '' })).toEqual({ name: 'laptop' });
+    expect(tokenFormSchema.parse({ name: ' laptop ', expiresInDays: '30' })).toEqual({ name: 'laptop', scope: 'read', expiresInDays: 30 });
+    expect(tokenFormSchema.parse({ name: 'laptop', scope: 'run', expiresInDays: '' })).toEqual({ name: 'laptop', scope: 'run' });
   });
 
   it('names the allowed range of the expiry, whatever is wrong with it', () => {

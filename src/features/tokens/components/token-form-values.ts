@@ -11,7 +11,7 @@ const EXPIRY_RULE = 'the expiry must be a whole number of days from 1 to 3650, o
 export const tokenFormSchema = z.unknown().transform((entries, ctx): CreateTokenBody => {
   const values = (entries ?? {}) as Record<string, unknown>;
   const days = typeof values.expiresInDays === 'string' ? parseNumberText(values.expiresInDays) : null;
-  const body = { name: values.name, ...(days === null ? {} : { expiresInDays: days }) };
+  const body = { name: values.name, ...(values.scope ? { scope: values.scope } : {}), ...(days === null ? {} : { expiresInDays: days }) };
   const parsed = createTokenBodySchema.safeParse(body);
   if (parsed.success) return parsed.data;
   for (const issue of parsed.error.issues) {

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { TOKEN_SCOPE_TEXT } from '../../../../shared/contracts/tokens.ts';
 import type { TokenSummary } from '../../../../shared/contracts/tokens.ts';
 import { Alert } from '../../../components/ui/alert.tsx';
 import { Badge } from '../../../components/ui/badge.tsx';
@@ -26,6 +27,7 @@ export function TokensPanel({ departmentId, userId, departmentName }: { departme
 
   const columns: TableColumn<TokenSummary>[] = [
     { id: 'name', header: 'Name', rowHeader: true, sortValue: (t) => t.name, cell: (t) => t.name },
+    { id: 'scope', header: 'Scope', sortValue: (t) => t.scope, cell: (t) => TOKEN_SCOPE_TEXT[t.scope].label },
     { id: 'prefix', header: 'Starts with', cell: (t) => <code className="font-mono text-foam-300">{maskedPrefix(t.prefix)}</code> },
     {
       id: 'state',

@@ -1,0 +1,1 @@
+ALTER TABLE `api_tokens` ADD `scope` enum('read','run') DEFAULT 'read' NOT NULL;
