@@ -8,7 +8,8 @@ import type { Piscina } from 'piscina';
 import type { Config } from './config.ts';
 import type { Database } from './db/client.ts';
 import { createEnginePool } from './engine-pool/engine-pool.ts';
-import { runScenario } from './engine-pool/run-scenario.ts';
+import type { ChunkExecutor } from './engine-pool/chunk-executor.ts';
+import { createPoolExecutor } from './engine-pool/pool-executor.ts';
 import { RouteRegistry } from './lib/http.ts';
 import { apiNotFound, errorHandler } from './middleware/error-handler.ts';
 import { originCheck } from './middleware/origin-check.ts';
@@ -23,7 +24,7 @@ import { occurrenceTablesRoutes } from './modules/occurrence-tables/occurrence-t
 import { createOccurrenceTablesService } from './modules/occurrence-tables/occurrence-tables.service.ts';
 import { openApiRoutes } from './modules/openapi/openapi.routes.ts';
 import { RunEvents } from './modules/runs/run-events.ts';
-import { createRunScheduler, type RunEngine, type RunSettledHook } from './modules/runs/run-scheduler.ts';
+import { createRunScheduler, DEFAULT_SCHEDULER_TIMING, type RunSettledHook, type SchedulerOptions } from './modules/runs/run-scheduler.ts';
 import { runsRoutes } from './modules/runs/runs.routes.ts';
 import { createRunsService, type RunBilling } from './modules/runs/runs.service.ts';
 import { samplesRoutes } from './modules/samples/samples.routes.ts';
@@ -52,8 +53,10 @@ export interface AppDeps {
   logger: Logger;
   /** The engine's worker pool (default: a new one of config.WORKER_THREADS threads). */
   pool?: Piscina;
-  /** How runs execute (default: runScenario on the pool). Tests inject faults here. */
-  engine?: RunEngine;
+  /** Where runs' chunks are computed (default: the pool, or BullMQ workers when REDIS_URL is set). Tests inject faults here. */
+  executor?: ChunkExecutor;
+  /** Scheduler timing (poll interval, leases, save back-off); tests shorten it. */
+  schedulerTiming?: Partial<Pick<SchedulerOptions, 'pollIntervalMs' | 'leaseMs' | 'saveRetry'>>;
   /** How runs are charged (default: the credit ledger of server/modules/billing). */
   billing?: RunBilling;
   /** Called after billing and e-mail notices when a run reaches a final state. */
@@ -75,17 +78,15 @@ export function createApp(deps: AppDeps): TidefieldApp {
   const { config, database, logger } = deps;
   const { db } = database;
   const registry = new RouteRegistry();
-  const ownPool = !deps.pool && !deps.engine;
-  const pool = deps.pool ?? (deps.engine ? undefined : createEnginePool({ workers: config.WORKER_THREADS }));
+  const ownPool = !deps.pool && !deps.executor;
+  const pool = deps.pool ?? (deps.executor ? undefined : createEnginePool({ workers: config.WORKER_THREADS }));
   const resolveGrid = createGridResolver(db, pool);
-  const engine: RunEngine =
-    deps.engine ??
-    (async (scenario, options) => runScenario(scenario, { ...options, pool, engulfmentGrid: await resolveGrid(scenario) }));
+  const executor: ChunkExecutor = deps.executor ?? createPoolExecutor({ pool: pool!, resolveGrid });
 
   const events = new RunEvents();
   const scheduler = createRunScheduler({
     db,
-    engine,
+    executor,
     events,
     logger,
     onSettled: async (run, outcome) => {
@@ -98,7 +99,8 @@ export function createApp(deps: AppDeps): TidefieldApp {
       maxConcurrentRuns: config.RUNS_MAX_CONCURRENT,
       maxRunsPerDepartment: config.RUNS_PER_DEPARTMENT,
       checkpointIntervalMs: config.CHECKPOINT_INTERVAL_MS,
-      pollIntervalMs: 2000,
+      ...DEFAULT_SCHEDULER_TIMING,
+      ...deps.schedulerTiming,
     },
   });
   const sessions = createSessionStore(db, config.SESSION_DAYS);
@@ -173,6 +175,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
     billing,
     async close() {
       await scheduler.stop();
+      if (!deps.executor) await executor.close();
       if (ownPool && pool) await pool.destroy();
       mailer.close();
     },
