@@ -10,6 +10,8 @@ import type { Database } from './db/client.ts';
 import { createEnginePool } from './engine-pool/engine-pool.ts';
 import type { ChunkExecutor } from './engine-pool/chunk-executor.ts';
 import { createPoolExecutor } from './engine-pool/pool-executor.ts';
+import { createRedisExecutor } from './scale-out/redis-executor.ts';
+import { workersRoutes } from './modules/workers/workers.routes.ts';
 import { RouteRegistry } from './lib/http.ts';
 import { apiNotFound, errorHandler } from './middleware/error-handler.ts';
 import { originCheck } from './middleware/origin-check.ts';
@@ -78,10 +80,15 @@ export function createApp(deps: AppDeps): TidefieldApp {
   const { config, database, logger } = deps;
   const { db } = database;
   const registry = new RouteRegistry();
-  const ownPool = !deps.pool && !deps.executor;
-  const pool = deps.pool ?? (deps.executor ? undefined : createEnginePool({ workers: config.WORKER_THREADS }));
-  const resolveGrid = createGridResolver(db, pool);
-  const executor: ChunkExecutor = deps.executor ?? createPoolExecutor({ pool: pool!, resolveGrid });
+  // Where chunks are computed: an injected executor, BullMQ workers (REDIS_URL), or the app's own pool.
+  const scaleOut = !deps.executor && config.REDIS_URL !== undefined;
+  const ownPool = !deps.pool && !deps.executor && !scaleOut;
+  const pool = deps.pool ?? (ownPool ? createEnginePool({ workers: config.WORKER_THREADS }) : undefined);
+  const executor: ChunkExecutor =
+    deps.executor ??
+    (scaleOut
+      ? createRedisExecutor({ url: config.REDIS_URL!, queue: config.REDIS_QUEUE, batchChunks: config.REDIS_BATCH_CHUNKS, jobsPerRun: config.REDIS_JOBS_PER_RUN, logger })
+      : createPoolExecutor({ pool: pool!, resolveGrid: createGridResolver(db, pool) }));
 
   const events = new RunEvents();
   const scheduler = createRunScheduler({
@@ -157,6 +164,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   app.use('/api/invitations', invitationsRoutes(registry, invitations, sessions));
   app.use('/api/billing', billingRoutes(registry, billing));
   app.use('/api', outboxRoutes(registry, config, db));
+  app.use('/api', workersRoutes(registry, executor));
   app.use('/api', openApiRoutes(registry));
   app.use('/api', apiNotFound);
 

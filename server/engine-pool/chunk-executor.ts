@@ -1,5 +1,6 @@
 import type { Scenario } from '../../shared/contracts/scenario.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
+import type { WorkerStatus } from '../../shared/contracts/workers.ts';
 
 /** A finished batch: the chunks it covers and their summed tally (the engine's own tally type). */
 export interface BatchDone {
@@ -30,6 +31,8 @@ export interface ChunkExecutor {
   cancel?(runId: string): Promise<void>;
   /** Called when a run ended (any outcome): frees what the executor kept for it. */
   forget?(runId: string): Promise<void>;
+  /** The workers computing for this executor (GET /api/workers). */
+  workers?(): Promise<WorkerStatus[]>;
   close(): Promise<void>;
 }
 

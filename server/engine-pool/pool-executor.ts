@@ -1,3 +1,4 @@
+import { hostname } from 'node:os';
 import type { Piscina } from 'piscina';
 import type { Scenario } from '../../shared/contracts/scenario.ts';
 import type { EngulfmentGrid } from '../../shared/engine/kernel/engulfment.ts';
@@ -32,15 +33,23 @@ export function poolThreads(pool: Piscina): number {
 export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor {
   const { pool } = options;
   const retries = options.retries ?? BATCH_RETRIES;
+  const startedAt = new Date().toISOString();
+  let jobsDone = 0;
+  let activeJobs = 0;
 
   async function runBatch(task: ChunkBatchTask, signal: AbortSignal): Promise<ChunkTally> {
     for (let attempt = 0; ; attempt++) {
+      activeJobs++;
       try {
-        return (await pool.run(task, { signal })) as ChunkTally;
+        const tally = (await pool.run(task, { signal })) as ChunkTally;
+        jobsDone++;
+        return tally;
       } catch (error) {
         if (signal.aborted) throw new RunAbortedError(signal.reason);
         if (attempt >= retries) throw new BatchFailedError(task.chunks, attempt + 1, error);
         options.onRetry?.({ chunks: task.chunks, attempt: attempt + 1, error });
+      } finally {
+        activeJobs--;
       }
     }
   }
@@ -80,6 +89,10 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
   return {
     kind: 'embedded',
     execute,
+    async workers() {
+      const now = new Date().toISOString();
+      return [{ id: 'embedded', host: hostname(), pid: process.pid, threads: poolThreads(pool), jobsDone, activeJobs, startedAt, lastSeenAt: now }];
+    },
     async close() {},
   };
 }

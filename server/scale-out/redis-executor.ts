@@ -43,14 +43,13 @@ function abortedPromise(signal: AbortSignal): { promise: Promise<never>; dispose
  * fails is retried twice by BullMQ (three attempts), then fails the run. Cancel removes the run's
  * waiting jobs and tells the workers to abort the ones they are computing.
  */
-export function createRedisExecutor(options: RedisExecutorOptions): ChunkExecutor & {
-  queue: Queue<ChunkJobData, ChunkJobResult>;
-  workers(): Promise<WorkerHeartbeat[]>;
-} {
+export function createRedisExecutor(options: RedisExecutorOptions): ChunkExecutor & { queue: Queue<ChunkJobData, ChunkJobResult> } {
   const connection = redisConnection(options.url);
   const eventsConnection = redisConnection(options.url);
   const queue = new Queue<ChunkJobData, ChunkJobResult>(options.queue, { connection });
   const queueEvents = new QueueEvents(options.queue, { connection: eventsConnection });
+  // Each job being waited for adds a listener to the queue's 'closing' event (BullMQ's waitUntilFinished).
+  queue.setMaxListeners(0);
   queue.on('error', (error) => options.logger.error({ err: error }, 'BullMQ queue error'));
   queueEvents.on('error', (error) => options.logger.error({ err: error }, 'BullMQ queue events error'));
   /** Job ids this app queued, per run (removed when the run ends). */
