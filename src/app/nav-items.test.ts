@@ -26,7 +26,7 @@ describe('navigation by role', () => {
   });
 
   it('adds Members and Credits for admins', () => {
-    expect(labels('admin')).toEqual([...EVERYONE, 'Members', 'Credits', 'Outbox']);
+    expect(labels('admin')).toEqual([...EVERYONE, 'Members', 'Credits', 'Outbox', 'Workers']);
   });
 
   it('links every app page exactly once, and nothing else', () => {
