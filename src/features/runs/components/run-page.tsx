@@ -21,6 +21,7 @@ import { RunDetails } from './run-details.tsx';
 import { LogFieldChart, WdMassChart } from './run-distribution-charts.tsx';
 import { RunExports } from './run-exports.tsx';
 import { RunHeadline } from './run-headline.tsx';
+import { ResumeRunButton } from './resume-run-button.tsx';
 import { RunProgressCard } from './run-progress-card.tsx';
 import { RunSplitCharts } from './run-split-charts.tsx';
 import { RunStatusBadge } from './run-status-badge.tsx';
@@ -119,7 +120,9 @@ function RunBody({
               </>
             }
           />
-        ) : (
+        ) : null}
+        {run.status === 'failed' && canCancel ? <ResumeRunButton departmentId={departmentId} run={run} /> : null}
+        {run.status === 'failed' ? null : (
           <Alert
             tone="info"
             message={
