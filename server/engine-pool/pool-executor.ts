@@ -65,6 +65,11 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
     const local = new AbortController();
     const stop = () => local.abort(signal.reason);
     signal.addEventListener('abort', stop, { once: true });
+    // A thread that cannot start makes the pool emit 'error' instead of rejecting a task.
+    let onPoolError: (error: unknown) => void = () => {};
+    const poolFailed = new Promise<never>((_, reject) => (onPoolError = reject));
+    poolFailed.catch(() => {});
+    pool.on('error', onPoolError);
     const inFlight = new Map<number, Promise<BatchDone>>();
     let next = 0;
     try {
@@ -75,13 +80,14 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
           done.catch(() => {}); // observed by the race below; a late rejection after a failure is expected
           inFlight.set(batch, done);
         }
-        const finished = await Promise.race(inFlight.values());
+        const finished = await Promise.race([poolFailed, ...inFlight.values()]);
         inFlight.delete(finished.batch);
         if (signal.aborted) throw new RunAbortedError(signal.reason);
         yield finished;
       }
     } finally {
       signal.removeEventListener('abort', stop);
+      pool.off('error', onPoolError);
       if (inFlight.size > 0) local.abort(new RunAbortedError());
     }
   }
