@@ -90,7 +90,8 @@ function shortSocketPath(stateDir: string): string {
   return path.join(os.tmpdir(), `tidefield-${tag}.sock`);
 }
 
-function readPid(pidFile: string): number | undefined {
+/** The pid in a pid file, if that process is alive. */
+export function readPid(pidFile: string): number | undefined {
   if (!existsSync(pidFile)) return undefined;
   const pid = Number(readFileSync(pidFile, 'utf8').trim());
   if (!Number.isInteger(pid) || pid <= 0) return undefined;
@@ -232,11 +233,8 @@ export async function ensureMariaDb(options: MariaDbOptions): Promise<DbConnecti
   return { host: '127.0.0.1', port: options.port, user: options.appUser, password, database: options.database };
 }
 
-/** Stops the private server of this state folder (SIGTERM, then waits for it to exit). */
-export async function stopMariaDb(stateDir: string, log: (line: string) => void = console.log): Promise<boolean> {
-  const p = paths(stateDir);
-  const pid = readPid(p.pidFile);
-  if (!pid) return false;
+/** Ends a server process: SIGTERM, up to 30 s to exit, then SIGKILL. */
+export async function stopProcess(pid: number, name: string, log: (line: string) => void): Promise<void> {
   process.kill(pid, 'SIGTERM');
   const deadline = Date.now() + 30_000;
   while (Date.now() < deadline) {
@@ -244,11 +242,18 @@ export async function stopMariaDb(stateDir: string, log: (line: string) => void 
       process.kill(pid, 0);
       await new Promise((r) => setTimeout(r, 100));
     } catch {
-      log(`Stopped private MariaDB (pid ${pid}).`);
-      return true;
+      log(`Stopped ${name} (pid ${pid}).`);
+      return;
     }
   }
   process.kill(pid, 'SIGKILL');
+}
+
+/** Stops the private server of this state folder (SIGTERM, then waits for it to exit). */
+export async function stopMariaDb(stateDir: string, log: (line: string) => void = console.log): Promise<boolean> {
+  const pid = readPid(paths(stateDir).pidFile);
+  if (!pid) return false;
+  await stopProcess(pid, 'private MariaDB', log);
   return true;
 }
 

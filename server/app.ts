@@ -8,7 +8,10 @@ import type { Piscina } from 'piscina';
 import type { Config } from './config.ts';
 import type { Database } from './db/client.ts';
 import { createEnginePool } from './engine-pool/engine-pool.ts';
-import { runScenario } from './engine-pool/run-scenario.ts';
+import type { ChunkExecutor } from './engine-pool/chunk-executor.ts';
+import { createPoolExecutor } from './engine-pool/pool-executor.ts';
+import { createRedisExecutor } from './scale-out/redis-executor.ts';
+import { workersRoutes } from './modules/workers/workers.routes.ts';
 import { RouteRegistry } from './lib/http.ts';
 import { serializeError } from './logger.ts';
 import { apiNotFound, errorHandler } from './middleware/error-handler.ts';
@@ -25,7 +28,7 @@ import { occurrenceTablesRoutes } from './modules/occurrence-tables/occurrence-t
 import { createOccurrenceTablesService } from './modules/occurrence-tables/occurrence-tables.service.ts';
 import { openApiRoutes } from './modules/openapi/openapi.routes.ts';
 import { RunEvents } from './modules/runs/run-events.ts';
-import { createRunScheduler, type RunEngine, type RunSettledHook } from './modules/runs/run-scheduler.ts';
+import { createRunScheduler, DEFAULT_SCHEDULER_TIMING, type RunSettledHook, type SchedulerOptions } from './modules/runs/run-scheduler.ts';
 import { runsRoutes } from './modules/runs/runs.routes.ts';
 import { createRunsService, type RunBilling } from './modules/runs/runs.service.ts';
 import { samplesRoutes } from './modules/samples/samples.routes.ts';
@@ -60,8 +63,10 @@ export interface AppDeps {
   logger: Logger;
   /** The engine's worker pool (default: a new one of config.WORKER_THREADS threads). */
   pool?: Piscina;
-  /** How runs execute (default: runScenario on the pool). Tests inject faults here. */
-  engine?: RunEngine;
+  /** Where runs' chunks are computed (default: the pool, or BullMQ workers when REDIS_URL is set). Tests inject faults here. */
+  executor?: ChunkExecutor;
+  /** Scheduler timing (poll interval, leases, save back-off); tests shorten it. */
+  schedulerTiming?: Partial<Pick<SchedulerOptions, 'pollIntervalMs' | 'leaseMs' | 'saveRetry'>>;
   /** How runs are charged (default: the credit ledger of server/modules/billing). */
   billing?: RunBilling;
   /** Called after billing and e-mail notices when a run reaches a final state. */
@@ -83,17 +88,20 @@ export function createApp(deps: AppDeps): TidefieldApp {
   const { config, database, logger } = deps;
   const { db } = database;
   const registry = new RouteRegistry();
-  const ownPool = !deps.pool && !deps.engine;
-  const pool = deps.pool ?? (deps.engine ? undefined : createEnginePool({ workers: config.WORKER_THREADS }));
-  const resolveGrid = createGridResolver(db, pool);
-  const engine: RunEngine =
-    deps.engine ??
-    (async (scenario, options) => runScenario(scenario, { ...options, pool, engulfmentGrid: await resolveGrid(scenario) }));
+  // Where chunks are computed: an injected executor, BullMQ workers (REDIS_URL), or the app's own pool.
+  const scaleOut = !deps.executor && config.REDIS_URL !== undefined;
+  const ownPool = !deps.pool && !deps.executor && !scaleOut;
+  const pool = deps.pool ?? (ownPool ? createEnginePool({ workers: config.WORKER_THREADS }) : undefined);
+  const executor: ChunkExecutor =
+    deps.executor ??
+    (scaleOut
+      ? createRedisExecutor({ url: config.REDIS_URL!, queue: config.REDIS_QUEUE, batchChunks: config.REDIS_BATCH_CHUNKS, jobsPerRun: config.REDIS_JOBS_PER_RUN, logger })
+      : createPoolExecutor({ pool: pool!, resolveGrid: createGridResolver(db, pool) }));
 
   const events = new RunEvents();
   const scheduler = createRunScheduler({
     db,
-    engine,
+    executor,
     events,
     logger,
     onSettled: async (run, outcome) => {
@@ -106,7 +114,8 @@ export function createApp(deps: AppDeps): TidefieldApp {
       maxConcurrentRuns: config.RUNS_MAX_CONCURRENT,
       maxRunsPerDepartment: config.RUNS_PER_DEPARTMENT,
       checkpointIntervalMs: config.CHECKPOINT_INTERVAL_MS,
-      pollIntervalMs: 2000,
+      ...DEFAULT_SCHEDULER_TIMING,
+      ...deps.schedulerTiming,
     },
   });
   const sessions = createSessionStore(db, config.SESSION_DAYS, config.PUBLIC_URL);
@@ -171,6 +180,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   app.use('/api/invitations', invitationsRoutes(registry, config, invitations, sessions));
   app.use('/api/billing', billingRoutes(registry, billing));
   app.use('/api', outboxRoutes(registry, config, logger));
+  app.use('/api', workersRoutes(registry, executor));
   app.use('/api', openApiRoutes(registry));
   app.use('/api', apiNotFound);
 
@@ -189,6 +199,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
     billing,
     async close() {
       await scheduler.stop();
+      if (!deps.executor) await executor.close();
       if (ownPool && pool) await pool.destroy();
       mailer.close();
     },

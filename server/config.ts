@@ -55,6 +55,17 @@ export const configSchema = z.object({
   RUNS_PER_DEPARTMENT: z.coerce.number().int().min(1).max(64).default(2),
   /** Shortest time between two checkpoints of a run's running totals. */
   CHECKPOINT_INTERVAL_MS: z.coerce.number().int().min(10).max(600_000).default(1000),
+  /**
+   * Scale-out: with a Redis URL, runs' chunks become BullMQ jobs for `npm run worker` processes
+   * (redis://[:password@]host:port, or rediss:// for TLS); absent, the app's own worker threads compute.
+   */
+  REDIS_URL: z.string().regex(/^rediss?:\/\/.+/, { error: 'REDIS_URL must start with redis:// or rediss:// (TLS)' }).optional(),
+  /** The BullMQ queue (workers' TIDEFIELD_QUEUE must match); several deployments may share one Redis. */
+  REDIS_QUEUE: z.string().regex(/^[A-Za-z0-9_.-]+$/).default('tidefield-chunks'),
+  /** Chunks (of 65,536 systems) per BullMQ job. */
+  REDIS_BATCH_CHUNKS: z.coerce.number().int().min(1).max(1024).default(8),
+  /** Jobs of one run queued or running in Redis at once. */
+  REDIS_JOBS_PER_RUN: z.coerce.number().int().min(1).max(10_000).default(64),
 
   // Payments through the stripe SDK. The defaults point at the local stand-in (server/fakes),
   // which `npm start` runs beside the app; the hosted service is host api.stripe.com, port 443,

@@ -7,25 +7,18 @@ import { addTallyInto, type ChunkTally } from '../../shared/engine/kernel/tally.
 export interface ChunkBatchTask {
   prepared: PreparedScenario;
   chunks: number[];
-  /** true: return each chunk's tally (the caller persists them); false: return the batch's sum only. */
-  perChunk: boolean;
 }
 
-export interface ChunkBatchResult {
-  /** The chunks summed into `tally`: one chunk when perChunk, else the whole batch. */
-  chunks: number[];
-  tally: ChunkTally;
-}
-
-/** Piscina task entry: runs the batch's chunks in order; one result per chunk, or one for the batch. */
-export default function runChunkBatch(task: ChunkBatchTask): ChunkBatchResult[] {
-  if (task.perChunk) return task.chunks.map((chunkIndex) => ({ chunks: [chunkIndex], tally: runChunk(task.prepared, chunkIndex) }));
-  let sum: ChunkTally | null = null;
-  for (const chunkIndex of task.chunks) {
-    const tally = runChunk(task.prepared, chunkIndex);
-    sum = sum === null ? tally : addTallyInto(sum, tally);
-  }
-  return sum === null ? [] : [{ chunks: task.chunks, tally: sum }];
+/**
+ * Piscina task entry: runs the batch's chunks in order and returns their summed tally (the
+ * engine's own tally and merge, so this code never cares which bins exist).
+ */
+export default function runChunkBatch(task: ChunkBatchTask): ChunkTally {
+  if (task.chunks.length === 0) throw new Error('a chunk batch needs at least one chunk');
+  const [first, ...rest] = task.chunks;
+  const sum = runChunk(task.prepared, first);
+  for (const chunkIndex of rest) addTallyInto(sum, runChunk(task.prepared, chunkIndex));
+  return sum;
 }
 
 /**

@@ -36,7 +36,12 @@ describe('runScenario on a piscina pool', () => {
     const s = scenario();
     const seen = new Map<number, ChunkTally>();
     const progress: number[] = [];
-    const full = await runScenario(s, { pool: shared, onChunk: (i, t) => seen.set(i, t), onProgress: (p) => progress.push(p.chunksDone) });
+    const full = await runScenario(s, {
+      pool: shared,
+      chunksPerTask: 1,
+      onBatch: ({ chunks, tally }) => seen.set(chunks[0], tally),
+      onProgress: (p) => progress.push(p.chunksDone),
+    });
     expect([...seen.keys()].sort((a, b) => a - b)).toEqual([0, 1, 2, 3, 4, 5, 6]);
     expect(progress[progress.length - 1]).toBe(7);
     const stored = JSON.parse(JSON.stringify([...seen].filter(([i]) => i % 2 === 0))) as [number, ChunkTally][];
@@ -64,7 +69,7 @@ describe('runScenario on a piscina pool', () => {
       pool: shared,
       chunksPerTask: 1,
       signal: controller.signal,
-      onChunk: () => {
+      onBatch: () => {
         chunks++;
         if (chunks === 1) controller.abort();
       },

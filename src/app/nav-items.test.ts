@@ -30,7 +30,7 @@ describe('navigation by role', () => {
   });
 
   it('adds Members and Credits for admins', () => {
-    expect(labels('admin')).toEqual([...EVERYONE, 'Members', 'Credits']);
+    expect(labels('admin')).toEqual([...EVERYONE, 'Members', 'Credits', 'Workers']);
   });
 
   it('links every app page exactly once, and nothing else', () => {

@@ -101,6 +101,7 @@ export const NAV_GROUPS: readonly NavGroup[] = [
     items: [
       { key: 'members', label: 'Members', summary: 'Who belongs to the department, with which role.', minimumRole: 'admin' },
       { key: 'credits', label: 'Credits', summary: 'Compute credit for heavy runs: buy it, see usage and receipts.', minimumRole: 'admin' },
+      { key: 'workers', label: 'Workers', summary: 'The machines and threads computing runs, and the jobs each has done.', minimumRole: 'admin' },
     ],
   },
 ];

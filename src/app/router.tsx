@@ -59,6 +59,7 @@ export const routes: RouteObject[] = [
                   { path: paths.members.path, lazy: () => import('./routes/members.tsx') },
                   { path: paths.credits.path, lazy: () => import('./routes/credits.tsx') },
                   { path: paths.outbox.path, lazy: () => import('./routes/outbox.tsx') },
+                  { path: paths.workers.path, lazy: () => import('./routes/workers.tsx') },
                 ],
               },
               { path: '*', lazy: () => import('./routes/not-found.tsx') },

@@ -74,6 +74,7 @@ export const paths = {
   credits: page('/credits'),
   notifications: page('/notifications'),
   outbox: page('/outbox'),
+  workers: page('/workers'),
 } as const;
 
 /** Pages outside the signed-in app (no navigation entry). */

@@ -3,6 +3,7 @@
  * MariaDB, stops it under a running app, and starts it again.
  */
 import { Writable } from 'node:stream';
+import type { ChunkExecutor } from '../../server/engine-pool/chunk-executor.ts';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp, type TidefieldApp } from '../../server/app.ts';
@@ -28,8 +29,16 @@ beforeAll(async () => {
       done();
     },
   });
-  // Runs never start here, so no worker pool: the engine refuses.
-  tidefield = createApp({ config, database, logger: createLogger(config, sink), engine: async () => Promise.reject(new Error('no runs in this test')) });
+  // Runs never start here, so no worker pool: the executor refuses.
+  const executor: ChunkExecutor = {
+    kind: 'embedded',
+    // eslint-disable-next-line require-yield
+    async *execute() {
+      throw new Error('no runs in this test');
+    },
+    close: async () => {},
+  };
+  tidefield = createApp({ config, database, logger: createLogger(config, sink), executor });
 }, 180_000);
 
 afterAll(async () => {

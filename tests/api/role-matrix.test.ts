@@ -53,6 +53,8 @@ export const EXPECTED_ACCESS: Record<string, Minimum> = {
   'GET /api/runs/:id': 'observer',
   'GET /api/runs/:id/events': 'observer',
   'POST /api/runs/:id/cancel': 'observer',
+  'POST /api/runs/:id/resume': 'observer',
+  'GET /api/workers': 'admin',
   'DELETE /api/runs/:id': 'observer',
   'GET /api/runs/:id/result': 'observer',
   'GET /api/runs/:id/comparison': 'observer',

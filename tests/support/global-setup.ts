@@ -1,6 +1,6 @@
 /**
- * Vitest global setup for the API and browser suites: a throwaway MariaDB server on a free
- * port in a temporary folder, removed afterwards. Each test file creates its own database on
+ * Vitest global setup for the API and browser suites: a throwaway MariaDB server and a private
+ * Redis on free ports in a temporary folder, removed afterwards. Each test file creates its own database on
  * it (see test-app.ts), so files can run in parallel without seeing each other's rows.
  */
 import { mkdtempSync, rmSync } from 'node:fs';
@@ -8,10 +8,13 @@ import os from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { ensureMariaDb, findFreePort, stopMariaDb, type DbConnection } from '../../scripts/mariadb.ts';
+import { ensureRedis, stopRedis } from '../../scripts/redis.ts';
 
 declare module 'vitest' {
   export interface ProvidedContext {
     testDb: DbConnection;
+    /** A private Redis (no persistence) for the scale-out tests; each test file uses its own queue name. */
+    testRedisUrl: string;
   }
 }
 
@@ -27,7 +30,10 @@ export default async function setup(project: TestProject) {
     log: () => {},
   });
   project.provide('testDb', conn);
+  const redisUrl = await ensureRedis({ stateDir, port: await findFreePort(), log: () => {} });
+  project.provide('testRedisUrl', redisUrl);
   return async () => {
+    await stopRedis(stateDir, () => {});
     await stopMariaDb(stateDir, () => {});
     rmSync(stateDir, { recursive: true, force: true });
   };

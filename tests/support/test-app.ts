@@ -11,6 +11,7 @@ import { testConfig, type Config } from '../../server/config.ts';
 import { connectDatabase, migrateDatabase, type Database } from '../../server/db/client.ts';
 import { createLogger } from '../../server/logger.ts';
 import { startFakesOnFreePorts, type FakesOnFreePorts } from '../../server/fakes/local-fakes.ts';
+import type { DbConnection } from '../../scripts/mariadb.ts';
 
 export interface TestContext {
   app: Express;
@@ -44,8 +45,7 @@ async function releaseFakes(): Promise<void> {
 }
 
 /** A fresh, migrated database on the throwaway server and an app wired to it. */
-export async function createTestDatabase(): Promise<{ database: Database; config: Config; drop(): Promise<void> }> {
-  const conn = inject('testDb');
+export async function createTestDatabase(conn: DbConnection = inject('testDb')): Promise<{ database: Database; config: Config; drop(): Promise<void> }> {
   const name = `tf_${randomBytes(6).toString('hex')}`;
   const admin = await mysql.createConnection({ host: conn.host, port: conn.port, user: conn.user, password: conn.password });
   await admin.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
@@ -65,8 +65,13 @@ export async function createTestDatabase(): Promise<{ database: Database; config
   };
 }
 
-export async function createTestApp(overrides: Partial<Config> = {}, deps: Partial<Omit<AppDeps, 'config' | 'database' | 'logger'>> = {}): Promise<TestContext> {
-  const { database, config: base, drop } = await createTestDatabase();
+export async function createTestApp(
+  overrides: Partial<Config> = {},
+  deps: Partial<Omit<AppDeps, 'config' | 'database' | 'logger'>> = {},
+  /** A MariaDB server of the test file's own (default: the suite's shared throwaway server). */
+  dbServer: DbConnection = inject('testDb'),
+): Promise<TestContext> {
+  const { database, config: base, drop } = await createTestDatabase(dbServer);
   const stands = await acquireFakes();
   // The app also listens on a real port: webhooks and e-mailed links need an address.
   const server = http.createServer();

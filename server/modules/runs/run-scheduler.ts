@@ -1,10 +1,12 @@
 import type { Logger } from 'pino';
-import type { ScenarioResult } from '../../../shared/contracts/result.ts';
 import type { RunProgressEvent, RunStatus } from '../../../shared/contracts/runs.ts';
-import { parseScenario, type Scenario } from '../../../shared/contracts/scenario.ts';
+import { parseScenario } from '../../../shared/contracts/scenario.ts';
+import { addTallyInto, emptyTallyFor, type ChunkTally } from '../../../shared/engine/kernel/tally.ts';
+import { buildResult } from '../../../shared/engine/result/build-result.ts';
+import { RunAbortedError, type ChunkExecutor } from '../../engine-pool/chunk-executor.ts';
 import type { Db } from '../../db/client.ts';
-import { addTally, type ChunkTally } from '../../../shared/engine/kernel/tally.ts';
 import { ChunkSet } from './chunk-set.ts';
+import { retryWhileDatabaseDown } from './database-retry.ts';
 import { resultBinRows } from './result-bins.ts';
 import type { RunEvents } from './run-events.ts';
 import {
@@ -13,41 +15,42 @@ import {
   loadCheckpoint,
   loadRun,
   queuedRuns,
-  requeueInterrupted,
+  releaseLeases,
+  renewLeases,
+  requeueOrphans,
   saveCheckpoint,
   saveResult,
   updateRun,
   type RunRow,
 } from './runs.repository.ts';
 
-/** Runs a scenario on the worker pool (server/engine-pool's runScenario, bound to the server's pool). */
-export type RunEngine = (
-  scenario: Scenario,
-  options: {
-    signal: AbortSignal;
-    skipChunks: Set<number>;
-    initialTally?: ChunkTally;
-    onChunk: (chunkIndex: number, tally: ChunkTally) => void;
-  },
-) => Promise<ScenarioResult>;
-
 export interface SchedulerOptions {
-  /** Runs executing at once over all departments (they share the pool's threads). */
+  /** Runs executing at once over all departments (they share the pool's threads or the workers). */
   maxConcurrentRuns: number;
   /** Runs one department may have executing at once. */
   maxRunsPerDepartment: number;
   /** Shortest interval between checkpoint writes of one run. */
   checkpointIntervalMs: number;
-  /** How often the queue is looked at even when nothing woke the scheduler. */
+  /** How often the queue is looked at (and leases renewed, orphans re-queued) even when nothing woke the scheduler. */
   pollIntervalMs: number;
+  /** How long a claim on a running run lasts without renewal; a lapsed one marks the run orphaned. */
+  leaseMs: number;
+  /** Back-off of the final save and settlement while the database is down. */
+  saveRetry: { firstDelayMs: number; maxDelayMs: number };
 }
+
+export const DEFAULT_SCHEDULER_TIMING = {
+  pollIntervalMs: 2000,
+  leaseMs: 30_000,
+  saveRetry: { firstDelayMs: 200, maxDelayMs: 10_000 },
+} as const;
 
 /** Told when a run reaches a final state (billing settles or refunds, e-mail notices go out). */
 export type RunSettledHook = (run: RunRow, outcome: 'succeeded' | 'failed' | 'cancelled') => Promise<void>;
 
 interface ActiveRun {
   controller: AbortController;
-  /** Why the run is being aborted: a user's cancel, or the server stopping (then it resumes on the next boot). */
+  /** Why the run is being aborted: a user's cancel, or the server stopping (then it resumes on the next start). */
   reason: 'cancel' | 'stop' | null;
   done: Promise<void>;
   chunkCount: number;
@@ -59,21 +62,25 @@ interface ActiveRun {
 const PUBLISH_INTERVAL_MS = 250;
 
 /**
- * The run queue. Runs wait in MariaDB (status queued); the scheduler starts them on the worker
- * pool with fair share between departments (the department with the fewest executing runs goes
- * first, oldest run first within it) and a per-department limit. Every finished chunk is added
- * to running totals that are checkpointed, so a run interrupted by a stopping server resumes on
- * the next start from its last checkpoint and ends with exactly the counts of an uninterrupted run.
+ * The run queue. Runs wait in MariaDB (status queued); the scheduler starts them on the chunk
+ * executor (the app's own pool, or BullMQ workers) with fair share between departments (the
+ * department with the fewest executing runs goes first, oldest run first within it) and a
+ * per-department limit. The scheduler owns each run's one running total: every finished batch is
+ * added to it once and it is checkpointed, so a run interrupted by a stopping server, a crash or
+ * a failed batch continues from its checkpoint and ends with exactly the counts of an
+ * uninterrupted run. Executing runs hold a lease that the scheduler renews; a watchdog re-queues
+ * running runs whose lease lapsed (no live executor). The final save and settlement retry with
+ * back-off while the database is down.
  */
 export function createRunScheduler(deps: {
   db: Db;
-  engine: RunEngine;
+  executor: ChunkExecutor;
   events: RunEvents;
   logger: Logger;
   options: SchedulerOptions;
   onSettled?: RunSettledHook;
 }) {
-  const { db, engine, events, logger, options } = deps;
+  const { db, executor, events, logger, options } = deps;
   const active = new Map<string, ActiveRun>();
   /** Department of each executing run, for fair share. */
   const activeDepartments = new Map<string, string>();
@@ -81,6 +88,8 @@ export function createRunScheduler(deps: {
   let ticking: Promise<void> | null = null;
   let again = false;
   let stopped = true;
+
+  const leaseUntil = () => new Date(Date.now() + options.leaseMs);
 
   function etaSeconds(run: ActiveRun): number | null {
     const doneHere = run.chunksDone - run.chunksAtStart;
@@ -103,10 +112,27 @@ export function createRunScheduler(deps: {
     events.publish(event);
   }
 
-  async function settle(runId: string, outcome: 'succeeded' | 'failed' | 'cancelled') {
+  /** Retries `work` while the database is down; gives up only when the scheduler stops. */
+  function untilDatabase<T>(runId: string, what: string, work: () => Promise<T>, signal?: AbortSignal): Promise<T> {
+    return retryWhileDatabaseDown(work, {
+      ...options.saveRetry,
+      signal,
+      onRetry: (error, delayMs, attempt) => logger.warn({ runId, err: error, delayMs, attempt }, `${what}: database unavailable, retrying`),
+    });
+  }
+
+  async function settle(runId: string, outcome: 'succeeded' | 'failed' | 'cancelled', signal?: AbortSignal) {
     if (!deps.onSettled) return;
-    const run = await loadRun(db, runId);
-    if (run) await deps.onSettled(run, outcome).catch((error: unknown) => logger.error({ err: error, runId }, 'run settlement hook failed'));
+    const hook = deps.onSettled;
+    try {
+      // Settlement is idempotent (one ledger key per run), so retrying after an outage settles once.
+      await untilDatabase(runId, 'settling the run', async () => {
+        const run = await loadRun(db, runId);
+        if (run) await hook(run, outcome);
+      }, signal);
+    } catch (error) {
+      logger.error({ err: error, runId }, 'run settlement hook failed');
+    }
   }
 
   async function execute(runId: string, entry: ActiveRun): Promise<void> {
@@ -115,69 +141,84 @@ export function createRunScheduler(deps: {
     const scenario = parseScenario(run.snapshot);
     const checkpoint = await loadCheckpoint(db, runId);
     const done = new ChunkSet(checkpoint?.doneChunks ?? []);
-    let tally: ChunkTally | undefined = checkpoint ? (JSON.parse(checkpoint.tally) as ChunkTally) : undefined;
+    // The run's one running total: the checkpoint's, or the engine's empty tally of this scenario.
+    const total: ChunkTally = checkpoint ? (JSON.parse(checkpoint.tally) as ChunkTally) : emptyTallyFor(run.scenarioHash);
     entry.chunkCount = run.chunkCount;
     entry.chunksDone = done.size;
     entry.chunksAtStart = done.size;
+    const pending: number[] = [];
+    for (let i = 0; i < run.chunkCount; i++) if (!done.has(i)) pending.push(i);
 
     // Checkpoint writes are chained so they land in order; each writes a consistent snapshot.
     let writes: Promise<unknown> = Promise.resolve();
     let lastWrite = 0;
     let lastPublish = 0;
+    let dirty = false;
     const persist = (force: boolean) => {
       const now = Date.now();
-      if (!force && now - lastWrite < options.checkpointIntervalMs) return;
+      if (!dirty || (!force && now - lastWrite < options.checkpointIntervalMs)) return;
       lastWrite = now;
-      if (!tally) return;
-      const snapshot = { tally: JSON.stringify(tally), ranges: done.ranges(), chunksDone: done.size };
+      dirty = false;
+      const snapshot = { tally: JSON.stringify(total), ranges: done.ranges(), chunksDone: done.size };
       writes = writes
         .then(async () => {
           await saveCheckpoint(db, runId, snapshot.tally, snapshot.ranges);
           await updateRun(db, runId, { chunksDone: snapshot.chunksDone, progress: snapshot.chunksDone / run.chunkCount }, ['running']);
         })
-        .catch((error: unknown) => logger.error({ err: error, runId }, 'checkpoint write failed'));
+        .catch((error: unknown) => {
+          dirty = true;
+          logger.error({ err: error, runId }, 'checkpoint write failed');
+        });
     };
 
     publish(runId, 'running', done.size, run.chunkCount);
     try {
-      const result = await engine(scenario, {
-        signal: entry.controller.signal,
-        skipChunks: done.toSet(),
-        initialTally: tally,
-        onChunk: (chunkIndex, chunkTally) => {
-          if (done.has(chunkIndex)) return;
-          tally = tally ? addTally(tally, chunkTally) : chunkTally;
-          done.add(chunkIndex);
-          entry.chunksDone = done.size;
-          persist(false);
-          const now = Date.now();
-          if (now - lastPublish >= PUBLISH_INTERVAL_MS) {
-            lastPublish = now;
-            publish(runId, 'running', done.size, run.chunkCount);
-          }
-        },
-      });
+      for await (const batch of executor.execute({ runId, scenario, pending, signal: entry.controller.signal })) {
+        // A batch delivered twice (a replayed job) is counted once.
+        if (batch.chunks.some((chunk) => done.has(chunk))) continue;
+        addTallyInto(total, batch.tally);
+        for (const chunk of batch.chunks) done.add(chunk);
+        dirty = true;
+        entry.chunksDone = done.size;
+        persist(false);
+        const now = Date.now();
+        if (now - lastPublish >= PUBLISH_INTERVAL_MS) {
+          lastPublish = now;
+          publish(runId, 'running', done.size, run.chunkCount);
+        }
+      }
+      if (entry.controller.signal.aborted) throw new RunAbortedError(entry.controller.signal.reason);
+      if (done.size !== run.chunkCount) throw new Error(`the executor finished with ${run.chunkCount - done.size} of ${run.chunkCount} chunks missing`);
+      const result = buildResult(scenario, total);
       await writes;
       const computeMs = run.computeMs + (Date.now() - entry.startedMs);
-      await db.transaction(async (tx) => {
-        await saveResult(tx, runId, JSON.stringify(result), resultBinRows(runId, result));
-        await updateRun(tx, runId, {
-          status: 'succeeded',
-          progress: 1,
-          chunksDone: run.chunkCount,
-          whiteDwarfs: result.counts.whiteDwarfs,
-          magnetic: result.counts.magnetic,
-          fraction: result.fraction.value,
-          fractionSe: result.fraction.se,
-          finishedAt: new Date(),
-          computeMs,
-          error: null,
+      const resultJson = JSON.stringify(result);
+      const bins = resultBinRows(runId, result);
+      // Saved once: a retry after a commit whose answer was lost finds the run already succeeded.
+      await untilDatabase(runId, 'saving the result', async () => {
+        await db.transaction(async (tx) => {
+          const current = await loadRun(tx, runId);
+          if (!current || current.status === 'succeeded') return;
+          await saveResult(tx, runId, resultJson, bins);
+          await updateRun(tx, runId, {
+            status: 'succeeded',
+            progress: 1,
+            chunksDone: run.chunkCount,
+            whiteDwarfs: result.counts.whiteDwarfs,
+            magnetic: result.counts.magnetic,
+            fraction: result.fraction.value,
+            fractionSe: result.fraction.se,
+            finishedAt: new Date(),
+            computeMs,
+            error: null,
+            leaseUntil: null,
+          });
+          await deleteCheckpoint(tx, runId);
         });
-        await deleteCheckpoint(tx, runId);
-      });
+      }, entry.controller.signal);
       publish(runId, 'succeeded', run.chunkCount, run.chunkCount);
       logger.info({ runId, systems: run.systems, computeMs }, 'run succeeded');
-      await settle(runId, 'succeeded');
+      await settle(runId, 'succeeded', entry.controller.signal);
     } catch (error) {
       await writes;
       const computeMs = run.computeMs + (Date.now() - entry.startedMs);
@@ -185,23 +226,31 @@ export function createRunScheduler(deps: {
         // Keep status 'running' and the newest checkpoint: the next start resumes from it.
         persist(true);
         await writes;
-        await updateRun(db, runId, { computeMs });
+        await updateRun(db, runId, { computeMs }).catch((e: unknown) => logger.error({ err: e, runId }, 'could not record compute time'));
         logger.info({ runId, chunksDone: done.size }, 'run interrupted by shutdown; it resumes on the next start');
         return;
       }
       if (entry.reason === 'cancel') {
-        await updateRun(db, runId, { status: 'cancelled', finishedAt: new Date(), computeMs, chunksDone: done.size, progress: done.size / run.chunkCount });
-        await deleteCheckpoint(db, runId);
+        await untilDatabase(runId, 'cancelling the run', async () => {
+          await updateRun(db, runId, { status: 'cancelled', finishedAt: new Date(), computeMs, chunksDone: done.size, progress: done.size / run.chunkCount, leaseUntil: null });
+          await deleteCheckpoint(db, runId);
+        });
         publish(runId, 'cancelled', done.size, run.chunkCount);
         await settle(runId, 'cancelled');
         return;
       }
+      // A failure keeps the checkpoint, so that resuming continues from what was computed.
       const message = error instanceof Error ? error.message : String(error);
       logger.warn({ runId, err: error }, 'run failed');
-      await updateRun(db, runId, { status: 'failed', error: message.slice(0, 4000), finishedAt: new Date(), computeMs, chunksDone: done.size, progress: done.size / run.chunkCount });
-      await deleteCheckpoint(db, runId);
+      persist(true);
+      await writes;
+      await untilDatabase(runId, 'recording the failure', () =>
+        updateRun(db, runId, { status: 'failed', error: message.slice(0, 4000), finishedAt: new Date(), computeMs, chunksDone: done.size, progress: done.size / run.chunkCount, leaseUntil: null }),
+      );
       publish(runId, 'failed', done.size, run.chunkCount, message);
       await settle(runId, 'failed');
+    } finally {
+      if (entry.reason !== 'stop') await executor.forget?.(runId).catch((e: unknown) => logger.warn({ err: e, runId }, 'executor cleanup failed'));
     }
   }
 
@@ -225,9 +274,18 @@ export function createRunScheduler(deps: {
       });
   }
 
+  /** The watchdog: renews this scheduler's leases, then re-queues running runs that nobody vouches for. */
+  async function watchdog(): Promise<void> {
+    const own = [...active.keys()];
+    await renewLeases(db, own, leaseUntil());
+    const orphans = await requeueOrphans(db, new Date(), own);
+    if (orphans > 0) logger.info({ orphans }, 're-queued running runs without a live executor; they resume from their checkpoints');
+  }
+
   /** One look at the queue: starts as many runs as the limits allow, fairly across departments. */
   async function tick(): Promise<void> {
     if (stopped) return;
+    await watchdog();
     const free = options.maxConcurrentRuns - active.size;
     if (free <= 0) return;
     const queued = await queuedRuns(db, 500);
@@ -247,7 +305,7 @@ export function createRunScheduler(deps: {
       }
       if (!pick) break;
       taken.add(pick.id);
-      if (!(await claimQueuedRun(db, pick.id, new Date()))) continue;
+      if (!(await claimQueuedRun(db, pick.id, new Date(), leaseUntil()))) continue;
       activeDepartments.set(pick.id, pick.departmentId);
       executing.set(pick.departmentId, (executing.get(pick.departmentId) ?? 0) + 1);
       start(pick.id);
@@ -273,9 +331,9 @@ export function createRunScheduler(deps: {
   }
 
   return {
-    /** Puts runs a stopped server left running back in the queue, then starts taking runs. */
+    /** Puts runs that no live scheduler executes back in the queue, then starts taking runs. */
     async start(): Promise<void> {
-      const resumed = await requeueInterrupted(db);
+      const resumed = await requeueOrphans(db, new Date(), [...active.keys()]);
       if (resumed > 0) logger.info({ resumed }, 'resuming runs interrupted by the last shutdown');
       stopped = false;
       timer = setInterval(wake, options.pollIntervalMs);
@@ -290,6 +348,7 @@ export function createRunScheduler(deps: {
       if (await updateRun(db, runId, { status: 'cancelled', finishedAt: new Date() }, ['queued'])) {
         const run = await loadRun(db, runId);
         if (run) publish(runId, 'cancelled', run.chunksDone, run.chunkCount);
+        await executor.cancel?.(runId);
         await settle(runId, 'cancelled');
         return true;
       }
@@ -297,11 +356,13 @@ export function createRunScheduler(deps: {
       if (entry) {
         entry.reason = 'cancel';
         entry.controller.abort();
+        await executor.cancel?.(runId);
         await entry.done;
         return true;
       }
       // Running but not here (claimed by a process that died without a restart): end it.
-      if (await updateRun(db, runId, { status: 'cancelled', finishedAt: new Date() }, ['running'])) {
+      if (await updateRun(db, runId, { status: 'cancelled', finishedAt: new Date(), leaseUntil: null }, ['running'])) {
+        await executor.cancel?.(runId);
         await deleteCheckpoint(db, runId);
         await settle(runId, 'cancelled');
         return true;
@@ -324,12 +385,13 @@ export function createRunScheduler(deps: {
       stopped = true;
       if (timer) clearInterval(timer);
       await ticking;
-      const entries = [...active.values()];
-      for (const entry of entries) {
+      const entries = [...active.entries()];
+      for (const [, entry] of entries) {
         entry.reason = 'stop';
-        entry.controller.abort();
+        entry.controller.abort(new RunAbortedError('the server is stopping'));
       }
-      await Promise.all(entries.map((e) => e.done));
+      await Promise.all(entries.map(([, e]) => e.done));
+      await releaseLeases(db, entries.map(([id]) => id)).catch((error: unknown) => logger.warn({ err: error }, 'could not release run leases'));
     },
   };
 }

@@ -1,4 +1,4 @@
-import { and, asc, count, desc, eq, inArray, isNull, like, sql, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, inArray, isNull, like, notInArray, sql, type SQL } from 'drizzle-orm';
 import type { RunListQuery, RunStatus } from '../../../shared/contracts/runs.ts';
 import type { Db } from '../../db/client.ts';
 import type { DbOrTx } from '../departments/departments.repository.ts';
@@ -66,21 +66,39 @@ export async function runsOfSweep(db: Db, sweepId: string) {
   return db.select().from(runs).where(eq(runs.sweepId, sweepId)).orderBy(asc(runs.sweepPointIndex));
 }
 
-/** Claims a queued run for execution; false if someone else got it first or it was cancelled. */
-export async function claimQueuedRun(db: Db, id: string, now: Date): Promise<boolean> {
+/** Claims a queued run for execution with a lease; false if someone else got it first or it was cancelled. */
+export async function claimQueuedRun(db: Db, id: string, now: Date, leaseUntil: Date): Promise<boolean> {
   const result = await db
     .update(runs)
-    .set({ status: 'running', startedAt: sql`COALESCE(${runs.startedAt}, ${now})` })
+    .set({ status: 'running', startedAt: sql`COALESCE(${runs.startedAt}, ${now})`, leaseUntil })
     .where(and(eq(runs.id, id), eq(runs.status, 'queued')));
   return result[0].affectedRows === 1;
 }
 
-/** Moves runs left 'running' by a stopped server back to the queue, to be resumed. */
-export async function requeueInterrupted(db: Db): Promise<number> {
+/** Extends the leases of the runs this scheduler is executing. */
+export async function renewLeases(db: Db, ids: string[], leaseUntil: Date): Promise<void> {
+  if (ids.length === 0) return;
+  await db.update(runs).set({ leaseUntil }).where(and(inArray(runs.id, ids), eq(runs.status, 'running')));
+}
+
+/** Gives up the leases of runs this scheduler stopped (their checkpoints stay): another start resumes them at once. */
+export async function releaseLeases(db: Db, ids: string[]): Promise<void> {
+  if (ids.length === 0) return;
+  await db.update(runs).set({ leaseUntil: null }).where(and(inArray(runs.id, ids), eq(runs.status, 'running')));
+}
+
+/**
+ * The watchdog's query: runs left 'running' with no live executor (a stopped or crashed server,
+ * a lapsed lease) go back to the queue and resume from their checkpoint. `ownIds` are the runs
+ * the calling scheduler is executing itself, never touched here.
+ */
+export async function requeueOrphans(db: Db, now: Date, ownIds: string[]): Promise<number> {
+  const filters: SQL[] = [eq(runs.status, 'running'), sql`(${runs.leaseUntil} IS NULL OR ${runs.leaseUntil} < ${now})`];
+  if (ownIds.length > 0) filters.push(notInArray(runs.id, ownIds));
   const result = await db
     .update(runs)
-    .set({ status: 'queued', resumes: sql`${runs.resumes} + 1` })
-    .where(eq(runs.status, 'running'));
+    .set({ status: 'queued', resumes: sql`${runs.resumes} + 1`, leaseUntil: null })
+    .where(and(...filters));
   return result[0].affectedRows;
 }
 
@@ -109,13 +127,13 @@ export async function deleteRun(tx: DbOrTx, id: string) {
   await tx.delete(runs).where(eq(runs.id, id));
 }
 
-export async function loadCheckpoint(db: Db, runId: string) {
+export async function loadCheckpoint(db: DbOrTx, runId: string) {
   const rows = await db.select().from(runCheckpoints).where(eq(runCheckpoints.runId, runId)).limit(1);
   return rows[0];
 }
 
 /** Writes the running totals and the chunks they cover in one statement (they never disagree). */
-export async function saveCheckpoint(db: Db, runId: string, tally: string, doneChunks: [number, number][]) {
+export async function saveCheckpoint(db: DbOrTx, runId: string, tally: string, doneChunks: [number, number][]) {
   const now = new Date();
   await db
     .insert(runCheckpoints)

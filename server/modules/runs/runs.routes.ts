@@ -69,6 +69,11 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
   }, ({ auth, params }) => runs.cancel(auth, params.id));
 
   defineRoute(router, registry, mount, {
+    method: 'post', path: '/runs/:id/resume', tag, access: 'observer', status: 201, params: idParamsSchema, response: idResponseSchema,
+    summary: 'Continue a failed run from the chunks it computed, as a new run (its owner, or a modeller)',
+  }, ({ auth, params }) => runs.resume(auth, params.id));
+
+  defineRoute(router, registry, mount, {
     method: 'delete', path: '/runs/:id', tag, access: 'observer', status: 204, summary: 'Delete one of your runs (admins: any)', params: idParamsSchema,
   }, async ({ auth, params }) => {
     await runs.remove(auth, params.id);

@@ -19,7 +19,7 @@ import type { ScenariosService } from '../scenarios/scenarios.service.ts';
 import { compareRunWithSample } from './comparison.ts';
 import { methodsParagraph, resultCsv } from './run-exports.ts';
 import type { RunScheduler } from './run-scheduler.ts';
-import { deleteRun, findRun, findRunsByIds, insertRun, listRuns, loadResult, type RunRow } from './runs.repository.ts';
+import { deleteRun, findRun, findRunsByIds, insertRun, listRuns, loadCheckpoint, loadResult, saveCheckpoint, type RunRow } from './runs.repository.ts';
 
 export const runNotFound = () => notFound('That run');
 const notFinished = (status: string) =>
@@ -213,6 +213,31 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       await recordAudit(db, { departmentId: department.id, actorUserId: auth.user.id, action: 'run.cancelled', target: id });
       const after = await findRun(db, department.id, id);
       return toRunSummary(after!.run, after!.ownerName);
+    },
+
+    /**
+     * Continues a failed run from the chunks it had computed: a new run of the same snapshot that
+     * starts from the failed run's checkpoint (chunk i depends only on (seed, i), so it ends with
+     * the counts of an uninterrupted run). It reserves its own credit; the failed run was refunded.
+     */
+    async resume(auth: RequestAuth, id: string): Promise<{ id: string }> {
+      const department = departmentOf(auth);
+      const found = await findRun(db, department.id, id);
+      if (!found) throw runNotFound();
+      if (found.run.ownerUserId !== auth.user.id && !roleAtLeast(auth.role!, 'modeller')) throw forbidden('Only the run\'s owner or a modeller can resume it.');
+      if (found.run.status !== 'failed') throw conflict(`The run is ${found.run.status}; only a failed run can be resumed.`);
+      const checkpoint = await loadCheckpoint(db, id);
+      if (!checkpoint) throw conflict('The run kept no computed chunks to continue from; start it again instead.');
+      const snapshot = parseScenario(found.run.snapshot);
+      const source = { scenarioId: found.run.scenarioId, scenarioVersion: found.run.scenarioVersion, scenarioName: found.run.scenarioName };
+      const resumedId = await db.transaction(async (tx) => {
+        const newRunId = await enqueue(auth, source, snapshot, { tx });
+        await saveCheckpoint(tx, newRunId, checkpoint.tally, checkpoint.doneChunks);
+        await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'run.resumed', target: newRunId, detail: { from: id } });
+        return newRunId;
+      });
+      scheduler.wake();
+      return { id: resumedId };
     },
 
     /** Owners delete their own finished runs (admins any); a queued or running run is cancelled first. */

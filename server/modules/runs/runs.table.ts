@@ -40,6 +40,11 @@ export const runs = mysqlTable(
     finishedAt: timestamp('finished_at'),
     /** Wall time spent computing, summed over resumes (ms). */
     computeMs: bigint('compute_ms', { mode: 'number' }).notNull().default(0),
+    /**
+     * While running: until when the scheduler executing it vouches for it (renewed every few
+     * seconds). A running run whose lease has lapsed has no live executor and is re-queued.
+     */
+    leaseUntil: timestamp('lease_until'),
   },
   (t) => [
     index('runs_department_idx').on(t.departmentId, t.createdAt),

@@ -29,6 +29,7 @@ import {
   WdMassChart,
 } from './run-distribution-charts.tsx';
 import { RunHeadline } from './run-headline.tsx';
+import { ResumeRunButton } from './resume-run-button.tsx';
 import { RunProgressCard } from './run-progress-card.tsx';
 import { RunSplitCharts } from './run-split-charts.tsx';
 import { RunStatusBadge } from './run-status-badge.tsx';
@@ -133,7 +134,9 @@ function RunBody({
               </>
             }
           />
-        ) : (
+        ) : null}
+        {run.status === 'failed' && canCancel ? <ResumeRunButton departmentId={departmentId} run={run} /> : null}
+        {run.status === 'failed' ? null : (
           <Alert
             tone="info"
             message={

@@ -1,0 +1,1 @@
+ALTER TABLE `runs` ADD `lease_until` datetime(3);

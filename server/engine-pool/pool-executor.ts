@@ -1,0 +1,104 @@
+import { hostname } from 'node:os';
+import type { Piscina } from 'piscina';
+import type { Scenario } from '../../shared/contracts/scenario.ts';
+import type { EngulfmentGrid } from '../../shared/engine/kernel/engulfment.ts';
+import { prepareScenario } from '../../shared/engine/kernel/prepare.ts';
+import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
+import { BATCH_RETRIES, BatchFailedError, pendingBatches, RunAbortedError, type BatchDone, type ChunkExecutor, type ExecuteRequest } from './chunk-executor.ts';
+import type { ChunkBatchTask } from './chunk-task.ts';
+
+export interface PoolExecutorOptions {
+  pool: Piscina;
+  /** The cached engulfment grid of a `track` scenario (built once, shared by every batch). */
+  resolveGrid?: (scenario: Scenario) => Promise<EngulfmentGrid | undefined>;
+  /** Chunks per pool task (default: about eight tasks per thread, at most 16 chunks each). */
+  chunksPerTask?: number;
+  /** Retries of a failed batch before the run fails (default BATCH_RETRIES). */
+  retries?: number;
+  onRetry?: (info: { chunks: number[]; attempt: number; error: unknown }) => void;
+}
+
+/** Threads of a piscina pool. */
+export function poolThreads(pool: Piscina): number {
+  return Math.max(1, pool.options.maxThreads ?? 1);
+}
+
+/**
+ * The embedded executor: a run's batches on the app's own piscina pool, at most two tasks per
+ * thread in flight (so a 10^10-system run never queues 150,000 tasks). A batch that fails is
+ * retried (piscina replaces a thread that crashed, so the retry runs on a fresh one); after
+ * `retries` retries the run fails with a BatchFailedError. An aborted signal stops the loop at
+ * once and cancels the tasks in flight.
+ */
+export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor {
+  const { pool } = options;
+  const retries = options.retries ?? BATCH_RETRIES;
+  const startedAt = new Date().toISOString();
+  let jobsDone = 0;
+  let activeJobs = 0;
+
+  async function runBatch(task: ChunkBatchTask, signal: AbortSignal): Promise<ChunkTally> {
+    for (let attempt = 0; ; attempt++) {
+      activeJobs++;
+      try {
+        const tally = (await pool.run(task, { signal })) as ChunkTally;
+        jobsDone++;
+        return tally;
+      } catch (error) {
+        if (signal.aborted) throw new RunAbortedError(signal.reason);
+        if (attempt >= retries) throw new BatchFailedError(task.chunks, attempt + 1, error);
+        options.onRetry?.({ chunks: task.chunks, attempt: attempt + 1, error });
+      } finally {
+        activeJobs--;
+      }
+    }
+  }
+
+  async function* execute(request: ExecuteRequest): AsyncGenerator<BatchDone> {
+    const { signal } = request;
+    if (signal.aborted) throw new RunAbortedError(signal.reason);
+    const prepared = prepareScenario(request.scenario, { engulfmentGrid: await options.resolveGrid?.(request.scenario) });
+    const threads = poolThreads(pool);
+    const size = options.chunksPerTask ?? Math.max(1, Math.min(16, Math.ceil(request.pending.length / (threads * 8))));
+    const batches = pendingBatches(request.pending, size);
+    // Tasks in flight are cancelled when the run is aborted or the loop ends early (a failure).
+    const local = new AbortController();
+    const stop = () => local.abort(signal.reason);
+    signal.addEventListener('abort', stop, { once: true });
+    // A thread that cannot start makes the pool emit 'error' instead of rejecting a task.
+    let onPoolError: (error: unknown) => void = () => {};
+    const poolFailed = new Promise<never>((_, reject) => (onPoolError = reject));
+    poolFailed.catch(() => {});
+    pool.on('error', onPoolError);
+    const inFlight = new Map<number, Promise<BatchDone>>();
+    let next = 0;
+    try {
+      while (next < batches.length || inFlight.size > 0) {
+        while (inFlight.size < threads * 2 && next < batches.length) {
+          const { batch, chunks } = batches[next++];
+          const done = runBatch({ prepared, chunks }, local.signal).then((tally) => ({ batch, chunks, tally }));
+          done.catch(() => {}); // observed by the race below; a late rejection after a failure is expected
+          inFlight.set(batch, done);
+        }
+        const finished = await Promise.race([poolFailed, ...inFlight.values()]);
+        inFlight.delete(finished.batch);
+        if (signal.aborted) throw new RunAbortedError(signal.reason);
+        yield finished;
+      }
+    } finally {
+      signal.removeEventListener('abort', stop);
+      pool.off('error', onPoolError);
+      if (inFlight.size > 0) local.abort(new RunAbortedError());
+    }
+  }
+
+  return {
+    kind: 'embedded',
+    execute,
+    async workers() {
+      const now = new Date().toISOString();
+      return [{ id: 'embedded', host: hostname(), pid: process.pid, threads: poolThreads(pool), jobsDone, activeJobs, startedAt, lastSeenAt: now }];
+    },
+    async close() {},
+  };
+}

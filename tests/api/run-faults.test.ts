@@ -1,0 +1,184 @@
+/**
+ * Faults in the run pipeline: the database going away while a run finishes, a run left
+ * "running" with no live executor, and a batch that keeps failing on its worker thread.
+ * This file runs its own private MariaDB, which it stops and starts; the suite's shared
+ * server is never touched.
+ */
+import { mkdtempSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { and, eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { ensureMariaDb, findFreePort, stopMariaDb, type DbConnection } from '../../scripts/mariadb.ts';
+import type { BatchDone, ChunkExecutor, ExecuteRequest } from '../../server/engine-pool/chunk-executor.ts';
+import { createEnginePool } from '../../server/engine-pool/engine-pool.ts';
+import { createPoolExecutor } from '../../server/engine-pool/pool-executor.ts';
+import { creditLedger } from '../../server/modules/billing/billing.table.ts';
+import { runCheckpoints, runs } from '../../server/modules/runs/runs.table.ts';
+import request from 'supertest';
+import { parseScenario } from '../../shared/contracts/scenario.ts';
+import { prepareScenario } from '../../shared/engine/kernel/prepare.ts';
+import { runChunk } from '../../shared/engine/kernel/run-chunk.ts';
+import { addTallyInto } from '../../shared/engine/kernel/tally.ts';
+import { saveCheckpoint } from '../../server/modules/runs/runs.repository.ts';
+import { createTestApp, GOOD_PASSWORD, restartApp, signUp, type TestContext } from '../support/test-app.ts';
+import { checkScenario, createScenario, waitForRun } from '../support/runs.ts';
+
+let stateDir: string;
+let dbServer: DbConnection;
+const startDb = (port: number) => ensureMariaDb({ stateDir, port, database: 'tidefield_faults', appUser: 'tidefield_faults', grantAll: true, log: () => {} });
+
+beforeAll(async () => {
+  stateDir = mkdtempSync(path.join(os.tmpdir(), 'tidefield-faults-db-'));
+  dbServer = await startDb(await findFreePort());
+}, 120_000);
+
+afterAll(async () => {
+  await stopMariaDb(stateDir, () => {});
+  rmSync(stateDir, { recursive: true, force: true });
+});
+
+/** The real pool executor, with a hook that runs before the last batch of a chosen run is handed over. */
+function executorWithHook(pool: ReturnType<typeof createEnginePool>, beforeLastBatch: (runId: string) => Promise<void>): ChunkExecutor {
+  const inner = createPoolExecutor({ pool });
+  return {
+    kind: 'embedded',
+    async *execute(request: ExecuteRequest): AsyncGenerator<BatchDone> {
+      let left = request.pending.length;
+      for await (const done of inner.execute(request)) {
+        left -= done.chunks.length;
+        if (left === 0) await beforeLastBatch(request.runId);
+        yield done;
+      }
+    },
+    close: () => inner.close(),
+  };
+}
+
+describe('a run that finishes while MariaDB is down (issue: runs stuck "running" after a database outage)', () => {
+  let ctx: TestContext;
+  const pool = createEnginePool({ workers: 2 });
+  let outageRunId: string | null = null;
+  let stopped: () => void;
+  const databaseStopped = new Promise<void>((resolve) => (stopped = resolve));
+
+  beforeAll(async () => {
+    const executor = executorWithHook(pool, async (runId) => {
+      if (runId !== outageRunId) return;
+      await stopMariaDb(stateDir, () => {});
+      stopped();
+    });
+    ctx = await createTestApp({}, { executor, schedulerTiming: { saveRetry: { firstDelayMs: 100, maxDelayMs: 1000 } } }, dbServer);
+  });
+
+  afterAll(async () => {
+    await ctx.close();
+    await pool.destroy();
+  });
+
+  it('saves the result and settles once after the database is back, with the counts of an uninterrupted run', async () => {
+    const modeller = await signUp(ctx.app);
+    const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: 400_000 }));
+    const body = { scenarioId, seed: 'outage' };
+    const reference = await modeller.agent.post('/api/runs').send(body).expect(201);
+    expect((await waitForRun(modeller.agent, reference.body.id)).status).toBe('succeeded');
+
+    const started = await modeller.agent.post('/api/runs').send(body).expect(201);
+    outageRunId = started.body.id as string;
+    await databaseStopped;
+    // Let the scheduler fail to save a few times, then bring the same server back on its port.
+    await new Promise((r) => setTimeout(r, 2500));
+    await startDb(dbServer.port);
+
+    const finished = await waitForRun(modeller.agent, outageRunId, 60_000);
+    expect(finished.status).toBe('succeeded');
+    const a = (await modeller.agent.get(`/api/runs/${outageRunId}/result`).expect(200)).body;
+    const b = (await modeller.agent.get(`/api/runs/${reference.body.id}/result`).expect(200)).body;
+    expect(a.counts).toEqual(b.counts);
+    expect(a.bins).toEqual(b.bins);
+    // Exactly one settlement (it follows the status change, so wait for it), never a refund.
+    const kinds = async () => (await ctx.database.db.select().from(creditLedger).where(eq(creditLedger.runId, outageRunId!))).map((e) => e.kind).sort();
+    await expect.poll(kinds, { timeout: 10_000 }).toEqual(['reservation', 'settlement']);
+    await new Promise((r) => setTimeout(r, 500));
+    expect(await kinds()).toEqual(['reservation', 'settlement']);
+    expect(await ctx.database.db.select().from(runCheckpoints).where(eq(runCheckpoints.runId, outageRunId))).toEqual([]);
+  }, 120_000);
+});
+
+describe('the watchdog (issue: a run never stays running without a live executor)', () => {
+  it('re-queues a running run whose lease lapsed and resumes it from its checkpoint', async () => {
+    const ctx = await createTestApp({}, { schedulerTiming: { pollIntervalMs: 100, leaseMs: 500 } }, dbServer);
+    try {
+      const modeller = await signUp(ctx.app);
+      const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: 400_000 }));
+      const reference = await modeller.agent.post('/api/runs').send({ scenarioId, seed: 'orphan' }).expect(201);
+      await waitForRun(modeller.agent, reference.body.id);
+      // A run that another app instance claimed and lost (killed): running, a lapsed lease, and a checkpoint of chunks 0–2.
+      await ctx.tidefield.scheduler.stop();
+      const orphan = await modeller.agent.post('/api/runs').send({ scenarioId, seed: 'orphan' }).expect(201);
+      const row = (await ctx.database.db.select().from(runs).where(eq(runs.id, orphan.body.id)))[0]!;
+      const prepared = prepareScenario(parseScenario(row.snapshot));
+      const partial = runChunk(prepared, 0);
+      for (const chunk of [1, 2]) addTallyInto(partial, runChunk(prepared, chunk));
+      await saveCheckpoint(ctx.database.db, row.id, JSON.stringify(partial), [[0, 2]]);
+      await ctx.database.db.update(runs).set({ status: 'running', leaseUntil: new Date(Date.now() - 1000) }).where(eq(runs.id, row.id));
+      await ctx.tidefield.scheduler.start();
+      const finished = await waitForRun(modeller.agent, row.id, 60_000);
+      expect(finished).toMatchObject({ status: 'succeeded', resumes: 1 });
+      const a = (await modeller.agent.get(`/api/runs/${row.id}/result`).expect(200)).body;
+      const b = (await modeller.agent.get(`/api/runs/${reference.body.id}/result`).expect(200)).body;
+      expect(a.counts).toEqual(b.counts);
+      expect(a.bins).toEqual(b.bins);
+    } finally {
+      await ctx.close();
+    }
+  }, 120_000);
+});
+
+describe('a batch that keeps failing on its worker thread (issue: a worker crash fails the whole run)', () => {
+  it('fails the run after two retries keeping its checkpoint; resume continues from it to the uninterrupted counts', async () => {
+    const fixture = new URL('../../server/engine-pool/failing-chunk-task.fixture.mjs', import.meta.url).href;
+    const failing = createEnginePool({ workers: 2, filename: fixture });
+    const ctx = await createTestApp({}, { pool: failing }, dbServer);
+    let mended: ReturnType<typeof createEnginePool> | undefined;
+    let restarted: Awaited<ReturnType<typeof restartApp>> | undefined;
+    try {
+      const modeller = await signUp(ctx.app);
+      const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: 400_000 }));
+      const bad = await modeller.agent.post('/api/runs').send({ scenarioId, seed: 'crash' }).expect(201);
+      const failed = await waitForRun(modeller.agent, bad.body.id);
+      expect(failed.status).toBe('failed');
+      expect(failed.error).toMatch(/deliberate failure in chunk 3.*3 attempts/);
+      const [checkpoint] = await ctx.database.db.select().from(runCheckpoints).where(eq(runCheckpoints.runId, bad.body.id));
+      const kept = checkpoint!.doneChunks.reduce((n, [first, last]) => n + last - first + 1, 0);
+      expect(kept).toBeGreaterThan(0);
+      expect(kept).toBeLessThan(failed.chunkCount as number);
+      // Refunded once (settlement follows the status change, so wait for it).
+      const refunds = async () => ctx.database.db.select().from(creditLedger).where(and(eq(creditLedger.runId, bad.body.id), eq(creditLedger.kind, 'refund')));
+      await expect.poll(refunds, { timeout: 10_000 }).toHaveLength(1);
+
+      // Mended: the same app data on a pool whose first try at chunk 3 kills its thread (retried on a fresh one).
+      await ctx.tidefield.scheduler.stop();
+      process.env.TIDEFIELD_FIXTURE_CRASH_ONCE = path.join(stateDir, `crash-once-${bad.body.id}`);
+      mended = createEnginePool({ workers: 2, filename: fixture });
+      restarted = await restartApp(ctx, { pool: mended });
+      const agent = request.agent(restarted.app);
+      await agent.post('/api/auth/sign-in').send({ email: modeller.email, password: GOOD_PASSWORD }).expect(200);
+      const resumed = await agent.post(`/api/runs/${bad.body.id}/resume`).expect(201);
+      expect((await waitForRun(agent, resumed.body.id)).status).toBe('succeeded');
+      await agent.post(`/api/runs/${resumed.body.id}/resume`).expect(409);
+      const reference = await agent.post('/api/runs').send({ scenarioId, seed: 'crash' }).expect(201);
+      expect((await waitForRun(agent, reference.body.id)).status).toBe('succeeded');
+      const a = (await agent.get(`/api/runs/${resumed.body.id}/result`).expect(200)).body;
+      const b = (await agent.get(`/api/runs/${reference.body.id}/result`).expect(200)).body;
+      expect(a.counts).toEqual(b.counts);
+      expect(a.bins).toEqual(b.bins);
+    } finally {
+      delete process.env.TIDEFIELD_FIXTURE_CRASH_ONCE;
+      await restarted?.close();
+      await ctx.close();
+      await mended?.destroy();
+      await failing.destroy();
+    }
+  }, 180_000);
+});
