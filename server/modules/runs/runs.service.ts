@@ -308,6 +308,15 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       requireAllWhiteDwarfs(sample, 'sampleId');
       const source = await scenarios.resolve(department.id, body.scenarioId);
       const snapshot = await snapshotOf(department.id, source.scenario, { systems: body.systems, seed: body.seed });
+      // The answer scales the scenario's companion occurrences; with none there is nothing to
+      // scale, so refuse before spending a run on it.
+      const rows = snapshot.companions.rows ?? [];
+      if (!rows.some((r) => r.occurrence > 0)) {
+        throw badRequest(
+          `The scenario "${source.name}" has no occurrence table to scale (${rows.length === 0 ? 'it lists no companion rows' : 'every companion row has occurrence 0'}), so no occurrence can be implied. Choose a scenario with companions, or add an occurrence table to this one.`,
+          'scenarioId',
+        );
+      }
       const id = await enqueue(auth, { scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: source.name }, snapshot);
       scheduler.wake();
       return { runId: id, sampleId: sample.id };
