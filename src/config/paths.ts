@@ -39,7 +39,12 @@ export const paths = {
   runs: {
     ...page('/runs'),
     /** The start form, with the scenario chosen when one is given. */
-    new: { path: '/runs/new', getHref: (scenarioId?: string) => (scenarioId ? `/runs/new?scenario=${encodeURIComponent(scenarioId)}` : '/runs/new') },
+    new: {
+      path: '/runs/new',
+      getHref: (scenarioId?: string) => (scenarioId ? `/runs/new?scenario=${encodeURIComponent(scenarioId)}` : '/runs/new'),
+      /** Run a run's own scenario document again (a sweep's point with its values). */
+      again: (runId: string) => `/runs/new?again=${encodeURIComponent(runId)}`,
+    },
     detail: { path: '/runs/:id', getHref: (id: string) => `/runs/${encodeURIComponent(id)}` },
   },
   sweeps: {

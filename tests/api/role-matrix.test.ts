@@ -53,6 +53,7 @@ export const EXPECTED_ACCESS: Record<string, Minimum> = {
   'GET /api/runs/:id': 'observer',
   'GET /api/runs/:id/events': 'observer',
   'POST /api/runs/:id/cancel': 'observer',
+  'POST /api/runs/:id/again': 'observer',
   'DELETE /api/runs/:id': 'observer',
   'GET /api/runs/:id/result': 'observer',
   'GET /api/runs/:id/comparison': 'observer',

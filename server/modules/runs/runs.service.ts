@@ -17,6 +17,9 @@ import type { ScenariosService } from '../scenarios/scenarios.service.ts';
 import { compareRunWithSample } from './comparison.ts';
 import { methodsParagraph, resultCsv } from './run-exports.ts';
 import type { RunScheduler } from './run-scheduler.ts';
+import { eq } from 'drizzle-orm';
+import { sweepPointText, sweepPointValues } from '../../../shared/contracts/sweep-point.ts';
+import { sweeps } from '../sweeps/sweeps.table.ts';
 import { deleteRun, findRun, findRunsByIds, insertRun, listRuns, loadResult, type RunRow } from './runs.repository.ts';
 
 export const runNotFound = () => notFound('That run');
@@ -172,6 +175,15 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
     return { run: found.run, result: JSON.parse(text) as ScenarioResult };
   }
 
+  /** For a sweep's grid point: the sweep's name, the point's number and its parameter values (null for other runs). */
+  async function sweepPointOf(run: RunRow) {
+    if (!run.sweepId || run.sweepPointIndex === null) return null;
+    const [sweep] = await db.select().from(sweeps).where(eq(sweeps.id, run.sweepId)).limit(1);
+    const values = sweep ? sweepPointValues(sweep.axes, run.sweepPointIndex) : null;
+    if (!sweep || !values) return null;
+    return { sweepId: sweep.id, sweepName: sweep.name, number: run.sweepPointIndex + 1, pointCount: sweep.pointCount, values };
+  }
+
   return {
     snapshotOf,
     enqueue,
@@ -197,7 +209,7 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
     async detail(auth: RequestAuth, id: string): Promise<RunSummary> {
       const found = await findRun(db, departmentOf(auth).id, id);
       if (!found) throw runNotFound();
-      return toRunSummary(found.run, found.ownerName, scheduler.live(id));
+      return { ...toRunSummary(found.run, found.ownerName, scheduler.live(id)), sweepPoint: await sweepPointOf(found.run) };
     },
 
     /** The owner or any modeller may cancel a queued or running run. */
@@ -295,9 +307,35 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       return resultCsv((await finishedResult(departmentOf(auth).id, id)).result);
     },
 
+    /**
+     * The methods paragraph of the run's own scenario document (for a sweep's point, the point's
+     * document: the base scenario with the point's values set), opened for a point by a sentence
+     * naming its values, so that a copied paragraph describes the model that was run.
+     */
     async methods(auth: RequestAuth, id: string) {
       const { run, result } = await finishedResult(departmentOf(auth).id, id);
-      return methodsParagraph(parseScenario(run.snapshot), result, id);
+      const paragraph = methodsParagraph(parseScenario(run.snapshot), result, id);
+      const point = await sweepPointOf(run);
+      if (!point) return paragraph;
+      return `This run is grid point ${point.number} of ${point.pointCount} of the parameter sweep "${point.sweepName}", with ${sweepPointText(point.values)}; everything below describes the scenario at these values. ${paragraph}`;
+    },
+
+    /**
+     * Runs a finished or stopped run's own scenario document again (a sweep's point keeps its
+     * values), optionally with another size or seed. The new run stands alone, outside any sweep;
+     * its name carries the point's values.
+     */
+    async again(auth: RequestAuth, id: string, overrides: { systems?: number; seed?: string }): Promise<{ id: string }> {
+      const department = departmentOf(auth);
+      const found = await findRun(db, department.id, id);
+      if (!found) throw runNotFound();
+      const { run } = found;
+      const snapshot = await snapshotOf(department.id, parseScenario(run.snapshot), overrides);
+      const point = await sweepPointOf(run);
+      const scenarioName = (point ? `${run.scenarioName} · ${sweepPointText(point.values)}` : run.scenarioName).slice(0, 160);
+      const newId = await enqueue(auth, { scenarioId: run.scenarioId, scenarioVersion: run.scenarioVersion, scenarioName }, snapshot);
+      scheduler.wake();
+      return { id: newId };
     },
 
     /** The observer's question in one call: run the scenario (or reuse an identical finished run) for a sample. */
