@@ -15,3 +15,4 @@ export { apiTokens } from '../modules/tokens/tokens.table.ts';
 export { billingAccounts, creditLedger, creditCheckouts, paymentEvents } from '../modules/billing/billing.table.ts';
 export { invitations } from '../modules/invitations/invitations.table.ts';
 export { passwordResets, notificationSettings } from '../modules/account/account.table.ts';
+export { emailChanges } from '../modules/account/email-changes.table.ts';

@@ -15,7 +15,6 @@ const EVERYONE = [
   'Occurrence tables',
   'API tokens',
   'Settings',
-  'E-mail notices',
 ];
 
 describe('navigation by role', () => {

@@ -1,15 +1,8 @@
-import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { createBrowserRouter, Navigate, type RouteObject } from 'react-router-dom';
 import { LoadingState } from '../components/ui/loading-state.tsx';
-import { paths, type PathKey } from '../config/paths.ts';
+import { MOVED_PAGES, paths } from '../config/paths.ts';
 import { RequireRole } from './require-role.tsx';
-import type { ComingSoonHandle } from './routes/coming-soon.tsx';
 import { RouteError } from './routes/route-error.tsx';
-
-/** A page that does not exist yet: its route already works and says what it will hold. */
-function comingSoon(key: PathKey): RouteObject {
-  const handle: ComingSoonHandle = { navKey: key };
-  return { path: paths[key].path, handle, lazy: () => import('./routes/coming-soon.tsx') };
-}
 
 // Every page is its own chunk (React Router's `lazy`); the shell loads once, after sign-in.
 export const routes: RouteObject[] = [
@@ -22,6 +15,7 @@ export const routes: RouteObject[] = [
       { path: paths.forgotPassword.path, lazy: () => import('./routes/forgot-password.tsx') },
       { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password.tsx') },
       { path: paths.acceptInvitation.path, lazy: () => import('./routes/accept-invitation.tsx') },
+      { path: paths.confirmEmail.path, lazy: () => import('./routes/confirm-email.tsx') },
       {
         lazy: () => import('./routes/app-root.tsx'),
         children: [
@@ -30,9 +24,7 @@ export const routes: RouteObject[] = [
             ErrorBoundary: RouteError,
             children: [
               { index: true, lazy: () => import('./routes/overview.tsx') },
-              ...(
-                ['settings'] as const
-              ).map(comingSoon),
+              { path: paths.settings.path, lazy: () => import('./routes/settings.tsx') },
               { path: paths.scenarios.path, lazy: () => import('./routes/scenarios.tsx') },
               { path: paths.scenarios.new.path, lazy: () => import('./routes/scenarios-new.tsx') },
               { path: paths.scenarios.detail.path, lazy: () => import('./routes/scenarios-detail.tsx') },
@@ -49,7 +41,8 @@ export const routes: RouteObject[] = [
               { path: paths.runs.new.path, lazy: () => import('./routes/runs-new.tsx') },
               { path: paths.runs.detail.path, lazy: () => import('./routes/runs-detail.tsx') },
               { path: paths.compare.path, lazy: () => import('./routes/compare.tsx') },
-              { path: paths.notifications.path, lazy: () => import('./routes/notifications.tsx') },
+              // E-mail notices now live in Settings; old links (and e-mails) still land there.
+              ...MOVED_PAGES.map((moved) => ({ path: moved.from, element: <Navigate to={moved.to} replace /> })),
               {
                 element: <RequireRole minimum="admin" />,
                 children: [

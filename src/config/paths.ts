@@ -28,6 +28,8 @@ export const paths = {
   // Opened from e-mailed links, which carry ?token=….
   resetPassword: page('/reset-password'),
   acceptInvitation: page('/accept-invitation'),
+  // Opened from the link mailed to a new e-mail address (?token=…).
+  confirmEmail: page('/confirm-email'),
 
   overview: page('/'),
   scenarios: {
@@ -75,12 +77,14 @@ export const paths = {
   settings: page('/settings'),
   members: page('/members'),
   credits: page('/credits'),
-  notifications: page('/notifications'),
   outbox: page('/outbox'),
 } as const;
 
+/** Addresses of pages that moved, still reached through old links and e-mails. */
+export const MOVED_PAGES: readonly { from: string; to: string }[] = [{ from: '/notifications', to: '/settings#notices' }];
+
 /** Pages outside the signed-in app (no navigation entry). */
-export const PUBLIC_PAGE_KEYS: readonly PathKey[] = ['signIn', 'signUp', 'forgotPassword', 'resetPassword', 'acceptInvitation'];
+export const PUBLIC_PAGE_KEYS: readonly PathKey[] = ['signIn', 'signUp', 'forgotPassword', 'resetPassword', 'acceptInvitation', 'confirmEmail'];
 
 export type PathKey = keyof typeof paths;
 

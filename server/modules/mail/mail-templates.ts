@@ -205,3 +205,18 @@ export function sweepFinishedEmail(input: {
     }),
   };
 }
+
+export function emailChangeEmail(input: { name: string; oldEmail: string; link: string; expiresAt: Date }): Content {
+  return {
+    subject: 'Confirm your new Tidefield address',
+    ...render({
+      heading: 'Confirm your new e-mail address',
+      paragraphs: [
+        `Hello ${input.name}, you asked to use this address for your Tidefield account instead of ${input.oldEmail}.`,
+        `The link works once and until ${formatUtc(input.expiresAt)}. Until it is opened, you sign in with the old address.`,
+      ],
+      action: { label: 'Use this address', url: input.link },
+      footer: 'If you did not ask for this, ignore this e-mail: the account keeps its old address.',
+    }),
+  };
+}
