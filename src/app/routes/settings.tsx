@@ -12,7 +12,7 @@ export function Component() {
       <PageHeader eyebrow={me.department.name} title="Settings" description="Your name, address, password, sessions and e-mail notices." />
       <div className="grid items-start gap-6 lg:grid-cols-2">
         <AccountPanel me={me} />
-        <NameForm key={me.user.name} name={me.user.name} />
+        <NameForm name={me.user.name} />
         <EmailForm email={me.user.email} />
         <PasswordForm userId={me.user.id} />
         <SessionsPanel userId={me.user.id} />
