@@ -175,7 +175,12 @@ describe('observer', () => {
     try {
       await stack.signIn(page, 'observer');
       await page.goto('/samples');
-      await page.getByRole('link', { name: /Test against a run: Harrowgate 40 pc pilot survey/ }).first().click();
+      await page.getByRole('link', { name: 'Harrowgate 40 pc pilot survey (illustrative)', exact: true }).first().waitFor();
+      await stack.screenshot(page, 'samples-list');
+      // Every sample row links to its test.
+      expect(await page.getByRole('link', { name: /^Test against a run/ }).count()).toBeGreaterThanOrEqual(2);
+      await page.getByRole('link', { name: /^Test against a run/ }).first().click();
+      await page.waitForURL(/\/samples\/[A-Za-z0-9_-]{8,}#test$/);
       const card = page.getByRole('region', { name: 'Test against a run' });
       await card.waitFor();
       await chooseOption(card.getByLabel('Run'), 'Occurrence multiplier = 2');
