@@ -43,6 +43,7 @@ function unitOf(rootDir, dir) {
   return segments.join('/');
 }
 const SOURCE = /\.(ts|tsx|mts|js|mjs)$/;
+const TABLE_FILE = /\.table\.ts$/;
 const TEST_FILE = /\.test\.(ts|tsx|mts|js|mjs)$/;
 const SPECIFIERS = [
   /\b(?:import|export)\s[^'";]*?\sfrom\s*['"](\.{1,2}\/[^'"]+)['"]/g,
@@ -88,6 +89,9 @@ function buildComponents(rootDir) {
     const from = unitOf(rootDir, dir);
     if (!edges.has(from)) edges.set(from, new Set());
     for (const spec of relativeSpecifiers(file)) {
+      // A Drizzle table (`*.table.ts`) is part of the one database schema (server/db/schema.ts
+      // gathers them all): reading another module's table is a data dependency, not a service one.
+      if (TABLE_FILE.test(spec)) continue;
       const to = unitOf(rootDir, path.dirname(path.resolve(dir, spec)));
       if (to !== from && !ROOT_UNITS.has(to)) edges.get(from)?.add(to);
     }

@@ -41,6 +41,8 @@ import { tokensRoutes } from './modules/tokens/tokens.routes.ts';
 import { createTokensService } from './modules/tokens/tokens.service.ts';
 import { createGridResolver } from './modules/runs/engulfment-grid-cache.ts';
 import { accountRoutes } from './modules/account/account.routes.ts';
+import { settingsRoutes } from './modules/account/settings.routes.ts';
+import { createSettingsService } from './modules/account/settings.service.ts';
 import { createAccountService } from './modules/account/account.service.ts';
 import { billingRoutes, WEBHOOK_PATH } from './modules/billing/billing.routes.ts';
 import { createBillingService, type BillingService } from './modules/billing/billing.service.ts';
@@ -129,6 +131,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   const billing = createBillingService({ db, config, payments: createPaymentGateway(config), mailer, logger });
   const runNotices = createRunNotices({ db, config, mailer });
   const account = createAccountService({ db, config, mailer, sessions, logger });
+  const settings = createSettingsService({ db, config, mailer, sessions });
   const invitations = createInvitationsService({ db, config, mailer, sessions, logger });
   const runs = createRunsService({ db, scheduler, scenarios, tables, samples, billing: deps.billing ?? billing.runBilling });
   const sweeps = createSweepsService({ db, runs, scenarios, samples, scheduler });
@@ -177,6 +180,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   app.use('/api', exportsRoutes(registry, exports));
   app.use('/api', sharesRoutes(registry, config, shares));
   app.use('/api', accountRoutes(registry, config, account));
+  app.use('/api', settingsRoutes(registry, settings, sessions));
   app.use('/api/invitations', invitationsRoutes(registry, config, invitations, sessions));
   app.use('/api/billing', billingRoutes(registry, billing));
   app.use('/api', outboxRoutes(registry, config, logger));

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { main } from './synth.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'tidefield-synth-'));
-const checkOne = JSON.parse(readFileSync(new URL('../../shared/scenarios/check-1.json', import.meta.url), 'utf8'));
+const checkOne = JSON.parse(readFileSync(new URL('../../tests/fixtures/check-1.json', import.meta.url), 'utf8'));
 
 function file(name: string, content: unknown): string {
   const path = join(dir, name);

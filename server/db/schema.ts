@@ -17,3 +17,4 @@ export { invitations } from '../modules/invitations/invitations.table.ts';
 export { passwordResets, notificationSettings } from '../modules/account/account.table.ts';
 export { constraintSets, constraintSetVersions } from '../modules/constraints/constraint-sets.table.ts';
 export { shareLinks } from '../modules/shares/share-links.table.ts';
+export { emailChanges } from '../modules/account/email-changes.table.ts';

@@ -10,7 +10,7 @@ import { createEnginePool } from './engine-pool.ts';
 import { runScenario } from './run-scenario.ts';
 
 const scenario = (overrides: Record<string, unknown> = {}): Scenario =>
-  parseScenario({ ...JSON.parse(readFileSync(new URL('../../shared/scenarios/check-1.json', import.meta.url), 'utf8')), systems: 400_000, ...overrides });
+  parseScenario({ ...JSON.parse(readFileSync(new URL('../../tests/fixtures/check-1.json', import.meta.url), 'utf8')), systems: 400_000, ...overrides });
 
 const shared = createEnginePool({ workers: 2 });
 afterAll(async () => {

@@ -67,6 +67,17 @@ export const runSummarySchema = z.object({
   resumes: z.number(),
   /** Seconds left, estimated from this run's own pace (null when not running or too early to tell). */
   etaSeconds: z.number().nullable(),
+  /** Only in GET /runs/:id, for a sweep's grid point: its sweep, its number (1-based) and its parameter values. */
+  sweepPoint: z
+    .object({
+      sweepId: z.string(),
+      sweepName: z.string(),
+      number: z.number(),
+      pointCount: z.number(),
+      values: z.array(z.object({ path: z.string(), label: z.string(), unit: z.string(), value: z.number() })),
+    })
+    .nullable()
+    .optional(),
 });
 export type RunSummary = z.infer<typeof runSummarySchema>;
 export const runListResponseSchema = z.object({ runs: z.array(runSummarySchema), page: pageInfoSchema });
@@ -99,3 +110,10 @@ export const impliedOccurrenceBodySchema = z.strictObject({
   systems: createRunBodySchema.shape.systems,
   seed: createRunBodySchema.shape.seed,
 });
+
+/** Run a run's own scenario document again (a sweep's point keeps its values); size and seed may change. */
+export const runAgainBodySchema = z.strictObject({
+  systems: createRunBodySchema.shape.systems,
+  seed: createRunBodySchema.shape.seed,
+});
+export type RunAgainBody = z.infer<typeof runAgainBodySchema>;

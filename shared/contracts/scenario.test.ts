@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import { parseScenario, scenarioSchema, ScenarioValidationError, SWEEPABLE_PARAMETERS, withParameter } from './scenario.ts';
 
-const checkOne = () => JSON.parse(readFileSync(new URL('../scenarios/check-1.json', import.meta.url), 'utf8'));
+const checkOne = () => JSON.parse(readFileSync(new URL('../../tests/fixtures/check-1.json', import.meta.url), 'utf8'));
 
 /** The issues of a rejected document (fails the test if it was accepted). */
 function issuesOf(input: unknown) {

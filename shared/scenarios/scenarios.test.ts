@@ -23,10 +23,8 @@ describe('stored scenarios and the default occurrence table', () => {
 
   it.each(scenarioFiles)('%s parses; presets carry a title and description', (name) => {
     const s = parseScenario(load(name));
-    if (name !== 'check-1.json') {
-      expect(s.title).toBeTruthy();
-      expect(s.description).toBeTruthy();
-    }
+    expect(s.title).toBeTruthy();
+    expect(s.description).toBeTruthy();
   });
 
   it('presets built on the baseline table carry its rows unchanged', () => {

@@ -17,7 +17,6 @@ const EVERYONE = [
   'Occurrence tables',
   'API tokens',
   'Settings',
-  'E-mail notices',
   // Everyone reads their own mail in the development outbox.
   'Outbox',
 ];

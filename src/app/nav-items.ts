@@ -91,8 +91,7 @@ export const NAV_GROUPS: readonly NavGroup[] = [
     label: 'Account',
     items: [
       { key: 'apiTokens', label: 'API tokens', summary: 'Tokens for the REST API and the command line.', minimumRole: 'observer' },
-      { key: 'settings', label: 'Settings', summary: 'Your name, e-mail address and password.', minimumRole: 'observer' },
-      { key: 'notifications', label: 'E-mail notices', summary: 'Whether you get an e-mail when a run of yours finishes or fails.', minimumRole: 'observer' },
+      { key: 'settings', label: 'Settings', summary: 'Your name, e-mail address, password, signed-in sessions and e-mail notices.', minimumRole: 'observer' },
       { key: 'outbox', label: 'Outbox', summary: "Your e-mail, and admins' department notices, as the local mail stand-in received them (development).", minimumRole: 'observer' },
     ],
   },

@@ -1,6 +1,6 @@
 import { QueryClientProvider } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
-import { getMeQueryOptions } from '../features/auth/api/get-me.ts';
+import { getMeQueryOptions } from '../lib/api/get-me.ts';
 import { createQueryClient } from '../lib/query-client.ts';
 
 export function AppProvider({ children }: { children: ReactNode }) {

@@ -1,15 +1,8 @@
-import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { createBrowserRouter, Navigate, type RouteObject } from 'react-router-dom';
 import { LoadingState } from '../components/ui/loading-state.tsx';
-import { paths, sharedPath, type PathKey } from '../config/paths.ts';
+import { MOVED_PAGES, paths, sharedPath } from '../config/paths.ts';
 import { RequireRole } from './require-role.tsx';
-import type { ComingSoonHandle } from './routes/coming-soon.tsx';
 import { RouteError } from './routes/route-error.tsx';
-
-/** A page that does not exist yet: its route already works and says what it will hold. */
-function comingSoon(key: PathKey): RouteObject {
-  const handle: ComingSoonHandle = { navKey: key };
-  return { path: paths[key].path, handle, lazy: () => import('./routes/coming-soon.tsx') };
-}
 
 // Every page is its own chunk (React Router's `lazy`); the shell loads once, after sign-in.
 export const routes: RouteObject[] = [
@@ -23,6 +16,7 @@ export const routes: RouteObject[] = [
       { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password.tsx') },
       { path: paths.acceptInvitation.path, lazy: () => import('./routes/accept-invitation.tsx') },
       { path: sharedPath.path, lazy: () => import('./routes/shared.tsx') },
+      { path: paths.confirmEmail.path, lazy: () => import('./routes/confirm-email.tsx') },
       {
         lazy: () => import('./routes/app-root.tsx'),
         children: [
@@ -31,9 +25,7 @@ export const routes: RouteObject[] = [
             ErrorBoundary: RouteError,
             children: [
               { index: true, lazy: () => import('./routes/overview.tsx') },
-              ...(
-                ['settings'] as const
-              ).map(comingSoon),
+              { path: paths.settings.path, lazy: () => import('./routes/settings.tsx') },
               { path: paths.scenarios.path, lazy: () => import('./routes/scenarios.tsx') },
               { path: paths.scenarios.new.path, lazy: () => import('./routes/scenarios-new.tsx') },
               { path: paths.scenarios.detail.path, lazy: () => import('./routes/scenarios-detail.tsx') },
@@ -52,7 +44,8 @@ export const routes: RouteObject[] = [
               { path: paths.compare.path, lazy: () => import('./routes/compare.tsx') },
               { path: paths.constraintSets.path, lazy: () => import('./routes/constraint-sets.tsx') },
               { path: paths.twoSample.path, lazy: () => import('./routes/two-sample.tsx') },
-              { path: paths.notifications.path, lazy: () => import('./routes/notifications.tsx') },
+              // E-mail notices now live in Settings; old links (and e-mails) still land there.
+              ...MOVED_PAGES.map((moved) => ({ path: moved.from, element: <Navigate to={moved.to} replace /> })),
               {
                 element: <RequireRole minimum="admin" />,
                 children: [

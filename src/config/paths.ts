@@ -28,6 +28,8 @@ export const paths = {
   // Opened from e-mailed links, which carry ?token=….
   resetPassword: page('/reset-password'),
   acceptInvitation: page('/accept-invitation'),
+  // Opened from the link mailed to a new e-mail address (?token=…).
+  confirmEmail: page('/confirm-email'),
 
   overview: page('/'),
   scenarios: {
@@ -39,7 +41,12 @@ export const paths = {
   runs: {
     ...page('/runs'),
     /** The start form, with the scenario chosen when one is given. */
-    new: { path: '/runs/new', getHref: (scenarioId?: string) => (scenarioId ? `/runs/new?scenario=${encodeURIComponent(scenarioId)}` : '/runs/new') },
+    new: {
+      path: '/runs/new',
+      getHref: (scenarioId?: string) => (scenarioId ? `/runs/new?scenario=${encodeURIComponent(scenarioId)}` : '/runs/new'),
+      /** Run a run's own scenario document again (a sweep's point with its values). */
+      again: (runId: string) => `/runs/new?again=${encodeURIComponent(runId)}`,
+    },
     detail: { path: '/runs/:id', getHref: (id: string) => `/runs/${encodeURIComponent(id)}` },
   },
   sweeps: {
@@ -72,13 +79,15 @@ export const paths = {
   settings: page('/settings'),
   members: page('/members'),
   credits: page('/credits'),
-  notifications: page('/notifications'),
   outbox: page('/outbox'),
   workers: page('/workers'),
 } as const;
 
+/** Addresses of pages that moved, still reached through old links and e-mails. */
+export const MOVED_PAGES: readonly { from: string; to: string }[] = [{ from: '/notifications', to: '/settings#notices' }];
+
 /** Pages outside the signed-in app (no navigation entry). */
-export const PUBLIC_PAGE_KEYS: readonly PathKey[] = ['signIn', 'signUp', 'forgotPassword', 'resetPassword', 'acceptInvitation'];
+export const PUBLIC_PAGE_KEYS: readonly PathKey[] = ['signIn', 'signUp', 'forgotPassword', 'resetPassword', 'acceptInvitation', 'confirmEmail'];
 
 /**
  * A read-only share link to a run or sweep, opened without signing in. Kept beside `paths`

@@ -36,12 +36,12 @@ export const EXPECTED_ACCESS: Record<string, Minimum> = {
   'GET /api/scenarios/:id/versions': 'observer',
   'GET /api/scenarios/:id/versions/:version': 'observer',
   'GET /api/occurrence-tables': 'observer',
-  'POST /api/occurrence-tables': 'modeller',
-  'POST /api/occurrence-tables/preview': 'modeller',
-  'POST /api/occurrence-tables/upload': 'modeller',
+  'POST /api/occurrence-tables': 'observer',
+  'POST /api/occurrence-tables/preview': 'observer',
+  'POST /api/occurrence-tables/upload': 'observer',
   'GET /api/occurrence-tables/:id': 'observer',
-  'PATCH /api/occurrence-tables/:id': 'modeller',
-  'DELETE /api/occurrence-tables/:id': 'modeller',
+  'PATCH /api/occurrence-tables/:id': 'observer',
+  'DELETE /api/occurrence-tables/:id': 'observer',
   'GET /api/occurrence-tables/:id/csv': 'observer',
   'GET /api/samples': 'observer',
   'POST /api/samples': 'observer',
@@ -55,6 +55,7 @@ export const EXPECTED_ACCESS: Record<string, Minimum> = {
   'POST /api/runs/:id/cancel': 'observer',
   'POST /api/runs/:id/resume': 'observer',
   'GET /api/workers': 'admin',
+  'POST /api/runs/:id/again': 'observer',
   'DELETE /api/runs/:id': 'observer',
   'GET /api/runs/:id/result': 'observer',
   'GET /api/runs/:id/comparison': 'observer',
@@ -82,6 +83,12 @@ export const EXPECTED_ACCESS: Record<string, Minimum> = {
   'POST /api/auth/password-reset/confirm': 'public',
   'GET /api/me/notifications': 'signedIn',
   'PUT /api/me/notifications': 'signedIn',
+  'PUT /api/me/name': 'signedIn',
+  'POST /api/me/email-change': 'signedIn',
+  'POST /api/auth/email-change/confirm': 'public',
+  'PUT /api/me/password': 'signedIn',
+  'GET /api/me/sessions': 'signedIn',
+  'POST /api/me/sessions/sign-out-everywhere': 'signedIn',
   'POST /api/invitations': 'admin',
   'GET /api/invitations': 'admin',
   'DELETE /api/invitations/:id': 'admin',
@@ -147,7 +154,7 @@ describe('role × route matrix', () => {
       it(`${key} as ${who} → ${allowed ? 'allowed' : who === 'anonymous' ? '401' : '403'}`, async () => {
         const [method, path] = key.split(' ') as [string, string];
         // Skip calls that would end the shared sessions; their access rule is still checked for refusals.
-        if (allowed && (key === 'POST /api/auth/sign-out' || key.startsWith('DELETE '))) return;
+        if (allowed && (key === 'POST /api/auth/sign-out' || key === 'POST /api/me/sessions/sign-out-everywhere' || key.startsWith('DELETE '))) return;
         const url = path.replace(/:(\w+)/g, (_m, name: string) => (name === 'version' ? '1' : 'no-such-id'));
         const res = await agents[who][method.toLowerCase() as 'get'](url);
         if (allowed) {

@@ -1,9 +1,9 @@
 import { readFileSync } from 'node:fs';
 import type request from 'supertest';
 
-/** The example scenario of the engine's contract (shared/scenarios/check-1.json). */
+/** The example scenario of the engine's contract (tests/fixtures/check-1.json, a test fixture, not a preset). */
 export function checkScenario(overrides: Record<string, unknown> = {}): Record<string, unknown> {
-  const doc = JSON.parse(readFileSync(new URL('../../shared/scenarios/check-1.json', import.meta.url), 'utf8')) as Record<string, unknown>;
+  const doc = JSON.parse(readFileSync(new URL('../../tests/fixtures/check-1.json', import.meta.url), 'utf8')) as Record<string, unknown>;
   return { ...doc, ...overrides };
 }
 
@@ -19,7 +19,10 @@ export async function waitForRun(agent: request.Agent, runId: string, timeoutMs 
   }
 }
 
-export async function createScenario(agent: request.Agent, document: Record<string, unknown>, name = 'Check scenario'): Promise<string> {
+let scenariosMade = 0;
+
+/** Creates a scenario; without a name each gets its own ("Check scenario 1", "Check scenario 2", …), as names are unique per department. */
+export async function createScenario(agent: request.Agent, document: Record<string, unknown>, name = `Check scenario ${++scenariosMade}`): Promise<string> {
   const res = await agent.post('/api/scenarios').send({ name, document });
   if (res.status !== 201) throw new Error(`create scenario: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body.id as string;

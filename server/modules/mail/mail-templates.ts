@@ -97,13 +97,12 @@ export function runFinishedEmail(input: {
   name: string;
   scenarioName: string;
   systems: number;
-  fraction: number | null;
-  fractionSe: number | null;
+  /** The predicted fraction as text (fractionOrLimitText): value ± Monte Carlo error, or the 95% upper limit when none was drawn; null without white dwarfs. */
+  fraction: string | null;
   link: string;
   settingsLink: string;
 }): Content {
-  const fraction =
-    input.fraction === null ? 'no white dwarfs formed' : `${(input.fraction * 100).toFixed(3)}% ± ${((input.fractionSe ?? 0) * 100).toFixed(3)}% (Monte Carlo standard error)`;
+  const fraction = input.fraction === null ? 'no white dwarfs formed' : input.fraction.includes('upper limit') ? input.fraction : `${input.fraction} (Monte Carlo standard error)`;
   return {
     subject: `Run finished: ${input.scenarioName}`,
     ...render({
@@ -162,6 +161,62 @@ export function receiptEmail(input: {
       ],
       action: { label: 'See credits and receipts', url: input.link },
       footer: 'You get this because you bought credit for your department on Tidefield. Keep it for your records.',
+    }),
+  };
+}
+
+export function sweepFinishedEmail(input: {
+  name: string;
+  sweepName: string;
+  points: number;
+  succeeded: number;
+  failed: number;
+  cancelled: number;
+  systems: number;
+  /** The smallest and largest predicted fraction over the succeeded points, as text ("< 0.0012% (95% upper limit, …)" for none drawn). */
+  lowest: string | null;
+  highest: string | null;
+  link: string;
+  settingsLink: string;
+}): Content {
+  const details: [string, string][] = [
+    ['Grid points', count(input.points)],
+    ['Succeeded', count(input.succeeded)],
+    ...(input.failed > 0 ? ([['Failed', count(input.failed)]] as [string, string][]) : []),
+    ...(input.cancelled > 0 ? ([['Cancelled', count(input.cancelled)]] as [string, string][]) : []),
+    ['Systems per point', count(input.systems)],
+    ...(input.lowest !== null && input.highest !== null
+      ? ([
+          ['Lowest predicted fraction', input.lowest],
+          ['Highest predicted fraction', input.highest],
+        ] as [string, string][])
+      : []),
+  ];
+  return {
+    subject: `Sweep finished: ${input.sweepName}`,
+    ...render({
+      heading: `Your sweep ${input.sweepName} has finished`,
+      paragraphs: [
+        `Hello ${input.name}, every grid point of the sweep has ended and its results are stored. This is the one e-mail for the whole sweep; its points send none of their own.`,
+      ],
+      details,
+      action: { label: 'Open the sweep', url: input.link },
+      footer: `You get this because run notices are on for your account. Switch them off at ${input.settingsLink}`,
+    }),
+  };
+}
+
+export function emailChangeEmail(input: { name: string; oldEmail: string; link: string; expiresAt: Date }): Content {
+  return {
+    subject: 'Confirm your new Tidefield address',
+    ...render({
+      heading: 'Confirm your new e-mail address',
+      paragraphs: [
+        `Hello ${input.name}, you asked to use this address for your Tidefield account instead of ${input.oldEmail}.`,
+        `The link works once and until ${formatUtc(input.expiresAt)}. Until it is opened, you sign in with the old address.`,
+      ],
+      action: { label: 'Use this address', url: input.link },
+      footer: 'If you did not ask for this, ignore this e-mail: the account keeps its old address.',
     }),
   };
 }

@@ -1,3 +1,4 @@
+import { nearestColumn } from './column-suggestion.ts';
 import Papa from 'papaparse';
 import {
   OCCURRENCE_CSV_COLUMNS,
@@ -31,7 +32,11 @@ export function parseOccurrenceCsv(text: string): ParsedCsv {
   const missing = OCCURRENCE_CSV_REQUIRED.filter((c) => !header.includes(c));
   const unknown = header.filter((h) => !(OCCURRENCE_CSV_COLUMNS as readonly string[]).includes(h));
   for (const c of missing) problems.push({ line: 1, column: c, message: `the header has no column ${c} (required: ${OCCURRENCE_CSV_REQUIRED.join(', ')})` });
-  for (const c of unknown) problems.push({ line: 1, column: c, message: `the header has an unknown column ${c} (allowed: ${OCCURRENCE_CSV_COLUMNS.join(', ')})` });
+  for (const c of unknown) {
+    const suggestion = nearestColumn(c, OCCURRENCE_CSV_COLUMNS);
+    const hint = suggestion ? `did you mean ${suggestion}? ` : '';
+    problems.push({ line: 1, column: c, message: `the header has an unknown column ${c} (${hint}allowed: ${OCCURRENCE_CSV_COLUMNS.join(', ')})` });
+  }
   if (problems.length > 0) return { rows: [], problems, rowCount: parsed.data.length };
   if (parsed.data.length === 0) {
     return { rows: [], problems: [{ line: 2, message: 'the file has no rows below its header; add at least one companion row' }], rowCount: 0 };

@@ -39,17 +39,17 @@ export function occurrenceTablesRoutes(registry: RouteRegistry, tables: Occurren
   }, async ({ auth }) => ({ tables: await tables.list(auth) }));
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/', tag, access: 'modeller', status: 201, summary: 'Create a table from JSON rows',
+    method: 'post', path: '/', tag, access: 'observer', status: 201, summary: 'Create a table from JSON rows',
     body: createTableBodySchema, response: idResponseSchema,
   }, ({ auth, body }) => tables.create(auth, body));
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/preview', tag, access: 'modeller', summary: 'Check a CSV (multipart field "file", at most 1 MB) without storing it',
+    method: 'post', path: '/preview', tag, access: 'observer', summary: 'Check a CSV (multipart field "file", at most 1 MB) without storing it',
     before: [csvUpload()], response: tablePreviewResponseSchema, produces: 'multipart/form-data',
   }, ({ req }) => tables.preview(fileText(req)));
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/upload', tag, access: 'modeller', status: 201,
+    method: 'post', path: '/upload', tag, access: 'observer', status: 201,
     summary: 'Store a CSV (multipart: file, name, description) as a new table; nothing is stored if any row has a problem',
     before: [csvUpload()], body: uploadTableFieldsSchema, response: idResponseSchema, produces: 'multipart/form-data',
   }, ({ auth, req, body }) => tables.upload(auth, body, fileText(req)));
@@ -59,12 +59,12 @@ export function occurrenceTablesRoutes(registry: RouteRegistry, tables: Occurren
   }, ({ auth, params }) => tables.detail(auth, params.id));
 
   defineRoute(router, registry, mount, {
-    method: 'patch', path: '/:id', tag, access: 'modeller', summary: "Rename a table, or replace its rows (edit)",
+    method: 'patch', path: '/:id', tag, access: 'observer', summary: "Rename a table, or replace its rows (edit)",
     params: idParamsSchema, body: updateTableBodySchema, response: tableDetailSchema,
   }, ({ auth, params, body }) => tables.update(auth, params.id, body));
 
   defineRoute(router, registry, mount, {
-    method: 'delete', path: '/:id', tag, access: 'modeller', status: 204, summary: 'Delete a table', params: idParamsSchema,
+    method: 'delete', path: '/:id', tag, access: 'observer', status: 204, summary: 'Delete a table', params: idParamsSchema,
   }, async ({ auth, params }) => {
     await tables.remove(auth, params.id);
   });

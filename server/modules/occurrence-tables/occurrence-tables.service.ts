@@ -3,6 +3,8 @@ import type { CreateTableBody, TableDetail, TableSummary, UpdateTableBody } from
 import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { recordAudit } from '../audit/audit.service.ts';
+import { roleAtLeast } from '../../../shared/contracts/roles.ts';
+import { forbidden } from '../../lib/errors.ts';
 import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import { formatOccurrenceCsv, parseOccurrenceCsv } from './occurrence-csv.ts';
 import { CsvInvalidError, tableNotFound } from './occurrence-tables.errors.ts';
@@ -18,6 +20,13 @@ function summary(t: TableRow): TableSummary {
     createdAt: t.createdAt.toISOString(),
     updatedAt: t.updatedAt.toISOString(),
   };
+}
+
+/** Observers upload their own tables and change only those; modellers and admins change any of the department's. */
+function requireEditable(auth: RequestAuth, table: TableRow) {
+  if (table.ownerUserId !== auth.user.id && !roleAtLeast(auth.role!, 'modeller')) {
+    throw forbidden('Observers can change or delete only the occurrence tables they uploaded themselves; ask a modeller to change this one.');
+  }
 }
 
 export function createOccurrenceTablesService(db: Db) {
@@ -63,6 +72,7 @@ export function createOccurrenceTablesService(db: Db) {
       await db.transaction(async (tx) => {
         const table = await findTable(tx, department.id, id);
         if (!table) throw tableNotFound();
+        requireEditable(auth, table);
         await updateTable(tx, id, {
           updatedAt: new Date(),
           ...(body.name ? { name: body.name } : {}),
@@ -78,7 +88,9 @@ export function createOccurrenceTablesService(db: Db) {
     async remove(auth: RequestAuth, id: string) {
       const department = departmentOf(auth);
       await db.transaction(async (tx) => {
-        if (!(await findTable(tx, department.id, id))) throw tableNotFound();
+        const table = await findTable(tx, department.id, id);
+        if (!table) throw tableNotFound();
+        requireEditable(auth, table);
         await deleteTable(tx, id);
         await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'table.deleted', target: id });
       });

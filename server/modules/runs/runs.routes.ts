@@ -7,6 +7,7 @@ import {
   compareQuerySchema,
   createRunBodySchema,
   impliedOccurrenceBodySchema,
+  runAgainBodySchema,
   runListQuerySchema,
   runListResponseSchema,
   runSummarySchema,
@@ -72,6 +73,12 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
     method: 'post', path: '/runs/:id/resume', tag, access: 'observer', status: 201, params: idParamsSchema, response: idResponseSchema,
     summary: 'Continue a failed run from the chunks it computed, as a new run (its owner, or a modeller)',
   }, ({ auth, params }) => runs.resume(auth, params.id));
+
+  defineRoute(router, registry, mount, {
+    method: 'post', path: '/runs/:id/again', tag, access: 'observer', status: 201,
+    summary: "Queue the run's own scenario document again (a sweep's point keeps its values), optionally with another size or seed",
+    params: idParamsSchema, body: runAgainBodySchema, response: idResponseSchema,
+  }, ({ auth, params, body }) => runs.again(auth, params.id, body));
 
   defineRoute(router, registry, mount, {
     method: 'delete', path: '/runs/:id', tag, access: 'observer', status: 204, summary: 'Delete one of your runs (admins: any)', params: idParamsSchema,

@@ -19,6 +19,9 @@ import type { ScenariosService } from '../scenarios/scenarios.service.ts';
 import { compareRunWithSample } from './comparison.ts';
 import { methodsParagraph, resultCsv } from './run-exports.ts';
 import type { RunScheduler } from './run-scheduler.ts';
+import { eq } from 'drizzle-orm';
+import { sweepPointText, sweepPointValues } from '../../../shared/contracts/sweep-point.ts';
+import { sweeps } from '../sweeps/sweeps.table.ts';
 import { deleteRun, findRun, findRunsByIds, insertRun, listRuns, loadCheckpoint, loadResult, saveCheckpoint, type RunRow } from './runs.repository.ts';
 
 export const runNotFound = () => notFound('That run');
@@ -174,6 +177,15 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
     return { run: found.run, result: JSON.parse(text) as ScenarioResult };
   }
 
+  /** For a sweep's grid point: the sweep's name, the point's number and its parameter values (null for other runs). */
+  async function sweepPointOf(run: RunRow) {
+    if (!run.sweepId || run.sweepPointIndex === null) return null;
+    const [sweep] = await db.select().from(sweeps).where(eq(sweeps.id, run.sweepId)).limit(1);
+    const values = sweep ? sweepPointValues(sweep.axes, run.sweepPointIndex) : null;
+    if (!sweep || !values) return null;
+    return { sweepId: sweep.id, sweepName: sweep.name, number: run.sweepPointIndex + 1, pointCount: sweep.pointCount, values };
+  }
+
   return {
     snapshotOf,
     enqueue,
@@ -199,7 +211,7 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
     async detail(auth: RequestAuth, id: string): Promise<RunSummary> {
       const found = await findRun(db, departmentOf(auth).id, id);
       if (!found) throw runNotFound();
-      return toRunSummary(found.run, found.ownerName, scheduler.live(id));
+      return { ...toRunSummary(found.run, found.ownerName, scheduler.live(id)), sweepPoint: await sweepPointOf(found.run) };
     },
 
     /** The owner or any modeller may cancel a queued or running run. */
@@ -322,9 +334,35 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       return resultCsv((await finishedResult(departmentOf(auth).id, id)).result);
     },
 
+    /**
+     * The methods paragraph of the run's own scenario document (for a sweep's point, the point's
+     * document: the base scenario with the point's values set), opened for a point by a sentence
+     * naming its values, so that a copied paragraph describes the model that was run.
+     */
     async methods(auth: RequestAuth, id: string) {
       const { run, result } = await finishedResult(departmentOf(auth).id, id);
-      return methodsParagraph(parseScenario(run.snapshot), result, id);
+      const paragraph = methodsParagraph(parseScenario(run.snapshot), result, id);
+      const point = await sweepPointOf(run);
+      if (!point) return paragraph;
+      return `This run is grid point ${point.number} of ${point.pointCount} of the parameter sweep "${point.sweepName}", with ${sweepPointText(point.values)}; everything below describes the scenario at these values. ${paragraph}`;
+    },
+
+    /**
+     * Runs a finished or stopped run's own scenario document again (a sweep's point keeps its
+     * values), optionally with another size or seed. The new run stands alone, outside any sweep;
+     * its name carries the point's values.
+     */
+    async again(auth: RequestAuth, id: string, overrides: { systems?: number; seed?: string }): Promise<{ id: string }> {
+      const department = departmentOf(auth);
+      const found = await findRun(db, department.id, id);
+      if (!found) throw runNotFound();
+      const { run } = found;
+      const snapshot = await snapshotOf(department.id, parseScenario(run.snapshot), overrides);
+      const point = await sweepPointOf(run);
+      const scenarioName = (point ? `${run.scenarioName} · ${sweepPointText(point.values)}` : run.scenarioName).slice(0, 160);
+      const newId = await enqueue(auth, { scenarioId: run.scenarioId, scenarioVersion: run.scenarioVersion, scenarioName }, snapshot);
+      scheduler.wake();
+      return { id: newId };
     },
 
     /** The observer's question in one call: run the scenario (or reuse an identical finished run) for a sample. */
@@ -335,6 +373,15 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       requireAllWhiteDwarfs(sample, 'sampleId');
       const source = await scenarios.resolve(department.id, body.scenarioId);
       const snapshot = await snapshotOf(department.id, source.scenario, { systems: body.systems, seed: body.seed });
+      // The answer scales the scenario's companion occurrences; with none there is nothing to
+      // scale, so refuse before spending a run on it.
+      const rows = snapshot.companions.rows ?? [];
+      if (!rows.some((r) => r.occurrence > 0)) {
+        throw badRequest(
+          `The scenario "${source.name}" has no occurrence table to scale (${rows.length === 0 ? 'it lists no companion rows' : 'every companion row has occurrence 0'}), so no occurrence can be implied. Choose a scenario with companions, or add an occurrence table to this one.`,
+          'scenarioId',
+        );
+      }
       const id = await enqueue(auth, { scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: source.name }, snapshot);
       scheduler.wake();
       return { runId: id, sampleId: sample.id };

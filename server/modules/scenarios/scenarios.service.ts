@@ -23,6 +23,7 @@ import {
   type ScenarioRow,
   type ScenarioVersionRow,
 } from './scenarios.repository.ts';
+import { requireUniqueName, uniqueName } from './scenario-names.ts';
 
 /** Checks that a stored occurrence table a document names belongs to the department. */
 export type TableExists = (departmentId: string, tableId: string) => Promise<boolean>;
@@ -78,6 +79,7 @@ export function createScenariosService(db: Db, tableExists: TableExists) {
   async function create(auth: RequestAuth, body: CreateScenarioBody): Promise<{ id: string }> {
     const department = departmentOf(auth);
     const parsed = await checkedDocument(department.id, body.document);
+    await requireUniqueName(db, department.id, body.name);
     const id = newId();
     const now = new Date();
     await db.transaction(async (tx) => {
@@ -122,6 +124,7 @@ export function createScenariosService(db: Db, tableExists: TableExists) {
     async update(auth: RequestAuth, id: string, body: UpdateScenarioBody): Promise<ScenarioDetail> {
       const department = departmentOf(auth);
       const parsed = body.document ? await checkedDocument(department.id, body.document) : undefined;
+      if (body.name) await requireUniqueName(db, department.id, body.name, id);
       await db.transaction(async (tx) => {
         const locked = await lockScenario(tx, department.id, id);
         if (!locked) throw scenarioNotFound();
@@ -143,8 +146,9 @@ export function createScenariosService(db: Db, tableExists: TableExists) {
     },
 
     async clone(auth: RequestAuth, id: string, name?: string): Promise<{ id: string }> {
-      const source = await detail(departmentOf(auth).id, id);
-      return create(auth, { name: name ?? `Copy of ${source.name}`.slice(0, 160), document: source.document, note: `Cloned from "${source.name}" version ${source.currentVersion}` });
+      const departmentId = departmentOf(auth).id;
+      const source = await detail(departmentId, id);
+      return create(auth, { name: name ?? (await uniqueName(db, departmentId, `Copy of ${source.name}`.slice(0, 160))), document: source.document, note: `Cloned from "${source.name}" version ${source.currentVersion}` });
     },
 
     async remove(auth: RequestAuth, id: string): Promise<void> {

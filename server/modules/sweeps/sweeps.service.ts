@@ -1,6 +1,7 @@
 import { and, desc, eq } from 'drizzle-orm';
 import { SWEEPABLE_PARAMETERS, ScenarioValidationError, withParameter, type Scenario } from '../../../shared/contracts/scenario.ts';
 import type { Sample } from '../../../shared/contracts/samples.ts';
+import { gridPoints } from '../../../shared/contracts/sweep-point.ts';
 import type { CreateSweepBody, SweepDetail, SweepSummary } from '../../../shared/contracts/sweeps.ts';
 import { binomialTestTwoSided } from '../../../shared/engine/stats/binomial-test.ts';
 import type { Db } from '../../db/client.ts';
@@ -22,10 +23,6 @@ type RunRow = Awaited<ReturnType<typeof runsOfSweep>>[number];
 
 export const sweepNotFound = () => notFound('That sweep');
 
-/** Every grid point of the axes, row-major (the last axis varies fastest). */
-export function gridPoints(axes: { values: number[] }[]): number[][] {
-  return axes.reduce<number[][]>((points, axis) => points.flatMap((p) => axis.values.map((v) => [...p, v])), [[]]);
-}
 
 function sweepStatus(points: RunRow[]): SweepSummary['status'] {
   if (points.some((p) => p.status === 'running')) return 'running';

@@ -156,7 +156,7 @@ const powerLawCdf = (lo: number, hi: number, b: number) => (p: number) => {
 
 describe('kernel against direct integration of the scenario semantics', { timeout: 60_000 }, () => {
   it('the issue example (check-1): burst, Salpeter-slope power law, one planet row, fixedReach 2 AU', () => {
-    const s = parseScenario(JSON.parse(readFileSync(new URL('../../scenarios/check-1.json', import.meta.url), 'utf8')));
+    const s = parseScenario(JSON.parse(readFileSync(new URL('../../../tests/fixtures/check-1.json', import.meta.url), 'utf8')));
     const row = s.companions.rows![0];
     const planets: RowSpec = {
       occurrence: row.occurrence,

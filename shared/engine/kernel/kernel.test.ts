@@ -13,7 +13,7 @@ import { scenarioHash } from './scenario-hash.ts';
 import { addTally, type ChunkTally } from './tally.ts';
 
 const checkOne = (overrides: Record<string, unknown> = {}): Scenario =>
-  parseScenario({ ...JSON.parse(readFileSync(new URL('../../scenarios/check-1.json', import.meta.url), 'utf8')), ...overrides });
+  parseScenario({ ...JSON.parse(readFileSync(new URL('../../../tests/fixtures/check-1.json', import.meta.url), 'utf8')), ...overrides });
 
 function tallies(s: Scenario): ChunkTally[] {
   const prepared = prepareScenario(s);
@@ -172,7 +172,7 @@ describe('other options run and respond as they should', { timeout: 60_000 }, ()
 
 describe('scenario hash, methods and assumptions', () => {
   it('hashes the meaning of a scenario: key order, written-out defaults and labels do not matter', () => {
-    const raw = JSON.parse(readFileSync(new URL('../../scenarios/check-1.json', import.meta.url), 'utf8'));
+    const raw = JSON.parse(readFileSync(new URL('../../../tests/fixtures/check-1.json', import.meta.url), 'utf8'));
     const reordered = Object.fromEntries(Object.entries(raw).reverse());
     const h = scenarioHash(parseScenario(raw));
     expect(h).toMatch(/^[0-9a-f]{64}$/);

@@ -2,7 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { Link, useLocation, useNavigate, useSearchParams } from 'react-router-dom';
 import { LoadingState } from '../../components/ui/loading-state.tsx';
 import { paths } from '../../config/paths.ts';
-import { getMeQueryOptions, isMeQuery, useMe } from '../../features/auth/api/get-me.ts';
+import { getMeQueryOptions, isMeQuery, useMe } from '../../lib/api/get-me.ts';
 import { AuthLayout } from '../../features/auth/components/auth-layout.tsx';
 import { SignOutButton } from '../../features/auth/components/sign-out-button.tsx';
 import { AcceptInvitationPanel } from '../../features/invitations/components/accept-invitation-panel.tsx';

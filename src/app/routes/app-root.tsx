@@ -2,7 +2,7 @@ import { Navigate, useLocation } from 'react-router-dom';
 import { ErrorState } from '../../components/ui/error-state.tsx';
 import { LoadingState } from '../../components/ui/loading-state.tsx';
 import { paths } from '../../config/paths.ts';
-import { useMe } from '../../features/auth/api/get-me.ts';
+import { useMe } from '../../lib/api/get-me.ts';
 import { hasActiveDepartment } from '../../lib/active-me.ts';
 import { AppShell } from '../shell/app-shell.tsx';
 import { NoDepartment } from '../shell/no-department.tsx';

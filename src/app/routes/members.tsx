@@ -1,6 +1,6 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { PageHeader } from '../../components/ui/page-header.tsx';
-import { getMeQueryOptions } from '../../features/auth/api/get-me.ts';
+import { getMeQueryOptions } from '../../lib/api/get-me.ts';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
 import { InviteMemberForm } from '../../features/members/components/invite-member-form.tsx';
 import { MembersPanel } from '../../features/members/components/members-panel.tsx';

@@ -31,7 +31,8 @@ export function Component() {
 function TablePage({ table }: { table: TableDetail }) {
   const me = useSignedInMe();
   const navigate = useNavigate();
-  const canWrite = roleAtLeast(me.role, 'modeller');
+  // Observers change only the tables they uploaded; the server checks the same rule.
+  const canWrite = roleAtLeast(me.role, 'modeller') || table.ownerUserId === me.user.id;
   const remove = useDeleteTable(me.department.id);
   const [confirming, setConfirming] = useState(false);
   return (

@@ -1,5 +1,4 @@
 import { useNavigate } from 'react-router-dom';
-import { roleAtLeast } from '../../../shared/contracts/roles.ts';
 import { Card } from '../../components/ui/card.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { paths } from '../../config/paths.ts';
@@ -11,7 +10,6 @@ import { TablesList } from '../../features/tables/components/tables-list.tsx';
 export function Component() {
   const me = useSignedInMe();
   const navigate = useNavigate();
-  const canWrite = roleAtLeast(me.role, 'modeller');
   const open = (id: string) => navigate(paths.occurrenceTables.detail.getHref(id));
   return (
     <>
@@ -24,16 +22,13 @@ export function Component() {
         <Card title="Stored tables">
           <TablesList departmentId={me.department.id} />
         </Card>
-        {canWrite ? (
-          <>
-            <CsvUploadCard departmentId={me.department.id} onStored={open} />
-            <Card title="Start an empty table" description="To type the rows in by hand.">
-              <NewTableForm departmentId={me.department.id} onCreated={open} />
-            </Card>
-          </>
-        ) : (
-          <p className="text-foam-300">Your role can read and download tables; a modeller or an admin can upload and edit them.</p>
+        {me.role === 'observer' && (
+          <p className="text-foam-300">As an observer you upload your own tables and edit or delete only those; everyone in the department can read and download every table.</p>
         )}
+        <CsvUploadCard departmentId={me.department.id} onStored={open} />
+        <Card title="Start an empty table" description="To type the rows in by hand.">
+          <NewTableForm departmentId={me.department.id} onCreated={open} />
+        </Card>
       </div>
     </>
   );

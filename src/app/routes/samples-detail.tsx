@@ -1,5 +1,5 @@
 import { useState, type ReactNode } from 'react';
-import { Link, useNavigate, useParams } from 'react-router-dom';
+import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import type { Sample } from '../../../shared/contracts/samples.ts';
 import { Alert } from '../../components/ui/alert.tsx';
 import { Button } from '../../components/ui/button.tsx';
@@ -16,6 +16,7 @@ import { SampleForm } from '../../features/samples/components/sample-form.tsx';
 import { IllustrativeBadge, LibraryEntry } from '../../features/samples/components/samples-panels.tsx';
 import { SampleSplitsTable } from '../../features/samples/components/sample-splits-table.tsx';
 import { formatDateTimeUtc } from '../../lib/format.ts';
+import { SampleTestCard } from '../../features/runs/components/sample-test-card.tsx';
 
 export function Component() {
   const me = useSignedInMe();
@@ -24,14 +25,28 @@ export function Component() {
   const back = <Link to={paths.samples.getHref()}>Samples</Link>;
   return (
     <QueryState query={sample} loadingLabel="Loading the sample…" errorTitle="The sample could not be loaded">
-      {(s) =>
-        s.library ? (
-          <LibraryPage sample={s} eyebrow={back} />
-        ) : (
-          <EditPage sample={s} eyebrow={back} departmentId={me.department.id} />
-        )
-      }
+      {(s) => (
+        <>
+          {s.library ? <LibraryPage sample={s} eyebrow={back} /> : <EditPage sample={s} eyebrow={back} departmentId={me.department.id} />}
+          <TestAgainstRun departmentId={me.department.id} sampleId={s.id} />
+        </>
+      )}
     </QueryState>
+  );
+}
+
+/** The chosen run lives in the address bar, so that a link shows the same test. */
+function TestAgainstRun({ departmentId, sampleId }: { departmentId: string; sampleId: string }) {
+  const [search, setSearch] = useSearchParams();
+  return (
+    <div id="test" className="mt-6 scroll-mt-6">
+      <SampleTestCard
+        departmentId={departmentId}
+        sampleId={sampleId}
+        runId={search.get('run')}
+        onRunChange={(run) => setSearch({ run }, { replace: true, preventScrollReset: true })}
+      />
+    </div>
   );
 }
 

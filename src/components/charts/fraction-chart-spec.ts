@@ -103,9 +103,11 @@ export function fractionChartSpec(input: FractionChartInput): VisualizationSpec 
   });
 
   return {
-    // The height follows the rows; only the width fits the container.
+    // The height follows the rows; only the width fits the container. A fixed height (rows ×
+    // step) rather than a step size: vega-lite warns about "fit-y" for a step height even when
+    // only fit-x is asked for.
     autosize: { type: 'fit-x', contains: 'padding' },
-    height: { step: rowHeight },
+    height: rowHeight * categories.length * (grouped ? input.series!.length : 1),
     data: { values: rows },
     encoding: { y, ...yOffset },
     layer: [

@@ -36,6 +36,14 @@ describe('responseCurveSpec', () => {
     expect(line.encoding.x.title).toBe(base.xTitle);
   });
 
+  it('draws a quoted fraction without intervals as its dashed line (regression: listed in the key but not drawn)', () => {
+    const spec = responseCurveSpec({ ...base, band: { name: 'About 10%', fraction: 0.1, interval68: null, interval95: null } }) as unknown as { layer: Layer[] };
+    expect(spec.layer.filter((l) => l.mark.type === 'rect')).toHaveLength(0);
+    const observed = spec.layer.filter((l) => l.mark.type === 'rule' && l.data.values.some((v) => v.name === 'About 10%'));
+    expect(observed).toHaveLength(1);
+    expect(observed[0].data.values[0].fraction).toBe(0.1);
+  });
+
   it('draws a range of a single grid value as a line, and error bars only when points carry errors', () => {
     const spec = responseCurveSpec({ ...base, allowed: { level68: [1, 1], level95: null } }) as unknown as { layer: Layer[] };
     expect(spec.layer[0].mark.type).toBe('rule');

@@ -167,9 +167,10 @@ export function responseCurveSpec(input: ResponseCurveInput): VisualizationSpec 
       },
     });
   }
-  if (bands.length > 0 && input.band) {
-    layers.push(
-      {
+  // The observed value is drawn whenever there is a sample, also a quoted fraction without intervals.
+  if (input.band) {
+    if (bands.length > 0) {
+      layers.push({
         data: { values: bands },
         mark: { type: 'rect', color: RESPONSE_CURVE_COLOURS.observed },
         encoding: {
@@ -178,13 +179,13 @@ export function responseCurveSpec(input: ResponseCurveInput): VisualizationSpec 
           opacity: opacityByLevel,
           tooltip: [{ field: 'level', title: 'Observed interval' }, { field: 'lo', title: 'from', format: '.2%' }, { field: 'hi', title: 'to', format: '.2%' }],
         },
-      },
-      {
-        data: { values: [{ fraction: input.band.fraction, name: input.band.name }] },
-        mark: { type: 'rule', strokeDash: [8, 5], strokeWidth: 2, color: RESPONSE_CURVE_COLOURS.observed },
-        encoding: { y: y('fraction'), tooltip: [{ field: 'name', title: 'Observed' }, { field: 'fraction', title: 'fraction', format: '.2%' }] },
-      },
-    );
+      });
+    }
+    layers.push({
+      data: { values: [{ fraction: input.band.fraction, name: input.band.name }] },
+      mark: { type: 'rule', strokeDash: [8, 5], strokeWidth: 2, color: RESPONSE_CURVE_COLOURS.observed },
+      encoding: { y: y('fraction'), tooltip: [{ field: 'name', title: 'Observed' }, { field: 'fraction', title: 'fraction', format: '.2%' }] },
+    });
   }
   if (input.marker) {
     layers.push(

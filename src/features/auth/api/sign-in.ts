@@ -1,7 +1,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { meResponseSchema, type SignInBody } from '../../../../shared/contracts/auth.ts';
 import { api } from '../../../lib/api-client.ts';
-import { useSetMe } from './get-me.ts';
+import { useSetMe } from '../../../lib/api/get-me.ts';
 
 /** 401 on wrong credentials, 429 after too many attempts (the message says when to retry). */
 export function signIn(body: SignInBody) {

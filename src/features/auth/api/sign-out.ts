@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, isApiError } from '../../../lib/api-client.ts';
-import { isMeQuery, useSetMe } from './get-me.ts';
+import { isMeQuery, useSetMe } from '../../../lib/api/get-me.ts';
 
 /** Ends the session (204). A 401 means it had already ended, which is just as good. */
 export async function signOut(): Promise<void> {

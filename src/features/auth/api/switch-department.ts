@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { meResponseSchema } from '../../../../shared/contracts/auth.ts';
 import { api } from '../../../lib/api-client.ts';
-import { isMeQuery, useSetMe } from './get-me.ts';
+import { isMeQuery, useSetMe } from '../../../lib/api/get-me.ts';
 
 /** Makes another of the user's departments the active one; answers the new MeResponse. */
 export function switchDepartment(departmentId: string) {

@@ -1,6 +1,6 @@
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { redirectTargetFrom } from '../../../config/paths.ts';
-import { useMe } from '../api/get-me.ts';
+import { useMe } from '../../../lib/api/get-me.ts';
 
 /**
  * For the sign-in and sign-up pages: where to go afterwards (the page the guard came from,

@@ -1,5 +1,5 @@
 import { hasActiveDepartment, type ActiveMe } from '../../../lib/active-me.ts';
-import { useMe } from '../api/get-me.ts';
+import { useMe } from '../../../lib/api/get-me.ts';
 
 /** The session behind the sign-in guard, which only lets users with a department through. */
 export function useSignedInMe(): ActiveMe {

@@ -12,14 +12,15 @@ export const ROLE_ABILITIES: Record<Role, readonly Ability[]> = {
   observer: [
     { text: "Read the department's scenarios, runs and sweeps, and start small runs.", page: { key: 'runs', label: 'Runs' } },
     {
-      text: 'Keep observed samples and test them against a predicted magnetic fraction.',
-      page: { key: 'compare', label: 'Compare' },
+      text: 'Keep observed samples and test each against a finished run’s predicted magnetic fraction (“Test against a run” on the sample’s page).',
+      page: { key: 'samples', label: 'Samples' },
     },
+    { text: 'Set two to four finished runs side by side.', page: { key: 'compare', label: 'Compare' } },
     {
       text: 'Find the companion occurrence that a measured magnetic fraction would require.',
       page: { key: 'impliedOccurrence', label: 'Implied occurrence' },
     },
-    { text: 'Upload occurrence tables of planets, brown dwarfs and stellar companions.', page: { key: 'occurrenceTables', label: 'Occurrence tables' } },
+    { text: 'Upload your own occurrence tables of planets, brown dwarfs and stellar companions, and edit or delete them.', page: { key: 'occurrenceTables', label: 'Occurrence tables' } },
   ],
   modeller: [
     {

@@ -59,8 +59,9 @@ export function comparisonChartSpec(rows: readonly ComparedRow[]): Visualization
   const x = (field: string) => ({ field, type: 'quantitative', title: 'Magnetic fraction (% of white dwarfs)', axis: { format: '.2~%', tickCount: 6, labelOverlap: 'greedy' }, scale: { zero: true, nice: true } });
   return {
     autosize: { type: 'fit-x', contains: 'padding' },
-    // With yOffset the step is per sub-row (observed, predicted).
-    height: { step: 24 },
+    // 24 px per sub-row (observed, predicted), as a fixed height: vega-lite warns about
+    // "fit-y" for a step height even when only fit-x is asked for.
+    height: 24 * values.length,
     data: { values },
     encoding: {
       y: { field: 'label', type: 'nominal', title: null, sort: null, axis: { labelLimit: 150 } },

@@ -1,10 +1,10 @@
 import type { ResultFraction, ScenarioResult } from '../../../../shared/contracts/result.ts';
-import { formatPercentWithError } from '../../../../shared/engine/stats/format.ts';
+import { fractionOrLimitText } from '../../../../shared/engine/stats/fraction-text.ts';
 import { formatCount } from './run-text.ts';
 
 /** "9.03% ± 0.09%", or a dash when there were no white dwarfs to count. */
 export function fractionWithError(f: ResultFraction): string {
-  return f.value === null || f.se === null ? '—' : formatPercentWithError(f.value, f.se);
+  return f.value === null || f.se === null ? '—' : (fractionOrLimitText(f.k, f.n, f.se) ?? '—');
 }
 
 /** The run's answer in one line: the magnetic fraction with its Monte Carlo error, and what it counts. */

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import type { RunSummary } from '../../../../shared/contracts/runs.ts';
+import { sweepPointText } from '../../../../shared/contracts/sweep-point.ts';
 import { roleAtLeast, type Role } from '../../../../shared/contracts/roles.ts';
 import { Alert } from '../../../components/ui/alert.tsx';
 import { buttonClasses } from '../../../components/ui/button.tsx';
@@ -77,11 +78,20 @@ export function RunPage({ departmentId, runId, userId, role, sampleId, onSampleC
 
   const r = run.data;
   const canCancel = r.ownerUserId === userId || roleAtLeast(role, 'modeller');
+  const point = r.sweepPoint ?? null;
   return (
     <>
       <PageHeader
-        eyebrow={runsLink}
-        title={r.scenarioName}
+        eyebrow={
+          point ? (
+            <>
+              {runsLink} / <Link to={paths.sweeps.detail.getHref(point.sweepId)}>Sweep “{point.sweepName}”</Link>
+            </>
+          ) : (
+            runsLink
+          )
+        }
+        title={point ? `${r.scenarioName} · ${sweepPointText(point.values)}` : r.scenarioName}
         description={
           <span className="flex flex-wrap items-center gap-x-3 gap-y-1">
             <RunStatusBadge status={r.status} progress={r.progress} />
@@ -91,9 +101,15 @@ export function RunPage({ departmentId, runId, userId, role, sampleId, onSampleC
           </span>
         }
         actions={
-          <Link to={paths.runs.new.getHref(r.scenarioId)} className={buttonClasses({ variant: 'secondary' })}>
-            Run this scenario again
-          </Link>
+          point ? (
+            <Link to={paths.runs.new.again(r.id)} className={buttonClasses({ variant: 'secondary' })}>
+              Run this point again
+            </Link>
+          ) : (
+            <Link to={paths.runs.new.getHref(r.scenarioId)} className={buttonClasses({ variant: 'secondary' })}>
+              Run this scenario again
+            </Link>
+          )
         }
       />
       <RunBody departmentId={departmentId} run={r} source={source} canCancel={canCancel} sampleId={sampleId} onSampleChange={onSampleChange} resultSections={resultSections} exportsSection={exportsSection} />

@@ -1,7 +1,7 @@
 import { useId, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import type { RunSummary } from '../../../../shared/contracts/runs.ts';
-import { formatPercentWithError } from '../../../../shared/engine/stats/format.ts';
+import { fractionOrLimitText } from '../../../../shared/engine/stats/fraction-text.ts';
 import { SortableHeaderCell } from '../../../components/ui/table.tsx';
 import { paths } from '../../../config/paths.ts';
 import { cx } from '../../../lib/class-names.ts';
@@ -23,8 +23,10 @@ export interface RunsTableProps {
   caption: string;
 }
 
-export function fractionText(run: Pick<RunSummary, 'fraction' | 'fractionSe'>): string {
-  return run.fraction === null || run.fractionSe === null ? '—' : formatPercentWithError(run.fraction, run.fractionSe);
+/** The fraction with its Monte Carlo error; the 95% upper limit when no magnetic white dwarf was drawn. */
+export function fractionText(run: Pick<RunSummary, 'fraction' | 'fractionSe' | 'magnetic' | 'whiteDwarfs'>): string {
+  if (run.fraction === null || run.fractionSe === null) return '—';
+  return fractionOrLimitText(run.magnetic ?? 0, run.whiteDwarfs ?? 0, run.fractionSe) ?? '—';
 }
 
 function runName(run: RunSummary): string {

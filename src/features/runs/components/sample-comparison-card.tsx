@@ -165,7 +165,7 @@ function MeanMassView({ meanMass }: { meanMass: NonNullable<RunComparison['meanM
   );
 }
 
-function ComparisonBody({ comparison }: { comparison: RunComparison }) {
+export function ComparisonBody({ comparison }: { comparison: RunComparison }) {
   const { sample } = comparison;
   return (
     <div className="flex flex-col gap-5">

@@ -1,8 +1,7 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { z } from 'zod';
-import { OBSERVER_MAX_SYSTEMS } from '../../../../shared/contracts/pricing.ts';
-import { roleAtLeast, type Role } from '../../../../shared/contracts/roles.ts';
+import type { Role } from '../../../../shared/contracts/roles.ts';
 import { createRunBodySchema } from '../../../../shared/contracts/runs.ts';
 import { Alert } from '../../../components/ui/alert.tsx';
 import { Button } from '../../../components/ui/button.tsx';
@@ -15,6 +14,7 @@ import { paths } from '../../../config/paths.ts';
 import { useSchemaForm } from '../../../hooks/use-schema-form.ts';
 import { useCreateRun } from '../api/create-run.ts';
 import { formatCount, parseSystemsInput } from './run-text.ts';
+import { observerCapMessage, prefilledSystems, systemsCapFor, withSystemsCap } from './systems-cap.ts';
 import { useScenarioChoice, useScenarioChoices } from '../../../lib/api/scenario-choices.ts';
 
 const { systems, seed } = createRunBodySchema.shape;
@@ -49,7 +49,9 @@ export function StartRunForm({ departmentId, role, initialScenarioId, onSystemsC
   const [systemsText, setSystemsText] = useState('');
   const [seedText, setSeedText] = useState('');
   const create = useCreateRun(departmentId);
-  const form = useSchemaForm(startRunFormSchema, async (values) => {
+  const cap = systemsCapFor(role);
+  const schema = useMemo(() => withSystemsCap(startRunFormSchema, cap), [cap]);
+  const form = useSchemaForm(schema, async (values) => {
     const { id } = await create.mutateAsync(values);
     onStarted(id);
   });
@@ -61,7 +63,7 @@ export function StartRunForm({ departmentId, role, initialScenarioId, onSystemsC
   const defaultsKey = scenario.data ? `${scenario.data.id}@${scenario.data.currentVersion}` : null;
   useEffect(() => {
     if (!defaultsKey || !resolved) return;
-    setSystemsText(resolved.systems === undefined ? '' : String(resolved.systems));
+    setSystemsText(prefilledSystems(resolved.systems, cap));
     setSeedText(resolved.seed ?? '');
     // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the scenario, not the object identity
   }, [defaultsKey]);
@@ -82,8 +84,9 @@ export function StartRunForm({ departmentId, role, initialScenarioId, onSystemsC
   }
   const unknownScenario = scenarioId !== '' && !list.some((s) => s.id === scenarioId);
   const options = [{ value: '', label: 'Choose a scenario…' }, ...list.map((s) => ({ value: s.id, label: `${s.name} (version ${s.currentVersion})` }))];
-  const observerLimit = !roleAtLeast(role, 'modeller');
   const parsedSystems = parseSystemsInput(systemsText);
+  // Checked as it is typed, so that the limit shows at the field before Start is pressed.
+  const overCap = cap !== null && parsedSystems !== null && Number.isFinite(parsedSystems) && parsedSystems > cap;
 
   return (
     <form {...form.formProps} aria-label="Start a run" className="flex flex-col gap-5">
@@ -107,11 +110,12 @@ export function StartRunForm({ departmentId, role, initialScenarioId, onSystemsC
           unit="primaries"
           value={systemsText}
           onChange={(event) => setSystemsText(event.target.value)}
-          error={form.fieldErrors.systems}
+          error={form.fieldErrors.systems ?? (overCap ? observerCapMessage(parsedSystems) : undefined)}
           hint={
             <>
-              How many primary stars to draw: 1,000 to 10,000,000,000 (10^10); “1e7” or “10^7” also work.
-              {observerLimit && ` As an observer you may start runs of up to ${formatCount(OBSERVER_MAX_SYSTEMS)}.`}
+              {cap === null
+                ? 'How many primary stars to draw: 1,000 to 10,000,000,000 (10^10); “1e7” or “10^7” also work.'
+                : `How many primary stars to draw: 1,000 to ${formatCount(cap)}, the most an observer may start; “1e6” or “10^6” also work.`}
               {parsedSystems !== null && Number.isFinite(parsedSystems) && parsedSystems >= 1000 && ` Reads as ${formatCount(parsedSystems)}.`}
             </>
           }

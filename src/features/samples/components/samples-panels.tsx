@@ -35,6 +35,15 @@ const columns: TableColumn<Sample>[] = [
   { id: 'threshold', header: 'Threshold', align: 'end', sortValue: (s) => s.fieldThresholdMG ?? -1, cell: (s) => <span className="whitespace-nowrap">{thresholdText(s)}</span> },
   { id: 'splits', header: 'Splits', align: 'end', sortValue: (s) => s.bins.length, cell: (s) => s.bins.length },
   { id: 'updated', header: 'Updated', sortValue: (s) => new Date(s.updatedAt), cell: (s) => <span className="whitespace-nowrap">{formatDate(s.updatedAt)}</span> },
+  {
+    id: 'test',
+    header: <span className="sr-only">Test</span>,
+    cell: (s) => (
+      <Link to={`${paths.samples.detail.getHref(s.id)}#test`} className="whitespace-nowrap">
+        Test against a run<span className="sr-only">: {s.name}</span>
+      </Link>
+    ),
+  },
 ];
 
 /** The department's own samples (editable) and the library of published constraints (read-only). */

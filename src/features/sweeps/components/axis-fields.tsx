@@ -4,7 +4,7 @@ import { Button } from '../../../components/ui/button.tsx';
 import { Select } from '../../../components/ui/select.tsx';
 import { NumberField, TextField } from '../../../components/ui/text-field.tsx';
 import { cx } from '../../../lib/class-names.ts';
-import { parameterApplies, parameterOf, valueAt, type AxisDraft, type AxisValues } from './sweep-axes.ts';
+import { parameterApplies, parameterOf, valueAt, type AxisDraft, type AxisFieldErrors, type AxisValues } from './sweep-axes.ts';
 
 export interface AxisFieldsProps {
   index: number;
@@ -15,9 +15,12 @@ export interface AxisFieldsProps {
   /** The other axis's parameter, which this one may not repeat. */
   otherPath?: string;
   pathError?: string;
+  /** A problem of the values as a whole (e.g. the server's, for one value of the grid). */
   valuesError?: string;
-  /** `changedPath` when another parameter was chosen: the axis starts afresh around its value. */
-  onChange: (axis: AxisDraft, changedPath: boolean) => void;
+  /** Each input's own problem, all shown at once. */
+  fieldErrors?: AxisFieldErrors;
+  /** `changedPath` when another parameter was chosen: the axis starts afresh around its value; `changedField` names the input edited. */
+  onChange: (axis: AxisDraft, changedPath: boolean, changedField?: keyof AxisDraft) => void;
   onRemove?: () => void;
 }
 
@@ -31,12 +34,12 @@ const spacingOptions = [
 ];
 
 /** One axis of a sweep: the parameter (with its unit and allowed range) and its values. */
-export function AxisFields({ index, axis, values, resolved, otherPath, pathError, valuesError, onChange, onRemove }: AxisFieldsProps) {
+export function AxisFields({ index, axis, values, resolved, otherPath, pathError, valuesError, fieldErrors = {}, onChange, onRemove }: AxisFieldsProps) {
   const id = useId();
   const parameter = parameterOf(axis.path);
   const unit = parameter?.unit || 'dimensionless';
   const current = valueAt(resolved, axis.path);
-  const set = (patch: Partial<AxisDraft>) => onChange({ ...axis, ...patch }, false);
+  const set = (patch: Partial<AxisDraft>) => onChange({ ...axis, ...patch }, false, Object.keys(patch)[0] as keyof AxisDraft);
 
   const options = SWEEPABLE_PARAMETERS.map((p) => {
     const missing = resolved !== undefined && !parameterApplies(resolved, p.path);
@@ -71,9 +74,9 @@ export function AxisFields({ index, axis, values, resolved, otherPath, pathError
       <Select label="Values" value={axis.mode} onChange={(e) => set({ mode: e.target.value as AxisDraft['mode'] })} options={modeOptions} />
       {axis.mode === 'range' ? (
         <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-4">
-          <NumberField label="Start" unit={parameter?.unit || undefined} value={axis.start} onChange={(e) => set({ start: e.target.value })} error={valuesError} data-field={`axes.${index}.values`} hint={parameter?.unit ? undefined : 'Dimensionless'} />
-          <NumberField label="Stop" unit={parameter?.unit || undefined} value={axis.stop} onChange={(e) => set({ stop: e.target.value })} hint={parameter?.unit ? undefined : 'Dimensionless'} />
-          <NumberField label="Number of values" unit="values" value={axis.count} onChange={(e) => set({ count: e.target.value })} hint="2 to 25" />
+          <NumberField label="Start" unit={parameter?.unit || undefined} value={axis.start} onChange={(e) => set({ start: e.target.value })} error={fieldErrors.start} data-field={`axes.${index}.start`} hint={parameter?.unit ? undefined : 'Dimensionless'} />
+          <NumberField label="Stop" unit={parameter?.unit || undefined} value={axis.stop} onChange={(e) => set({ stop: e.target.value })} error={fieldErrors.stop} data-field={`axes.${index}.stop`} hint={parameter?.unit ? undefined : 'Dimensionless'} />
+          <NumberField label="Number of values" unit="values" value={axis.count} onChange={(e) => set({ count: e.target.value })} error={fieldErrors.count} data-field={`axes.${index}.count`} hint="2 to 25" />
           <Select label="Spacing" value={axis.spacing} onChange={(e) => set({ spacing: e.target.value as AxisDraft['spacing'] })} options={spacingOptions} />
         </div>
       ) : (
@@ -83,11 +86,16 @@ export function AxisFields({ index, axis, values, resolved, otherPath, pathError
           value={axis.list}
           onChange={(e) => set({ list: e.target.value })}
           hint="Separated by commas or spaces, e.g. 0.25, 0.5, 1, 2, 4."
-          error={valuesError}
-          data-field={`axes.${index}.values`}
+          error={fieldErrors.list ?? valuesError}
+          data-field={`axes.${index}.list`}
           autoComplete="off"
           spellCheck={false}
         />
+      )}
+      {axis.mode === 'range' && valuesError && (
+        <p data-field={`axes.${index}.values`} tabIndex={-1} className="text-sm font-bold text-coral-300">
+          {valuesError}
+        </p>
       )}
       <p id={`${id}-preview`} aria-live="polite" className={cx('text-sm tabular-nums', values.values ? 'text-foam-300' : 'text-foam-400')}>
         {values.values ? (
@@ -95,7 +103,7 @@ export function AxisFields({ index, axis, values, resolved, otherPath, pathError
             <span className="font-bold text-foam-50">{values.values.length} values:</span> {values.values.join(', ')}
             {parameter?.unit ? ` ${parameter.unit}` : ''}
           </>
-        ) : valuesError ? null : (
+        ) : valuesError || Object.values(fieldErrors).some(Boolean) ? null : (
           values.error
         )}
       </p>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { axisValues, evenlySpaced, gridPointCount, gridTooLarge, newAxisDraft, parameterApplies, parameterTitle, sweepFieldKey, type AxisDraft } from './sweep-axes.ts';
+import { axisFieldErrors, axisValues, evenlySpaced, gridPointCount, gridTooLarge, newAxisDraft, parameterApplies, parameterTitle, sweepFieldKey, type AxisDraft } from './sweep-axes.ts';
 
 const draft = (over: Partial<AxisDraft>): AxisDraft => ({ ...newAxisDraft('envelope.alpha'), ...over });
 
@@ -76,5 +76,28 @@ describe('parameters', () => {
   it('titles an axis with its unit, or says it has none', () => {
     expect(parameterTitle({ label: 'Engulfment reach', unit: 'AU' })).toBe('Engulfment reach (AU)');
     expect(parameterTitle({ label: 'Tidal-radius factor η', unit: '' })).toBe('Tidal-radius factor η (dimensionless)');
+  });
+});
+
+describe('axisFieldErrors', () => {
+  const alpha = (patch: Partial<AxisDraft>): AxisDraft => ({ ...newAxisDraft('envelope.alpha'), ...patch });
+
+  it('reports every problem of a range at once, each at its own input (regression: one at a time, the count under Start)', () => {
+    // envelope.alpha is bounded to 0.01 … 10 by the scenario schema.
+    expect(axisFieldErrors(alpha({ start: '0', stop: '50', count: '40' }))).toEqual({
+      start: 'Start must be from 0.01 to 10 (got 0).',
+      stop: 'Stop must be from 0.01 to 10 (got 50).',
+      count: 'The number of values must be a whole number from 2 to 25 (got 40).',
+    });
+    expect(axisFieldErrors(alpha({ start: '', stop: 'x', count: '5' }))).toEqual({
+      start: 'Give a start from 0.01 to 10.',
+      stop: 'Stop must be a number from 0.01 to 10 (got “x”).',
+    });
+    expect(axisFieldErrors(alpha({ start: '1', stop: '1', count: '5' }))).toEqual({ stop: 'Stop must differ from start.' });
+    expect(axisFieldErrors(alpha({ start: '0.5', stop: '2', count: '4' }))).toEqual({});
+  });
+
+  it('names every value of a list outside the allowed range', () => {
+    expect(axisFieldErrors(alpha({ mode: 'list', list: '1, 20, 30' }))).toEqual({ list: 'Common-envelope efficiency α_CE must be from 0.01 to 10 (got 20, 30).' });
   });
 });

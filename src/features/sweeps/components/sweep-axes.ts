@@ -132,3 +132,45 @@ export function newAxisDraft(path: string, current?: unknown): AxisDraft {
   const around = typeof current === 'number' && current > 0;
   return { ...draft, start: String(around ? clamp(current / 2) : parameter.min), stop: String(around ? clamp(current * 2) : parameter.max) };
 }
+
+/** The inputs of one axis that can be in error. */
+export type AxisField = 'start' | 'stop' | 'count' | 'list';
+export type AxisFieldErrors = Partial<Record<AxisField, string>>;
+
+/**
+ * Every problem of an axis's inputs at once, each at the input it belongs to (start, stop,
+ * number of values, or the list), so that the form shows them all on the first Start.
+ */
+export function axisFieldErrors(draft: AxisDraft): AxisFieldErrors {
+  const parameter = parameterOf(draft.path);
+  if (!parameter) return {};
+  const errors: AxisFieldErrors = {};
+  const allowed = range(parameter);
+  if (draft.mode === 'list') {
+    const result = axisValues(draft);
+    if (result.error) {
+      const values = parseNumberList(draft.list);
+      const outside = values.filter((v) => Number.isFinite(v) && (v < parameter.min || v > parameter.max));
+      errors.list = outside.length > 1 ? `${parameter.label} must be from ${allowed} (got ${outside.join(', ')}).` : result.error;
+    }
+    return errors;
+  }
+  const end = (name: 'Start' | 'Stop', text: string): number | null => {
+    const value = parseNumberText(text);
+    const key = name === 'Start' ? 'start' : 'stop';
+    if (value === null) errors[key] = `Give a ${name.toLowerCase()} from ${allowed}.`;
+    else if (!Number.isFinite(value)) errors[key] = `${name} must be a number from ${allowed} (got “${text.trim()}”).`;
+    else if (value < parameter.min || value > parameter.max) errors[key] = `${name} must be from ${allowed} (got ${value}).`;
+    else if (draft.spacing === 'log' && !(value > 0)) errors[key] = `Logarithmic spacing needs a ${name.toLowerCase()} above 0.`;
+    else return value;
+    return null;
+  };
+  const start = end('Start', draft.start);
+  const stop = end('Stop', draft.stop);
+  const count = parseNumberText(draft.count);
+  if (count === null || !Number.isInteger(count) || count < 2 || count > SWEEP_MAX_VALUES_PER_AXIS) {
+    errors.count = `The number of values must be a whole number from 2 to ${SWEEP_MAX_VALUES_PER_AXIS}${draft.count.trim() ? ` (got ${draft.count.trim()})` : ''}.`;
+  }
+  if (start !== null && stop !== null && start === stop) errors.stop = 'Stop must differ from start.';
+  return errors;
+}

@@ -12,6 +12,7 @@ import { parseNumberText } from '../../../lib/number-input.ts';
 import { useCreateSweep } from '../api/create-sweep.ts';
 import { AxisFields } from './axis-fields.tsx';
 import {
+  axisFieldErrors,
   axisValues,
   gridPointCount,
   gridTooLarge,
@@ -38,7 +39,8 @@ const count = (n: number) => n.toLocaleString('en-US');
 const sentence = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
 
 /** The order in which errors are met on the form, for moving focus to the first. */
-const FIELD_ORDER = ['scenarioId', 'name', 'axes.0.path', 'axes.0.values', 'axes.1.path', 'axes.1.values', 'axes', 'systems', 'seed'];
+const AXIS_KEYS = (i: number) => [`axes.${i}.path`, `axes.${i}.start`, `axes.${i}.stop`, `axes.${i}.count`, `axes.${i}.list`, `axes.${i}.values`];
+const FIELD_ORDER = ['scenarioId', 'name', ...AXIS_KEYS(0), ...AXIS_KEYS(1), 'axes', 'systems', 'seed'];
 
 /**
  * Set up a 1-D or 2-D sweep: a scenario, one or two parameters with their values (an even grid
@@ -102,8 +104,11 @@ export function SweepForm({ departmentId, initialScenarioId, onStarted, renderCo
   function validate(): { body?: CreateSweepBody; errors: Errors } {
     const found: Errors = {};
     if (!scenarioId) found.scenarioId = 'Choose the scenario to sweep.';
-    values.forEach((v, i) => {
-      if (v.error) found[`axes.${i}.values`] = v.error;
+    // Every problem at once, each at its own input.
+    axes.forEach((axis, i) => {
+      const fieldErrors = axisFieldErrors(axis);
+      for (const [field, message] of Object.entries(fieldErrors)) found[`axes.${i}.${field}`] = message;
+      if (Object.keys(fieldErrors).length === 0 && values[i].error) found[`axes.${i}.${axis.mode === 'list' ? 'list' : 'values'}`] = values[i].error;
     });
     if (axes.length === 2 && axes[0].path === axes[1].path) found['axes.1.path'] = 'The second parameter must differ from the first.';
     const tooLarge = gridTooLarge(points);
@@ -192,10 +197,12 @@ export function SweepForm({ departmentId, initialScenarioId, onStarted, renderCo
             otherPath={axes[1 - i]?.path}
             pathError={errors[`axes.${i}.path`]}
             valuesError={errors[`axes.${i}.values`]}
-            onChange={(next, changedPath) => {
+            fieldErrors={{ start: errors[`axes.${i}.start`], stop: errors[`axes.${i}.stop`], count: errors[`axes.${i}.count`], list: errors[`axes.${i}.list`] }}
+            onChange={(next, changedPath, changedField) => {
               setAxes((list) => list.map((a, j) => (j === i ? (changedPath ? newAxisDraft(next.path, valueAt(resolved, next.path)) : next) : a)));
-              clear(`axes.${i}.values`);
-              clear(`axes.${i}.path`);
+              // Editing one input clears its own message only; a new parameter or mode starts the axis afresh.
+              const own = changedField && ['start', 'stop', 'count', 'list'].includes(changedField) ? [`axes.${i}.${changedField}`] : AXIS_KEYS(i);
+              setErrors((e) => ({ ...e, ...Object.fromEntries([...own, `axes.${i}.values`, 'axes'].map((k) => [k, undefined])) }));
             }}
             onRemove={i === 1 ? () => setAxes((list) => list.slice(0, 1)) : undefined}
           />

@@ -87,7 +87,9 @@ export function sweepHeatmapSpec({ detail, xTitle, yTitle }: HeatmapInput): Visu
   return {
     // A few columns share the card's width (a phone too); many get fixed cells and the chart scrolls.
     ...(xSort.length > 6 ? { width: { step: cellSize * 1.6 } } : {}),
-    height: { step: cellSize },
+    // A fixed height (rows × cell) rather than a step: vega-lite warns about "fit-y" for a step
+    // height beside a container width.
+    height: cellSize * ySort.length,
     data: { values: cells },
     encoding: { x, y },
     layer: [
@@ -100,10 +102,17 @@ export function sweepHeatmapSpec({ detail, xTitle, yTitle }: HeatmapInput): Visu
             title: ['Predicted magnetic fraction', '(% of white dwarfs)'],
             scale: { domain, range: [...FRACTION_RAMP], interpolate: 'lab' },
             legend: { format: '.1~%', orient: 'bottom', direction: 'horizontal', gradientLength: 260, titleLimit: 420 },
-            condition: { test: 'datum.fraction === null', value: chartInk.grid },
+            // A point without a result yet is left unfilled (dashed outline below), so that it cannot
+            // be read as a fraction near 0%, whose colour is the ramp's first.
+            condition: { test: 'datum.fraction === null', value: chartInk.background },
           },
           tooltip,
         },
+      },
+      {
+        transform: [{ filter: 'datum.fraction === null' }],
+        mark: { type: 'rect', fillOpacity: 0, stroke: chartInk.axis, strokeWidth: 1.5, strokeDash: [5, 4] },
+        encoding: { tooltip },
       },
       {
         transform: [{ filter: "datum.verdict === 'allowed68' || datum.verdict === 'allowed95'" }],

@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import type { Sample } from '../../../../shared/contracts/samples.ts';
 import type { SweepDetail } from '../../../../shared/contracts/sweeps.ts';
 import { formatPercentWithError, formatSignificant } from '../../../../shared/engine/stats/format.ts';
+import { fractionOrLimitText } from '../../../../shared/engine/stats/fraction-text.ts';
 import { ChartKey } from '../../../components/charts/chart-key.tsx';
 import { prefersLogAxis, responseCurveKey, responseCurveSpec, type ResponsePoint } from '../../../components/charts/response-curve-spec.ts';
 import { VegaChart } from '../../../components/charts/vega-chart.tsx';
@@ -172,7 +173,7 @@ function PointsTable({ detail, tested }: { detail: SweepDetail; tested: boolean 
       header: 'Fraction ± MC error',
       align: 'end',
       sortValue: (p) => p.fraction ?? -1,
-      cell: (p) => <span className="whitespace-nowrap tabular-nums">{p.fraction !== null && p.fractionSe !== null ? formatPercentWithError(p.fraction, p.fractionSe) : '—'}</span>,
+      cell: (p) => <span className="whitespace-nowrap tabular-nums">{p.fraction !== null && p.fractionSe !== null ? (fractionOrLimitText(p.magnetic ?? 0, p.whiteDwarfs ?? 0, p.fractionSe) ?? '—') : '—'}</span>,
     },
     ...(tested
       ? [

@@ -203,6 +203,8 @@ interface PreviewReportProps {
 
 function PreviewReport({ rowCount, readyCount, problems, lines }: PreviewReportProps) {
   const badLines = new Set(problems.map((p) => p.line)).size;
+  // With a wrong header no row can be read, so none is "fine" or "ready" yet.
+  const headerBroken = problems.some((p) => p.line === 1);
   return (
     <section aria-labelledby="csv-report-title" className="flex flex-col gap-4">
       <h3 id="csv-report-title" className="text-lg font-bold text-foam-50">
@@ -212,7 +214,10 @@ function PreviewReport({ rowCount, readyCount, problems, lines }: PreviewReportP
       {problems.length > 0 && (
         <>
           <p className="text-foam-300">
-            {readyCount !== null && `${readyCount} of ${rowCount} rows are fine. `}Line 1 is the header; nothing is stored while any problem remains.
+            {headerBroken
+              ? 'The header (line 1) is wrong, so the rows cannot be read until it is fixed. '
+              : readyCount !== null && `${readyCount} of ${rowCount} rows are fine. `}
+            Line 1 is the header; nothing is stored while any problem remains.
           </p>
           <ul aria-label="Problems in the file" className="flex flex-col gap-1.5 rounded-md border border-coral-300/50 bg-coral-300/8 p-4">
             {problems.slice(0, REPORT_LENGTH).map((p, i) => (
@@ -224,12 +229,12 @@ function PreviewReport({ rowCount, readyCount, problems, lines }: PreviewReportP
           </ul>
         </>
       )}
-      {lines && lines.lines.length > 0 && <PreviewTable preview={lines} />}
+      {lines && lines.lines.length > 0 && <PreviewTable preview={lines} headerBroken={headerBroken} />}
     </section>
   );
 }
 
-function PreviewTable({ preview }: { preview: CsvPreview }) {
+function PreviewTable({ preview, headerBroken }: { preview: CsvPreview; headerBroken: boolean }) {
   const shown = linesToShow(preview.lines, PREVIEW_LINES);
   return (
     <div role="region" aria-labelledby="csv-preview-caption" tabIndex={0} className="relative overflow-x-auto rounded-md border border-ink-700">
@@ -261,7 +266,9 @@ function PreviewTable({ preview }: { preview: CsvPreview }) {
                   {line.line}
                 </th>
                 <td className="min-w-48 px-3 py-2">
-                  {line.problems.length === 0 ? (
+                  {line.problems.length === 0 && headerBroken && line.line > 1 ? (
+                    <Badge>waits for the header</Badge>
+                  ) : line.problems.length === 0 ? (
                     <Badge tone="success">ready</Badge>
                   ) : (
                     <ul className="flex flex-col gap-1 text-coral-300">

@@ -1,6 +1,6 @@
 import { hashKey, queryOptions, useQuery, useQueryClient, type Query } from '@tanstack/react-query';
-import { meResponseSchema, type MeResponse } from '../../../../shared/contracts/auth.ts';
-import { api, isApiError } from '../../../lib/api-client.ts';
+import { meResponseSchema, type MeResponse } from '../../../shared/contracts/auth.ts';
+import { api, isApiError } from '../api-client.ts';
 
 /** The signed-in user with the active department, or null when signed out (401). */
 export async function getMe(signal?: AbortSignal): Promise<MeResponse | null> {
