@@ -64,7 +64,10 @@ describe('tidefield/no-folder-cycle', { timeout: 60_000 }, () => {
     write('server/modules/a/a.service.ts', "import { b } from '../b/b.service.ts';\nexport const a = () => b;\n");
     write('server/modules/a/a.table.ts', 'export const table = 1;\n');
     write('server/modules/b/b.service.ts', "import { c } from '../c/c.service.ts';\nexport const b = () => c;\n");
-    write('server/modules/c/c.service.ts', "import { table } from '../a/a.table.ts';\nexport const c = () => table;\n");
+    write('server/modules/c/c.service.ts', "import { h } from '../a/sub/helper.ts';\nexport const c = () => h;\n");
+    // Reading another module's Drizzle table is a data dependency of the one schema, not a cycle: e → a.table while a → e.
+    write('server/modules/e/e.service.ts', "import { table } from '../a/a.table.ts';\nexport const e = () => table;\n");
+    write('server/modules/a/uses-e.ts', "import { e } from '../e/e.service.ts';\nexport const ue = e;\n");
     write('server/modules/d/d.service.ts', "import { a } from '../a/a.service.ts';\nexport const d = () => a;\n");
     // A subfolder belongs to its module: a/sub → a is no cycle.
     write('server/modules/a/sub/helper.ts', "import { table } from '../a.table.ts';\nexport const h = table;\n");

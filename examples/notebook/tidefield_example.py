@@ -1,7 +1,7 @@
 """Tidefield from a notebook, with Python's standard library only (urllib, json, csv).
 
 Start a run of a stored scenario, wait for it, read its result document and its white-dwarf
-mass table as ECSV. Create an API token on the "API tokens" page first (it acts for you in
+mass table as ECSV. Create an API token with the "run" scope on the "API tokens" page first (it acts for you in
 your department), then in a notebook cell or a shell:
 
     TIDEFIELD_URL=http://127.0.0.1:3000 TIDEFIELD_TOKEN=tfk_... \

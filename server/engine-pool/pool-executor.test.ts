@@ -11,7 +11,7 @@ import { runScenario } from './run-scenario.ts';
 
 const FIXTURE = new URL('./failing-chunk-task.fixture.mjs', import.meta.url).href;
 const scenario = (overrides: Record<string, unknown> = {}): Scenario =>
-  parseScenario({ ...JSON.parse(readFileSync(new URL('../../shared/scenarios/check-1.json', import.meta.url), 'utf8')), systems: 400_000, ...overrides });
+  parseScenario({ ...JSON.parse(readFileSync(new URL('../../tests/fixtures/check-1.json', import.meta.url), 'utf8')), systems: 400_000, ...overrides });
 
 describe('pendingBatches', () => {
   it('cuts pending chunks along the fixed partition, so a batch keeps its index across restarts', () => {

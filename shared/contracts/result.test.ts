@@ -24,7 +24,7 @@ describe('result documents of both engines', () => {
   });
 
   it('an engine-2 document has exactly the engine-2 keys', () => {
-    const s = parseScenario({ ...JSON.parse(readFileSync(new URL('../scenarios/check-1.json', import.meta.url), 'utf8')), systems: 2000 });
+    const s = parseScenario({ ...JSON.parse(readFileSync(new URL('../../tests/fixtures/check-1.json', import.meta.url), 'utf8')), systems: 2000 });
     const prepared = prepareScenario(s);
     const result = scenarioResultSchema.parse(buildResult(s, runChunk(prepared, 0), { prepared }));
     expect(result.engineVersion).toBe(ENGINE_VERSION);
@@ -57,7 +57,7 @@ describe('result documents of both engines', () => {
 
 describe('scenario documents of engine 1', () => {
   it('are accepted with their core-merger keys, which are ignored and named in the assumptions', () => {
-    const doc = JSON.parse(readFileSync(new URL('../scenarios/check-1.json', import.meta.url), 'utf8'));
+    const doc = JSON.parse(readFileSync(new URL('../../tests/fixtures/check-1.json', import.meta.url), 'utf8'));
     const legacy = {
       ...doc,
       systems: 2000,

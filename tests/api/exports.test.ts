@@ -34,10 +34,10 @@ beforeAll(async () => {
 afterAll(() => ctx?.close());
 
 describe('run table exports', () => {
-  it('lists the tables an engine-1 result holds, each with its columns and units', async () => {
+  it('lists the tables an engine-2 result holds, each with its columns and units', async () => {
     const res = await owner.agent.get(`/api/runs/${runId}/export`).expect(200);
     const names = res.body.tables.map((t: { name: string }) => t.name);
-    expect(names).toEqual(['wd-mass', 'field', 'survivor-separation', 'fate-map', 'fractions-by-setting', 'fractions-by-channel', 'companion-fates']);
+    expect(names).toEqual(['wd-mass', 'wd-mass-by-setting', 'field', 'cooling-age', 'post-ce-period', 'survivor-separation', 'fate-map', 'fractions-by-setting', 'fractions-by-channel', 'companion-fates']);
     expect(res.body.formats.map((f: { format: string }) => f.format)).toEqual(['ecsv', 'votable']);
     const wdMass = res.body.tables[0];
     expect(wdMass.rows).toBe(result.bins.wdMass.magnetic.length);
@@ -83,7 +83,7 @@ describe('run table exports', () => {
     column(table, 'field_lo').values.forEach((v, i) => expect(v as number).toBeCloseTo(10 ** result.bins.logField.edgesLog10MG[i], 12));
     expect(column(table, 'count').values).toEqual(result.bins.logField.counts);
 
-    for (const name of ['wd-mass', 'field', 'fate-map', 'fractions-by-setting', 'companion-fates', 'survivor-separation', 'fractions-by-channel']) {
+    for (const name of ['wd-mass', 'wd-mass-by-setting', 'field', 'cooling-age', 'post-ce-period', 'fate-map', 'fractions-by-setting', 'companion-fates', 'survivor-separation', 'fractions-by-channel']) {
       const vot = text(await owner.agent.get(`/api/runs/${runId}/export?format=votable&table=${name}`).buffer(true).expect(200));
       const verdict = validateVotable(vot);
       expect(verdict.output, name).toContain('validates');
@@ -101,8 +101,8 @@ describe('run table exports', () => {
     const noTable = await owner.agent.get(`/api/runs/${runId}/export?format=ecsv`).expect(400);
     expect(noTable.body.error).toMatchObject({ field: 'table' });
     expect(noTable.body.error.message).toContain('wd-mass');
-    const unknown = await owner.agent.get(`/api/runs/${runId}/export?format=ecsv&table=cooling-age`).expect(400);
-    expect(unknown.body.error.message).toMatch(/table must be one of .*wd-mass.* \(got "cooling-age"\)/);
+    const unknown = await owner.agent.get(`/api/runs/${runId}/export?format=ecsv&table=marginals`).expect(400);
+    expect(unknown.body.error.message).toMatch(/table must be one of .*wd-mass.* \(got "marginals"\)/);
     const badFormat = await owner.agent.get(`/api/runs/${runId}/export?format=fits&table=wd-mass`).expect(400);
     expect(badFormat.body.error.message).toContain('ecsv, votable');
   });

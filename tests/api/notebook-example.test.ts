@@ -34,7 +34,7 @@ function runPython(env: Record<string, string>): Promise<{ code: number | null; 
 it('starts a run, waits, and reads the result and its ECSV table with urllib, json and an API token', async () => {
   const { agent } = await signUp(ctx.app);
   const scenarioId = await createScenario(agent, checkScenario({ systems: 10_000, seed: 'notebook' }));
-  const token = (await agent.post('/api/tokens').send({ name: 'Notebook' }).expect(201)).body.token as string;
+  const token = (await agent.post('/api/tokens').send({ name: 'Notebook', scope: 'run' }).expect(201)).body.token as string;
 
   const out = await runPython({ TIDEFIELD_URL: ctx.url, TIDEFIELD_TOKEN: token, TIDEFIELD_SCENARIO: scenarioId, TIDEFIELD_SYSTEMS: '10000' });
   expect(out.stderr).toContain('queued run');

@@ -26,7 +26,7 @@ async function lineText(page: import('playwright-core').Page, label: string): Pr
 const sigmaOf = (text: string) => Number(/(\d+(?:\.\d+)?)σ/.exec(text)?.[1] ?? Number.NaN);
 
 describe('constraint sets and scorecards', () => {
-  it('shows the modeller at once that the detached-companion zero rejects the baseline track while the overall fraction is consistent', async () => {
+  it('shows the modeller at once that the detached-companion zero rejects the baseline track while the overall fraction is at most in mild tension', async () => {
     const { page, context } = await stack.newPage();
     try {
       await stack.signIn(page, 'modeller');
@@ -49,9 +49,12 @@ describe('constraint sets and scorecards', () => {
       const zero = await lineText(page, 'No magnetic white dwarf among 1,253');
       expect(zero).toMatch(/rejected/);
       expect(sigmaOf(zero)).toBeGreaterThan(5);
+      // The overall incidence is not what rejects the model: engine 2's baseline track predicts
+      // ≈ 15% against Jordan et al. (2007)'s ≈ 10% (± 2% as the library reads it), a mild tension
+      // at most, far from the detached-companion zero's > 5σ.
       const overall = await lineText(page, 'About 10% of white dwarfs');
-      expect(overall).toMatch(/consistent/);
-      expect(sigmaOf(overall)).toBeLessThan(2);
+      expect(overall).not.toMatch(/rejected/);
+      expect(sigmaOf(overall)).toBeLessThan(3);
       expect(await combined.textContent()).toMatch(/Jointly over \d+ constraints/);
       await stack.screenshot(page, 'modeller-scorecard');
     } finally {

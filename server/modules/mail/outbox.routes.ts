@@ -15,7 +15,7 @@ type StoredMessage = OutboxMessage & { headers?: Record<string, string> };
  * them. Every other kind (invitation and password-reset links, and any kind added later) is
  * shown to its recipient only, since reading it would let someone else act as them.
  */
-export const DEPARTMENT_NOTICE_KINDS: ReadonlySet<string> = new Set(['receipt', 'run-finished', 'run-failed']);
+export const DEPARTMENT_NOTICE_KINDS: ReadonlySet<string> = new Set(['receipt', 'run-finished', 'run-failed', 'sweep-finished']);
 
 /** Whether the caller may read a message: their own mail, or (as admin) a notice about the active department. */
 export function mayRead(auth: RequestAuth, message: StoredMessage): boolean {
@@ -27,7 +27,7 @@ export function mayRead(auth: RequestAuth, message: StoredMessage): boolean {
 
 /**
  * The development outbox: what the local SMTP stand-in received. Each signed-in user reads the
- * mail sent to them; an admin also reads the department's notices (receipts, run notices),
+ * mail sent to them; an admin also reads the department's notices (receipts, run and sweep notices),
  * never another person's access links. Off unless e-mail goes to the local stand-in.
  */
 export function outboxRoutes(registry: RouteRegistry, config: Config, logger: Logger): Router {

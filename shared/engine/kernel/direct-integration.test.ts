@@ -184,7 +184,7 @@ describe('kernel against direct integration of the scenario semantics', { timeou
     // The fixed-reach semantics (final core, full envelope at R = a0) are unchanged by engine 2:
     // with α_CE = 0.05 almost every engulfed planet is destroyed, and with fields of 1000 MG ± 0.1
     // dex every destroyed planet makes the white dwarf magnetic.
-    const base = JSON.parse(readFileSync(new URL('../../scenarios/check-1.json', import.meta.url), 'utf8'));
+    const base = JSON.parse(readFileSync(new URL('../../../tests/fixtures/check-1.json', import.meta.url), 'utf8'));
     const s = parseScenario({
       ...base,
       seed: 'held-out',
