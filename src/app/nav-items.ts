@@ -4,7 +4,7 @@ import type { PathKey } from '../config/paths.ts';
 export interface NavItem {
   key: PathKey;
   label: string;
-  /** What the page is for; also the text of its "coming soon" state until it exists. */
+  /** What the page is for, in one sentence (shown beside its link). */
   summary: string;
   /** The weakest role that sees it (the server enforces; this only hides). */
   minimumRole: Role;
