@@ -4,7 +4,7 @@ import type { PathKey } from '../config/paths.ts';
 export interface NavItem {
   key: PathKey;
   label: string;
-  /** What the page is for, in one sentence (shown beside its link). */
+  /** What the page is for, in one sentence. */
   summary: string;
   /** The weakest role that sees it (the server enforces; this only hides). */
   minimumRole: Role;
