@@ -8,14 +8,34 @@ import { VegaChart } from '../../../components/charts/vega-chart.tsx';
 import { Card } from '../../../components/ui/card.tsx';
 import { formatCount } from './run-text.ts';
 
+/** A histogram's magnetic and non-magnetic counts on one set of bins. */
+interface MagneticSplit {
+  magnetic: number[];
+  nonMagnetic: number[];
+}
+
+/** The two series every magnetic-vs-rest histogram draws, in the shared colours. */
+function magneticSeries(bins: MagneticSplit) {
+  return [
+    { name: MAGNETIC_SERIES.magnetic.label, colour: MAGNETIC_SERIES.magnetic.colour, counts: bins.magnetic },
+    { name: MAGNETIC_SERIES.nonMagnetic.label, colour: MAGNETIC_SERIES.nonMagnetic.colour, counts: bins.nonMagnetic },
+  ];
+}
+
+const sum = (counts: readonly number[]) => counts.reduce((a, b) => a + b, 0);
+
+/** Totals of the two series, for the chart's text description. */
+function magneticTotals(bins: MagneticSplit): { magnetic: number; other: number } {
+  return { magnetic: sum(bins.magnetic), other: sum(bins.nonMagnetic) };
+}
+
 type Bins = ScenarioResult['bins'];
 
 /** White-dwarf masses, magnetic against not magnetic, as counts or as shapes (shares). */
 export function WdMassChart({ bins }: { bins: Bins['wdMass'] }) {
   const [share, setShare] = useState(true);
   const width = binWidthText(bins.edgesMsun);
-  const magnetic = bins.magnetic.reduce((a, b) => a + b, 0);
-  const other = bins.nonMagnetic.reduce((a, b) => a + b, 0);
+  const { magnetic, other } = magneticTotals(bins);
   return (
     <Card title="White-dwarf mass" description="Are magnetic white dwarfs heavier? As shares, the two shapes compare directly.">
       <div className="flex flex-col gap-3">
@@ -24,10 +44,7 @@ export function WdMassChart({ bins }: { bins: Bins['wdMass'] }) {
           description={`Histogram of white-dwarf mass in ${width} Msun bins: ${formatCount(magnetic)} magnetic and ${formatCount(other)} non-magnetic white dwarfs${share ? ', each as a share of its own total' : ''}.`}
           spec={binnedChartSpec({
             edges: bins.edgesMsun,
-            series: [
-              { name: MAGNETIC_SERIES.magnetic.label, colour: MAGNETIC_SERIES.magnetic.colour, counts: bins.magnetic },
-              { name: MAGNETIC_SERIES.nonMagnetic.label, colour: MAGNETIC_SERIES.nonMagnetic.colour, counts: bins.nonMagnetic },
-            ],
+            series: magneticSeries(bins),
             xTitle: 'White-dwarf mass (Msun)',
             xUnit: 'Msun',
             binLabel: `${width} Msun bin`,
@@ -96,8 +113,7 @@ export function LogFieldByChannelChart({ bins }: { bins: Bins['logField'] }) {
 export function CoolingAgeChart({ bins }: { bins: NonNullable<Bins['coolingAge']> }) {
   const [share, setShare] = useState(true);
   const width = binWidthText(bins.edgesLog10Gyr);
-  const magnetic = bins.magnetic.reduce((a, b) => a + b, 0);
-  const other = bins.nonMagnetic.reduce((a, b) => a + b, 0);
+  const { magnetic, other } = magneticTotals(bins);
   return (
     <Card title="Cooling age" description="Cooling age of the white dwarfs (age since the end of the main sequence, the giant phases neglected). As shares, a field that appears late shows as a magnetic shape shifted to old ages.">
       <div className="flex flex-col gap-3">
@@ -106,10 +122,7 @@ export function CoolingAgeChart({ bins }: { bins: NonNullable<Bins['coolingAge']
           description={`Histogram of cooling age in ${width} dex bins of log t (Gyr): ${formatCount(magnetic)} magnetic and ${formatCount(other)} non-magnetic white dwarfs${share ? ', each as a share of its own total' : ''}.`}
           spec={binnedChartSpec({
             edges: bins.edgesLog10Gyr,
-            series: [
-              { name: MAGNETIC_SERIES.magnetic.label, colour: MAGNETIC_SERIES.magnetic.colour, counts: bins.magnetic },
-              { name: MAGNETIC_SERIES.nonMagnetic.label, colour: MAGNETIC_SERIES.nonMagnetic.colour, counts: bins.nonMagnetic },
-            ],
+            series: magneticSeries(bins),
             xTitle: 'Cooling age (Gyr, log scale)',
             xUnit: 'Gyr',
             logX: true,
@@ -128,8 +141,7 @@ export function CoolingAgeChart({ bins }: { bins: NonNullable<Bins['coolingAge']
 /** Final orbital periods of post-common-envelope companions, magnetic white dwarfs against the others. */
 export function PostCommonEnvelopePeriodChart({ bins }: { bins: NonNullable<Bins['postCommonEnvelopePeriod']> }) {
   const width = binWidthText(bins.edgesLog10Days);
-  const magnetic = bins.magnetic.reduce((a, b) => a + b, 0);
-  const other = bins.nonMagnetic.reduce((a, b) => a + b, 0);
+  const { magnetic, other } = magneticTotals(bins);
   return (
     <Card
       title="Post-common-envelope periods"
@@ -142,10 +154,7 @@ export function PostCommonEnvelopePeriodChart({ bins }: { bins: NonNullable<Bins
           description={`Histogram of the final orbital period in ${width} dex bins of log P (days): ${formatCount(magnetic)} magnetic and ${formatCount(other)} non-magnetic white dwarfs with a post-common-envelope companion.`}
           spec={binnedChartSpec({
             edges: bins.edgesLog10Days,
-            series: [
-              { name: MAGNETIC_SERIES.magnetic.label, colour: MAGNETIC_SERIES.magnetic.colour, counts: bins.magnetic },
-              { name: MAGNETIC_SERIES.nonMagnetic.label, colour: MAGNETIC_SERIES.nonMagnetic.colour, counts: bins.nonMagnetic },
-            ],
+            series: magneticSeries(bins),
             xTitle: 'Final orbital period (days, log scale)',
             xUnit: 'd',
             logX: true,
