@@ -22,9 +22,10 @@ import { whiteDwarfRadiusRsun } from '../physics/white-dwarf-radius-nauenberg197
 import { chunkUniform } from '../random.ts';
 import { CHUNK_SYSTEMS } from '../version.ts';
 import { BINS, binIndex } from './bins.ts';
+import type { PreparedTrack } from './engulfment.ts';
 import type { PreparedScenario } from './prepare.ts';
 import { lifetimeGyr } from './scenario-physics.ts';
-import { emptyTallyFor, type ChunkTally } from './tally.ts';
+import { addCountsInto, emptyTallyFor, type ChunkTally } from './tally.ts';
 
 // Fate codes (index into FATES).
 const WIDE = 0;
@@ -48,6 +49,53 @@ const MAX_ROWS = 32;
 const HELIUM_CORE_MARGIN_MSUN = 0.005;
 
 /**
+ * What the kernel needs of one parameter point: the values of the draw-free parameters (see
+ * run-points.ts) as the scenario's own preparation computed them, and group numbers that let
+ * points with equal values share a computation. A single run is one point, preparedPoint(prepared).
+ */
+export interface PreparedPoint {
+  scenarioHash: string;
+  multiplier: number;
+  /** Each row's presentThreshold (prepare.ts) at this point's multiplier. */
+  presentThresholds: number[];
+  /** fixedReach: the reach, AU; track: NaN (the engulfment grid decides). */
+  reachAU: number;
+  alphaCE: number;
+  lambda: number;
+  eta: number;
+  dissolutionBelowMsun: number;
+  field: PreparedScenario['field'];
+  fossilFraction: number;
+  fossilMedianKG: number;
+  fossilWidthDex: number;
+  /** Index of the first point with the same α_CE and λ (the same post-common-envelope orbits). */
+  envelopeGroup: number;
+  /** Index of the first point with the same η and field.disruption (the same disruption fields). */
+  disruptionFieldGroup: number;
+  /** Index of the first point with the same field.closeSurvivor (the same close-survivor fields). */
+  closeFieldGroup: number;
+}
+
+/** The one point of a prepared scenario (a single run). */
+export function preparedPoint(prepared: PreparedScenario, groups: Pick<PreparedPoint, 'envelopeGroup' | 'disruptionFieldGroup' | 'closeFieldGroup'> = { envelopeGroup: 0, disruptionFieldGroup: 0, closeFieldGroup: 0 }): PreparedPoint {
+  return {
+    scenarioHash: prepared.scenarioHash,
+    multiplier: prepared.multiplier,
+    presentThresholds: prepared.rows.map((row) => row.presentThreshold),
+    reachAU: prepared.giant.kind === 'fixedReach' ? prepared.giant.reachAU : NaN,
+    alphaCE: prepared.alphaCE,
+    lambda: prepared.lambda,
+    eta: prepared.eta,
+    dissolutionBelowMsun: prepared.dissolutionBelowMsun,
+    field: prepared.field,
+    fossilFraction: prepared.fossil.fraction,
+    fossilMedianKG: prepared.fossil.medianKG,
+    fossilWidthDex: prepared.fossil.widthDex,
+    ...groups,
+  };
+}
+
+/**
  * Scratch written by companionFate (one companion at a time), allocated once per module:
  * the kernel never allocates per system. Index: 0 fate, 1 field (MG, 0 = none), 2 channel,
  * 3 final separation (AU, survivors), 4 white-dwarf mass if this companion ends the giant's
@@ -55,12 +103,64 @@ const HELIUM_CORE_MARGIN_MSUN = 0.005;
  */
 const fateOut = new Float64Array(7);
 const onsetOut = new Float64Array(4);
-/** Per-row record of the current system's companions: fate, present (1/0), log10 M2, log10 P0, separation AU, final period d. */
-const rowFate = new Float64Array(MAX_ROWS);
-const rowPresent = new Uint8Array(MAX_ROWS);
-const rowLogMass = new Float64Array(MAX_ROWS);
-const rowLogPeriod = new Float64Array(MAX_ROWS);
-const rowSeparation = new Float64Array(MAX_ROWS);
+
+// The current system's companions as drawn: the same at every point. NaN / -1 = not computed yet.
+const rowDrawn = new Uint8Array(MAX_ROWS);
+/** Presence uniform u, occurrence (host-mass scaled), and the threshold below which the row was drawn. */
+const rowU = new Float64Array(MAX_ROWS);
+const rowOccurrence = new Float64Array(MAX_ROWS);
+const rowDrawThreshold = new Float64Array(MAX_ROWS);
+const rowMass = new Float64Array(MAX_ROWS);
+const rowPeriod = new Float64Array(MAX_ROWS);
+/** Fate-map bins of mass and initial period (computed on first use). */
+const rowMassBin = new Int32Array(MAX_ROWS);
+const rowPeriodBin = new Int32Array(MAX_ROWS);
+/** Initial semi-major axis (AU) and the widened one of a wide survivor. */
+const rowA0 = new Float64Array(MAX_ROWS);
+const rowWideAU = new Float64Array(MAX_ROWS);
+/** track: 1 iff the giant engulfs the companion (then the onset state below is set at the draw). */
+const rowEngulfed = new Uint8Array(MAX_ROWS);
+/** The giant at the onset of the common envelope: core mass, total mass (Msun), radius, separation (AU). */
+const rowCoreMass = new Float64Array(MAX_ROWS);
+const rowGiantMass = new Float64Array(MAX_ROWS);
+const rowRadiusAU = new Float64Array(MAX_ROWS);
+const rowOnsetAU = new Float64Array(MAX_ROWS);
+/** Derived once per companion on its first common envelope: helium core (1/0), core radius, companion radius (Rsun), Roche-lobe fraction. */
+const rowEnvelopeReady = new Uint8Array(MAX_ROWS);
+const rowHelium = new Uint8Array(MAX_ROWS);
+const rowCoreRadius = new Float64Array(MAX_ROWS);
+const rowCompanionRadius = new Float64Array(MAX_ROWS);
+const rowRocheFraction = new Float64Array(MAX_ROWS);
+/** Post-common-envelope orbit (AU) and period (d) for the point group rowEnvelopeGroup. */
+const rowEnvelopeGroup = new Int32Array(MAX_ROWS);
+const rowFinalAU = new Float64Array(MAX_ROWS);
+const rowFinalPeriod = new Float64Array(MAX_ROWS);
+/** Fields (MG) of a destroyed / close surviving companion, for the point group in the group array. */
+const rowDisruptionGroup = new Int32Array(MAX_ROWS);
+const rowDisruptionField = new Float64Array(MAX_ROWS);
+const rowCloseGroup = new Int32Array(MAX_ROWS);
+const rowCloseField = new Float64Array(MAX_ROWS);
+
+/** One system's outcome at one point: what the tallies count. */
+class Outcome {
+  accepted = false;
+  setting = SINGLE;
+  mwd = 0;
+  helium = false;
+  bestField = 0;
+  bestChannel = -1;
+  smallestMultiplier = Infinity;
+  closestPostCEPeriod = Infinity;
+  /** bestField ≥ the point's threshold. */
+  magnetic = false;
+  /** Per row: present at this point's multiplier (1/0), fate, final separation (AU). */
+  readonly present = new Uint8Array(MAX_ROWS);
+  readonly fate = new Int8Array(MAX_ROWS);
+  readonly separation = new Float64Array(MAX_ROWS);
+}
+/** The first point's outcome (the reference) and the current point's. */
+const reference = new Outcome();
+const current = new Outcome();
 
 /**
  * Runs chunk `chunkIndex` of the prepared scenario: draws its systems from the generator
@@ -69,8 +169,9 @@ const rowSeparation = new Float64Array(MAX_ROWS);
  * the selection uniform (magnitude-limited only); the field deviate; two fossil uniforms (fossil
  * channel enabled only); and per companion row a presence uniform u followed, iff
  * u < min(1, occurrence · (M1)^hostMassSlope · m_max), by the companion's mass and period. None of
- * these depends on the multiplier, α_CE, λ, η, the field options or threshold or the reach, so
- * sweeps over those share random numbers.
+ * these depends on the multiplier, α_CE, λ, η, the dissolution mass, the field options or
+ * threshold, the fossil fraction and main-sequence field, or the reach, so runChunkForPoints
+ * evaluates many values of those on one set of draws.
  *
  * Engine 2: each companion's fate is decided alone; the white dwarf's mass is the IFMR's unless
  * a post-common-envelope survivor ended the giant's evolution early (then the smallest onset core
@@ -78,50 +179,38 @@ const rowSeparation = new Float64Array(MAX_ROWS);
  * made by a companion counts only from the cooling age field.emergenceDelayGyr on.
  */
 export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkTally {
-  const tally = emptyTallyFor(prepared.scenarioHash);
+  return runChunkForPoints(prepared, [preparedPoint(prepared)], chunkIndex)[0];
+}
+
+/**
+ * The kernel: runs chunk `chunkIndex` once and returns one tally per point, tally p equal to
+ * runChunk of the scenario with point p's values. The draws and everything that follows from
+ * them alone (lifetime, IFMR, Kepler, the engulfment onset, radii) are computed once per system;
+ * each point decides the companions' fates, fields and the selection. Point 0 is tallied as is;
+ * another point is tallied only where its outcome differs from point 0's (its own counts added,
+ * point 0's taken away), and point 0's counts are added to it at the end: exact, since every
+ * count is an integer. `prepared` must be the preparation of any of the points (their draws agree).
+ */
+export function runChunkForPoints(prepared: PreparedScenario, points: readonly PreparedPoint[], chunkIndex: number): ChunkTally[] {
   const first = chunkIndex * CHUNK_SYSTEMS;
   const n = Math.min(CHUNK_SYSTEMS, prepared.systems - first);
   if (!(Number.isInteger(chunkIndex) && chunkIndex >= 0 && n > 0)) {
     throw new RangeError(`chunkIndex = ${chunkIndex} is outside the allowed range [0, ${prepared.chunkCount - 1}]`);
   }
+  if (points.length === 0) throw new RangeError('points must hold at least one parameter point');
+  const tallies = points.map((point) => emptyTallyFor(point.scenarioHash));
   const rng = chunkUniform(prepared.seed, chunkIndex);
-  const { imf, lifetime, ifmr, rows, field, selection, fossil } = prepared;
+  const { imf, lifetime, ifmr, rows, fossil } = prepared;
   const constantHistory = prepared.constantHistory;
   const ageGyr = prepared.ageGyr;
-  const threshold = field.thresholdMG;
-  const emergenceDelayGyr = field.emergenceDelayGyr;
   const rowCount = rows.length;
+  const magnitudeLimited = prepared.selection.kind === 'magnitudeLimited';
+  const track = prepared.giant.kind === 'track' ? prepared.giant : null;
+  const pointCount = points.length;
   const multiplierScale = BINS.multiplierBins / prepared.multiplierMax;
-  const magnitudeLimited = selection.kind === 'magnitudeLimited';
-  const massBins = BINS.log10CompanionMsun.count;
-  const periodBins = BINS.log10PeriodDays.count;
-  const separationBins = BINS.log10SeparationAU.count;
-  const wdMassBins = BINS.wdMassMsun.count;
-  const fieldBins = BINS.log10FieldMG.count;
-  const coolingBins = BINS.log10CoolingAgeGyr.count;
-  const postCEPeriodBins = BINS.log10PostCEPeriodDays.count;
+  const spread = pointSpread(points, rowCount);
 
   let whiteDwarfsFormed = 0;
-  let whiteDwarfs = 0;
-  let magnetic = 0;
-  let heliumWhiteDwarfs = 0;
-  let multiplierFossil = 0;
-  const byChannel = tally.byChannel;
-  const settingWhiteDwarfs = tally.settingWhiteDwarfs;
-  const settingMagnetic = tally.settingMagnetic;
-  const channelBySetting = tally.channelBySetting;
-  const companionFates = tally.companionFates;
-  const wdMassMagnetic = tally.wdMassMagnetic;
-  const wdMassNonMagnetic = tally.wdMassNonMagnetic;
-  const wdMassBySetting = tally.wdMassBySetting;
-  const logField = tally.logField;
-  const logFieldByChannel = tally.logFieldByChannel;
-  const coolingAge = tally.coolingAge;
-  const postCEPeriod = tally.postCEPeriod;
-  const fateMap = tally.fateMap;
-  const survivorSeparation = tally.survivorSeparation;
-  const multiplierBins = tally.multiplierBins;
-
   for (let s = 0; s < n; s++) {
     const m1 = sampleImfMsun(imf, rng());
     const age = constantHistory ? ageGyr * rng() : ageGyr;
@@ -132,26 +221,20 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
     const cooling = age - tms;
     const uSelect = magnitudeLimited ? rng() : 0;
     const z = normalQuantile(rng() + HALF_STEP);
-    const fieldsEmerged = cooling >= emergenceDelayGyr;
 
-    let fossilCarries = false;
+    let uFossil = 1;
     let zFossil = 0;
     if (fossil.enabled) {
-      fossilCarries = rng() < fossil.fraction && m1 >= fossil.loMsun && m1 <= fossil.hiMsun;
+      uFossil = rng();
       zFossil = normalQuantile(rng() + HALF_STEP);
     }
+    // Whether this system's outcome can differ between the points (false: point 0's counts hold for all).
+    let varies = spread.fossilVaries && uFossil < spread.maxFossilFraction && m1 >= fossil.loMsun && m1 <= fossil.hiMsun;
 
-    let mwd = ifmrMass;
-    let helium = false;
-    let setting = SINGLE;
-    let bestField = 0;
-    let bestChannel = -1;
-    let smallestMultiplier = Infinity;
-    let closestPostCEPeriod = Infinity;
     for (let r = 0; r < rowCount; r++) {
       const row = rows[r];
       const u = rng();
-      rowPresent[r] = 0;
+      rowDrawn[r] = 0;
       // Host-mass scaling of the occurrence, capped at 1 per star (a pow only when the row asks).
       const occurrence = row.hostMassSlope === 0 ? row.occurrence : row.occurrence * Math.pow(m1, row.hostMassSlope);
       const drawThreshold = row.hostMassSlope === 0 ? row.drawThreshold : Math.min(1, occurrence * prepared.multiplierMax);
@@ -163,152 +246,324 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
       const periodDays = row.periodQuantile
         ? powerLawQuantile(row.periodQuantile, uPeriod)
         : truncatedLognormalPeriodDays(row.meanLog10PeriodDays, row.sigmaLog10Period, row.cdfLo, row.cdfSpan, uPeriod, normalQuantile);
-      companionFate(prepared, m1, ifmrMass, m2, periodDays, z);
-      const fate = fateOut[0];
-      const present = u < (row.hostMassSlope === 0 ? row.presentThreshold : Math.min(drawThreshold, occurrence * prepared.multiplier));
-      const companionField = fieldsEmerged ? fateOut[1] : 0;
-      if (companionField >= threshold) {
-        const m = u / occurrence;
-        if (m < smallestMultiplier) smallestMultiplier = m;
-      }
-      if (!present) continue;
-      rowPresent[r] = 1;
-      rowFate[r] = fate;
-      rowLogMass[r] = Math.log10(m2);
-      rowLogPeriod[r] = Math.log10(periodDays);
-      rowSeparation[r] = fateOut[3];
-      if (fate === POST_CE) {
-        setting = POST_CE_SETTING;
-        if (fateOut[5] < closestPostCEPeriod) closestPostCEPeriod = fateOut[5];
-        if (fateOut[4] < mwd) {
-          mwd = fateOut[4];
-          helium = fateOut[6] === 1;
-        }
-      } else if (fate === WIDE && setting === SINGLE) setting = WIDE_SETTING;
-      if (companionField > bestField) {
-        bestField = companionField;
-        bestChannel = fateOut[2];
-      }
+      drawnCompanion(r, u, occurrence, drawThreshold, m1, m2, periodDays, track);
+      if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : rowA0[r] < spread.maxReachAU)) varies = true;
+      if (spread.multiplierVaries && (row.hostMassSlope !== 0 || (u >= spread.minPresent[r] && u < spread.maxPresent[r]))) varies = true;
     }
+    const pointsToEvaluate = varies ? pointCount : 1;
 
-    if (fossilCarries) {
-      const fossilField = fossilFieldMG(lognormalFieldMG(fossil.medianKG, fossil.widthDex, zFossil), mainSequenceRadiusRsun(m1), whiteDwarfRadiusRsun(mwd));
-      if (fossilField >= threshold) smallestMultiplier = 0;
-      if (fossilField > bestField) {
-        bestField = fossilField;
-        bestChannel = FOSSIL;
+    // Magnitude-limited acceptance at the IFMR mass, computed once if a point needs it.
+    let acceptanceAtIfmr = NaN;
+    for (let p = 0; p < pointsToEvaluate; p++) {
+      const out = p === 0 ? reference : current;
+      evaluatePoint(prepared, points[p], out, m1, ifmrMass, cooling, z, uFossil, zFossil);
+      if (out.accepted && magnitudeLimited) {
+        const selection = prepared.selection as Extract<PreparedScenario['selection'], { kind: 'magnitudeLimited' }>;
+        let accept: number;
+        if (out.mwd === ifmrMass) {
+          if (Number.isNaN(acceptanceAtIfmr)) acceptanceAtIfmr = magnitudeLimitedAcceptance(ifmrMass, cooling, selection.floorGyr, selection.wavelengthNm, selection.referenceFlux);
+          accept = acceptanceAtIfmr;
+        } else accept = magnitudeLimitedAcceptance(out.mwd, cooling, selection.floorGyr, selection.wavelengthNm, selection.referenceFlux);
+        out.accepted = uSelect < accept;
       }
-    }
-
-    if (magnitudeLimited) {
-      const accept = magnitudeLimitedAcceptance(mwd, cooling, selection.floorGyr, selection.wavelengthNm, selection.referenceFlux);
-      if (!(uSelect < accept)) continue;
-    }
-    whiteDwarfs++;
-    if (helium) heliumWhiteDwarfs++;
-    for (let r = 0; r < rowCount; r++) {
-      if (rowPresent[r] === 0) continue;
-      const fate = rowFate[r];
-      companionFates[fate]++;
-      fateMap[(fate * massBins + binIndex(BINS.log10CompanionMsun, rowLogMass[r])) * periodBins + binIndex(BINS.log10PeriodDays, rowLogPeriod[r])]++;
-      if (fate === WIDE || fate === POST_CE) survivorSeparation[fate * separationBins + binIndex(BINS.log10SeparationAU, Math.log10(rowSeparation[r]))]++;
-    }
-
-    settingWhiteDwarfs[setting]++;
-    const massBin = binIndex(BINS.wdMassMsun, mwd);
-    const coolingBin = binIndex(BINS.log10CoolingAgeGyr, Math.log10(cooling));
-    if (bestField > 0) {
-      const fieldBin = binIndex(BINS.log10FieldMG, Math.log10(bestField));
-      logField[fieldBin]++;
-      logFieldByChannel[bestChannel * fieldBins + fieldBin]++;
-    }
-    const isMagnetic = bestField >= threshold;
-    const split = isMagnetic ? 0 : 1;
-    if (isMagnetic) {
-      magnetic++;
-      byChannel[bestChannel]++;
-      settingMagnetic[setting]++;
-      channelBySetting[bestChannel * 3 + setting]++;
-      wdMassMagnetic[massBin]++;
-    } else {
-      wdMassNonMagnetic[massBin]++;
-    }
-    wdMassBySetting[(setting * 2 + split) * wdMassBins + massBin]++;
-    coolingAge[split * coolingBins + coolingBin]++;
-    if (setting === POST_CE_SETTING) postCEPeriod[split * postCEPeriodBins + binIndex(BINS.log10PostCEPeriodDays, Math.log10(closestPostCEPeriod))]++;
-    if (smallestMultiplier === 0) multiplierFossil++;
-    else if (smallestMultiplier < Infinity) {
-      const bin = Math.floor(smallestMultiplier * multiplierScale);
-      multiplierBins[bin < BINS.multiplierBins ? bin : BINS.multiplierBins - 1]++;
+      if (p === 0) tallyOutcome(tallies[0], reference, 1, rowCount, cooling, multiplierScale);
+      else if (!sameOutcome(reference, current, rowCount)) {
+        tallyOutcome(tallies[p], current, 1, rowCount, cooling, multiplierScale);
+        tallyOutcome(tallies[p], reference, -1, rowCount, cooling, multiplierScale);
+      }
     }
   }
 
-  tally.chunks = 1;
-  tally.systems = n;
-  tally.whiteDwarfsFormed = whiteDwarfsFormed;
-  tally.whiteDwarfs = whiteDwarfs;
-  tally.magnetic = magnetic;
-  tally.heliumWhiteDwarfs = heliumWhiteDwarfs;
-  tally.multiplierFossil = multiplierFossil;
-  return tally;
+  for (let p = 0; p < pointCount; p++) {
+    const tally = tallies[p];
+    if (p > 0) addCountsInto(tally, tallies[0]);
+    tally.chunks = 1;
+    tally.systems = n;
+    tally.whiteDwarfsFormed = whiteDwarfsFormed;
+  }
+  return tallies;
 }
 
 /**
- * Decides one companion's fate and writes fateOut (see above). Order: no common envelope → a
- * wide survivor on an orbit widened by the mass loss; else the Webbink budget with the giant's
- * state at the onset: a survivor if the post-CE orbit keeps the companion inside its Roche lobe
- * and outside the core (white-dwarf mass = core at onset for `track`, helium if the onset was on
- * the red giant branch; the IFMR mass for `fixedReach`), else destroyed in the envelope: dissolved
- * if lighter than the dissolution mass, otherwise shredded near the core (channel disruption).
- * A close survivor (final period below field.closeSurvivor.maxPeriodDays) gets a field iff that
- * channel is on.
+ * What differs between the points, for the kernel's test of whether a system's outcome can
+ * differ: presence (the multiplier; per row the lowest and highest presence threshold), the
+ * fates and fields of engulfed companions (reach, α_CE, λ, η, dissolution, field options,
+ * threshold, emergence delay; up to the largest reach), and fossil fields (fossil options or
+ * threshold; up to the largest fossil fraction). A system without a companion or fossil field
+ * that any of these can touch has point 0's outcome at every point.
  */
-function companionFate(prepared: PreparedScenario, m1: number, ifmrMass: number, m2: number, periodDays: number, z: number): void {
-  const a0 = semiMajorAxisAU(periodDays, m1 + m2);
-  const giant = prepared.giant;
-  let giantMass: number;
-  let coreMass: number;
-  let radiusAU: number;
-  let onsetAU: number;
-  let helium = false;
-  if (giant.kind === 'fixedReach') {
-    if (!(a0 < giant.reachAU)) return survivor(WIDE, widenedSeparationAU(a0, m1 + m2, ifmrMass + m2));
-    // fixedReach: the envelope engulfs the companion at R = a0, with the final core and the full envelope.
-    giantMass = m1;
-    coreMass = ifmrMass;
-    radiusAU = a0;
-    onsetAU = a0;
-  } else {
-    if (!commonEnvelopeOnset(giant.grid, m1, m2, a0, onsetOut)) return survivor(WIDE, widenedSeparationAU(a0, m1 + m2, ifmrMass + m2));
-    coreMass = onsetOut[0];
-    giantMass = onsetOut[1];
-    radiusAU = onsetOut[2];
-    onsetAU = onsetOut[3];
-    const tip = rgbTipCoreMassMsun(m1);
-    helium = tip !== null && coreMass < tip + HELIUM_CORE_MARGIN_MSUN;
-  }
-  const coreRadius = whiteDwarfRadiusRsun(coreMass);
-  const finalAU = postCommonEnvelopeSeparationAU(onsetAU, radiusAU, giantMass, coreMass, m2, prepared.alphaCE, prepared.lambda);
-  const finalRsun = finalAU * RSUN_PER_AU;
-  const r2 = companionRadiusRsun(m2);
-  if (finalRsun > coreRadius && r2 < rocheLobeFraction(m2 / coreMass) * finalRsun) {
-    const finalPeriod = keplerPeriodDays(finalAU, coreMass + m2);
-    survivor(POST_CE, finalAU);
-    fateOut[4] = coreMass;
-    fateOut[5] = finalPeriod;
-    fateOut[6] = helium ? 1 : 0;
-    const close = prepared.field.closeSurvivor;
-    if (prepared.closeSurvivorMakesField && finalPeriod < close.maxPeriodDays) {
-      fateOut[1] = lognormalFieldMG(close.medianMG, close.widthDex, z);
-      fateOut[2] = CLOSE_SURVIVOR;
+function pointSpread(points: readonly PreparedPoint[], rowCount: number) {
+  const first = points[0];
+  const minPresent = first.presentThresholds.slice(0, rowCount);
+  const maxPresent = first.presentThresholds.slice(0, rowCount);
+  let maxReachAU = first.reachAU;
+  let maxFossilFraction = first.fossilFraction;
+  let multiplierVaries = false;
+  let fateVaries = false;
+  let fossilVaries = false;
+  const fieldKey = (p: PreparedPoint) => JSON.stringify([p.eta, p.dissolutionBelowMsun, p.field.disruption, p.field.closeSurvivor, p.field.emergenceDelayGyr]);
+  const firstFieldKey = fieldKey(first);
+  for (const p of points) {
+    for (let r = 0; r < rowCount; r++) {
+      minPresent[r] = Math.min(minPresent[r], p.presentThresholds[r]);
+      maxPresent[r] = Math.max(maxPresent[r], p.presentThresholds[r]);
     }
-    return;
+    if (p.multiplier !== first.multiplier) multiplierVaries = true;
+    const thresholdVaries = p.field.thresholdMG !== first.field.thresholdMG;
+    if (thresholdVaries || !Object.is(p.reachAU, first.reachAU) || p.alphaCE !== first.alphaCE || p.lambda !== first.lambda || fieldKey(p) !== firstFieldKey) fateVaries = true;
+    if (thresholdVaries || p.fossilFraction !== first.fossilFraction || p.fossilMedianKG !== first.fossilMedianKG || p.fossilWidthDex !== first.fossilWidthDex) fossilVaries = true;
+    if (p.reachAU > maxReachAU) maxReachAU = p.reachAU;
+    if (p.fossilFraction > maxFossilFraction) maxFossilFraction = p.fossilFraction;
+  }
+  return { minPresent, maxPresent, maxReachAU, maxFossilFraction, multiplierVaries, fateVaries, fossilVaries };
+}
+
+/** Records drawn companion r and what follows from its draws alone (Kepler; the onset state for track). */
+function drawnCompanion(r: number, u: number, occurrence: number, drawThreshold: number, m1: number, m2: number, periodDays: number, track: PreparedTrack | null): void {
+  rowDrawn[r] = 1;
+  rowU[r] = u;
+  rowOccurrence[r] = occurrence;
+  rowDrawThreshold[r] = drawThreshold;
+  rowMass[r] = m2;
+  rowPeriod[r] = periodDays;
+  rowMassBin[r] = -1;
+  rowWideAU[r] = NaN;
+  rowEnvelopeReady[r] = 0;
+  rowEnvelopeGroup[r] = -1;
+  rowDisruptionGroup[r] = -1;
+  rowCloseGroup[r] = -1;
+  const a0 = semiMajorAxisAU(periodDays, m1 + m2);
+  rowA0[r] = a0;
+  if (track) {
+    const engulfed = commonEnvelopeOnset(track.grid, m1, m2, a0, onsetOut);
+    rowEngulfed[r] = engulfed ? 1 : 0;
+    if (engulfed) {
+      rowCoreMass[r] = onsetOut[0];
+      rowGiantMass[r] = onsetOut[1];
+      rowRadiusAU[r] = onsetOut[2];
+      rowOnsetAU[r] = onsetOut[3];
+    }
+  }
+}
+
+/**
+ * The current system's outcome at one point, before the magnitude-limited selection (`accepted`
+ * is true here; the caller applies the selection with out.mwd).
+ */
+function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, out: Outcome, m1: number, ifmrMass: number, cooling: number, z: number, uFossil: number, zFossil: number): void {
+  const rows = prepared.rows;
+  const threshold = point.field.thresholdMG;
+  const fieldsEmerged = cooling >= point.field.emergenceDelayGyr;
+  let mwd = ifmrMass;
+  let helium = false;
+  let setting = SINGLE;
+  let bestField = 0;
+  let bestChannel = -1;
+  let smallestMultiplier = Infinity;
+  let closestPostCEPeriod = Infinity;
+  for (let r = 0; r < rows.length; r++) {
+    out.present[r] = 0;
+    if (rowDrawn[r] === 0) continue;
+    companionFate(prepared, point, r, m1, ifmrMass, z);
+    const fate = fateOut[0];
+    const u = rowU[r];
+    const occurrence = rowOccurrence[r];
+    const present = u < (rows[r].hostMassSlope === 0 ? point.presentThresholds[r] : Math.min(rowDrawThreshold[r], occurrence * point.multiplier));
+    const companionField = fieldsEmerged ? fateOut[1] : 0;
+    if (companionField >= threshold) {
+      const m = u / occurrence;
+      if (m < smallestMultiplier) smallestMultiplier = m;
+    }
+    if (!present) continue;
+    out.present[r] = 1;
+    out.fate[r] = fate;
+    out.separation[r] = fateOut[3];
+    if (fate === POST_CE) {
+      setting = POST_CE_SETTING;
+      if (fateOut[5] < closestPostCEPeriod) closestPostCEPeriod = fateOut[5];
+      if (fateOut[4] < mwd) {
+        mwd = fateOut[4];
+        helium = fateOut[6] === 1;
+      }
+    } else if (fate === WIDE && setting === SINGLE) setting = WIDE_SETTING;
+    if (companionField > bestField) {
+      bestField = companionField;
+      bestChannel = fateOut[2];
+    }
+  }
+
+  const fossil = prepared.fossil;
+  if (fossil.enabled && uFossil < point.fossilFraction && m1 >= fossil.loMsun && m1 <= fossil.hiMsun) {
+    const fossilField = fossilFieldMG(lognormalFieldMG(point.fossilMedianKG, point.fossilWidthDex, zFossil), mainSequenceRadiusRsun(m1), whiteDwarfRadiusRsun(mwd));
+    if (fossilField >= threshold) smallestMultiplier = 0;
+    if (fossilField > bestField) {
+      bestField = fossilField;
+      bestChannel = FOSSIL;
+    }
+  }
+
+  out.accepted = true;
+  out.setting = setting;
+  out.mwd = mwd;
+  out.helium = helium;
+  out.bestField = bestField;
+  out.bestChannel = bestChannel;
+  out.smallestMultiplier = smallestMultiplier;
+  out.closestPostCEPeriod = closestPostCEPeriod;
+  // The magnetic verdict depends on the point's threshold: keep it with the outcome.
+  out.magnetic = bestField >= threshold;
+}
+
+/** true iff both outcomes add the same counts to a tally. */
+function sameOutcome(a: Outcome, b: Outcome, rowCount: number): boolean {
+  if (a.accepted !== b.accepted) return false;
+  if (!a.accepted) return true;
+  if (
+    a.setting !== b.setting ||
+    a.mwd !== b.mwd ||
+    a.helium !== b.helium ||
+    a.bestField !== b.bestField ||
+    a.bestChannel !== b.bestChannel ||
+    a.magnetic !== b.magnetic ||
+    a.smallestMultiplier !== b.smallestMultiplier ||
+    a.closestPostCEPeriod !== b.closestPostCEPeriod
+  ) {
+    return false;
+  }
+  for (let r = 0; r < rowCount; r++) {
+    if (a.present[r] !== b.present[r]) return false;
+    if (a.present[r] === 1 && (a.fate[r] !== b.fate[r] || a.separation[r] !== b.separation[r])) return false;
+  }
+  return true;
+}
+
+/** Adds (sign = 1) or takes away (sign = -1) one system's outcome to the tally's counts. */
+function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: number, cooling: number, multiplierScale: number): void {
+  if (!out.accepted) return;
+  const massBins = BINS.log10CompanionMsun.count;
+  const periodBins = BINS.log10PeriodDays.count;
+  const separationBins = BINS.log10SeparationAU.count;
+  const wdMassBins = BINS.wdMassMsun.count;
+  const fieldBins = BINS.log10FieldMG.count;
+  const coolingBins = BINS.log10CoolingAgeGyr.count;
+  const postCEPeriodBins = BINS.log10PostCEPeriodDays.count;
+  tally.whiteDwarfs += sign;
+  if (out.helium) tally.heliumWhiteDwarfs += sign;
+  for (let r = 0; r < rowCount; r++) {
+    if (out.present[r] === 0) continue;
+    const fate = out.fate[r];
+    if (rowMassBin[r] < 0) {
+      rowMassBin[r] = binIndex(BINS.log10CompanionMsun, Math.log10(rowMass[r]));
+      rowPeriodBin[r] = binIndex(BINS.log10PeriodDays, Math.log10(rowPeriod[r]));
+    }
+    tally.companionFates[fate] += sign;
+    tally.fateMap[(fate * massBins + rowMassBin[r]) * periodBins + rowPeriodBin[r]] += sign;
+    if (fate === WIDE || fate === POST_CE) tally.survivorSeparation[fate * separationBins + binIndex(BINS.log10SeparationAU, Math.log10(out.separation[r]))] += sign;
+  }
+
+  const setting = out.setting;
+  const bestChannel = out.bestChannel;
+  tally.settingWhiteDwarfs[setting] += sign;
+  const massBin = binIndex(BINS.wdMassMsun, out.mwd);
+  const coolingBin = binIndex(BINS.log10CoolingAgeGyr, Math.log10(cooling));
+  if (out.bestField > 0) {
+    const fieldBin = binIndex(BINS.log10FieldMG, Math.log10(out.bestField));
+    tally.logField[fieldBin] += sign;
+    tally.logFieldByChannel[bestChannel * fieldBins + fieldBin] += sign;
+  }
+  const split = out.magnetic ? 0 : 1;
+  if (out.magnetic) {
+    tally.magnetic += sign;
+    tally.byChannel[bestChannel] += sign;
+    tally.settingMagnetic[setting] += sign;
+    tally.channelBySetting[bestChannel * 3 + setting] += sign;
+    tally.wdMassMagnetic[massBin] += sign;
+  } else {
+    tally.wdMassNonMagnetic[massBin] += sign;
+  }
+  tally.wdMassBySetting[(setting * 2 + split) * wdMassBins + massBin] += sign;
+  tally.coolingAge[split * coolingBins + coolingBin] += sign;
+  if (setting === POST_CE_SETTING) tally.postCEPeriod[split * postCEPeriodBins + binIndex(BINS.log10PostCEPeriodDays, Math.log10(out.closestPostCEPeriod))] += sign;
+  const smallestMultiplier = out.smallestMultiplier;
+  if (smallestMultiplier === 0) tally.multiplierFossil += sign;
+  else if (smallestMultiplier < Infinity) {
+    const bin = Math.floor(smallestMultiplier * multiplierScale);
+    tally.multiplierBins[bin < BINS.multiplierBins ? bin : BINS.multiplierBins - 1] += sign;
+  }
+}
+
+/**
+ * Decides companion r's fate at one point and writes fateOut (see above). Order: no common
+ * envelope → a wide survivor on an orbit widened by the mass loss; else the Webbink budget with
+ * the giant's state at the onset: a survivor if the post-CE orbit keeps the companion inside its
+ * Roche lobe and outside the core (white-dwarf mass = core at onset for `track`, helium if the
+ * onset was on the red giant branch; the IFMR mass for `fixedReach`), else destroyed in the
+ * envelope: dissolved if lighter than the dissolution mass, otherwise shredded near the core
+ * (channel disruption). A close survivor (final period below field.closeSurvivor.maxPeriodDays)
+ * gets a field iff that channel is on. What does not depend on the point is computed once per
+ * companion and kept in the row arrays.
+ */
+function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: number, m1: number, ifmrMass: number, z: number): void {
+  const m2 = rowMass[r];
+  const a0 = rowA0[r];
+  const fixedReach = prepared.giant.kind === 'fixedReach';
+  if (fixedReach ? !(a0 < point.reachAU) : rowEngulfed[r] === 0) {
+    if (Number.isNaN(rowWideAU[r])) rowWideAU[r] = widenedSeparationAU(a0, m1 + m2, ifmrMass + m2);
+    return survivor(WIDE, rowWideAU[r]);
+  }
+  if (rowEnvelopeReady[r] === 0) {
+    if (fixedReach) {
+      // fixedReach: the envelope engulfs the companion at R = a0, with the final core and the full envelope.
+      rowGiantMass[r] = m1;
+      rowCoreMass[r] = ifmrMass;
+      rowRadiusAU[r] = a0;
+      rowOnsetAU[r] = a0;
+      rowHelium[r] = 0;
+    } else {
+      const tip = rgbTipCoreMassMsun(m1);
+      rowHelium[r] = tip !== null && rowCoreMass[r] < tip + HELIUM_CORE_MARGIN_MSUN ? 1 : 0;
+    }
+    rowCoreRadius[r] = whiteDwarfRadiusRsun(rowCoreMass[r]);
+    rowCompanionRadius[r] = companionRadiusRsun(m2);
+    rowRocheFraction[r] = NaN;
+    rowEnvelopeReady[r] = 1;
+  }
+  const coreMass = rowCoreMass[r];
+  const coreRadius = rowCoreRadius[r];
+  const r2 = rowCompanionRadius[r];
+  if (rowEnvelopeGroup[r] !== point.envelopeGroup) {
+    rowFinalAU[r] = postCommonEnvelopeSeparationAU(rowOnsetAU[r], rowRadiusAU[r], rowGiantMass[r], coreMass, m2, point.alphaCE, point.lambda);
+    rowFinalPeriod[r] = NaN;
+    rowEnvelopeGroup[r] = point.envelopeGroup;
+  }
+  const finalAU = rowFinalAU[r];
+  const finalRsun = finalAU * RSUN_PER_AU;
+  if (finalRsun > coreRadius) {
+    if (Number.isNaN(rowRocheFraction[r])) rowRocheFraction[r] = rocheLobeFraction(m2 / coreMass);
+    if (r2 < rowRocheFraction[r] * finalRsun) {
+      if (Number.isNaN(rowFinalPeriod[r])) rowFinalPeriod[r] = keplerPeriodDays(finalAU, coreMass + m2);
+      const finalPeriod = rowFinalPeriod[r];
+      survivor(POST_CE, finalAU);
+      fateOut[4] = coreMass;
+      fateOut[5] = finalPeriod;
+      fateOut[6] = rowHelium[r];
+      const close = point.field.closeSurvivor;
+      if (prepared.closeSurvivorMakesField && finalPeriod < close.maxPeriodDays) {
+        if (rowCloseGroup[r] !== point.closeFieldGroup) {
+          rowCloseField[r] = lognormalFieldMG(close.medianMG, close.widthDex, z);
+          rowCloseGroup[r] = point.closeFieldGroup;
+        }
+        fateOut[1] = rowCloseField[r];
+        fateOut[2] = CLOSE_SURVIVOR;
+      }
+      return;
+    }
   }
   fateOut[3] = 0;
   fateOut[4] = 0;
   fateOut[5] = 0;
   fateOut[6] = 0;
-  if (m2 < prepared.dissolutionBelowMsun) {
+  if (m2 < point.dissolutionBelowMsun) {
     fateOut[0] = DISSOLVED;
     fateOut[1] = 0;
     fateOut[2] = -1;
@@ -316,15 +571,25 @@ function companionFate(prepared: PreparedScenario, m1: number, ifmrMass: number,
   }
   fateOut[0] = DISRUPTED;
   fateOut[2] = DISRUPTION;
-  const f = prepared.field.disruption;
-  if (!prepared.disruptionMakesField) fateOut[1] = 0;
-  else if (f.kind === 'lognormal') fateOut[1] = lognormalFieldMG(f.medianMG, f.widthDex, z);
-  else if (f.kind === 'companionScaled') fateOut[1] = lognormalFieldMG(companionScaledMedianMG(m2, f.referenceMG, f.referenceMassMJup, f.slope), f.widthDex, z);
-  else {
-    // The debris disc forms at the companion's tidal radius around the core (η sets it).
-    const tidalRadius = tidalRadiusRsun(prepared.eta, r2, coreMass, m2);
-    fateOut[1] = lognormalFieldMG(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio), f.widthDex, z);
+  if (!prepared.disruptionMakesField) {
+    fateOut[1] = 0;
+    return;
   }
+  if (rowDisruptionGroup[r] !== point.disruptionFieldGroup) {
+    rowDisruptionField[r] = disruptionFieldMG(point, coreMass, coreRadius, m2, r2, z);
+    rowDisruptionGroup[r] = point.disruptionFieldGroup;
+  }
+  fateOut[1] = rowDisruptionField[r];
+}
+
+/** Field (MG) of a white dwarf whose companion of mass m2 (radius r2) was shredded near the core. */
+function disruptionFieldMG(point: PreparedPoint, coreMass: number, coreRadius: number, m2: number, r2: number, z: number): number {
+  const f = point.field.disruption;
+  if (f.kind === 'lognormal') return lognormalFieldMG(f.medianMG, f.widthDex, z);
+  if (f.kind === 'companionScaled') return lognormalFieldMG(companionScaledMedianMG(m2, f.referenceMG, f.referenceMassMJup, f.slope), f.widthDex, z);
+  // The debris disc forms at the companion's tidal radius around the core (η sets it).
+  const tidalRadius = tidalRadiusRsun(point.eta, r2, coreMass, m2);
+  return lognormalFieldMG(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio), f.widthDex, z);
 }
 
 function survivor(fate: number, separationAU: number): void {
@@ -336,4 +601,3 @@ function survivor(fate: number, separationAU: number): void {
   fateOut[5] = 0;
   fateOut[6] = 0;
 }
-

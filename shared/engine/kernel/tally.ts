@@ -117,6 +117,11 @@ export function addTallyInto(target: ChunkTally, b: ChunkTally): ChunkTally {
   for (const key of ARRAY_FIELDS) {
     if (target[key].length !== b[key].length) throw new Error(`cannot add tallies: ${key} has ${target[key].length} and ${b[key].length} entries`);
   }
+  return addCountsInto(target, b);
+}
+
+/** Adds every count of `b` into `target` in place (no checks: the caller knows both have one layout). */
+export function addCountsInto(target: ChunkTally, b: ChunkTally): ChunkTally {
   for (const key of SCALAR_FIELDS) target[key] += b[key];
   for (const key of ARRAY_FIELDS) {
     const x = target[key];
