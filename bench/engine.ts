@@ -9,6 +9,7 @@ import { buildEngulfmentGrid, commonEnvelopeOnset } from '../shared/engine/physi
 import { chunkUniform } from '../shared/engine/random.ts';
 import { CHUNK_SYSTEMS } from '../shared/engine/version.ts';
 import { createEnginePool } from '../server/engine-pool/engine-pool.ts';
+import { sweepCostRatio } from './points.ts';
 import { runScenario } from '../server/engine-pool/run-scenario.ts';
 
 /**
@@ -16,8 +17,9 @@ import { runScenario } from '../server/engine-pool/run-scenario.ts';
  * assert. Figures: raw generator draws per second; kernel systems per second per thread for
  * the baseline with fixedReach and with track; the track grid build time and the onset-state
  * lookup rate (engine 2's per-system cost of the common-envelope onset); the 2-worker versus
- * 1-worker speed-up on a warm pool; peak RSS at 1e6 and 1e8 systems (child processes); and the
- * ratios the targets are stated in.
+ * 1-worker speed-up on a warm pool; peak RSS at 1e6 and 1e8 systems (child processes); the cost
+ * of a 20-point α_CE sweep on the multi-point kernel as a multiple of one run (bench/points.ts); and
+ * the ratios the targets are stated in.
  */
 
 const load = (name: string, overrides: Record<string, unknown> = {}): Scenario =>
@@ -102,6 +104,13 @@ line('common-envelope onset lookups / s (engine 2 table)', fmt(onsetRate));
 const trackRate = kernelSystemsPerSecond(prepareScenario(trackScenario, { engulfmentGrid: grid }), 60);
 line('kernel, baseline track, systems / s / thread', fmt(trackRate));
 
+// ---- multi-point kernel (issue 14): a 20-point α_CE sweep in one pass, as a multiple of one run ----
+const fixedSweepRatio = sweepCostRatio(load('baseline-fixed-reach', { systems: 64 * CHUNK_SYSTEMS }), fixed);
+const trackSweepRatio = sweepCostRatio(trackScenario, prepareScenario(trackScenario, { engulfmentGrid: grid }));
+line('20-point α_CE sweep / one run, fixedReach (×)', fmt(fixedSweepRatio));
+line('20-point α_CE sweep / one run, track (×)', fmt(trackSweepRatio));
+// ---- end of the multi-point kernel block ----
+
 const speedSystems = 150 * CHUNK_SYSTEMS;
 const one = await poolSeconds(1, speedSystems);
 const two = await poolSeconds(2, speedSystems);
@@ -132,3 +141,6 @@ target('≤ 10 generator draws per kernel system', drawsPerSystem <= 10, `${fmt(
 target('2-worker speed-up ≥ 1.8', speedUp >= 1.8, fmt(speedUp));
 target('RSS growth 1e6 → 1e8 < 20 MB', rssGrowth < 20, `${fmt(rssGrowth)} MB`);
 target('1e8 baseline systems < 60 s on 2 cores', big.seconds < 60, `${fmt(big.seconds)} s`);
+// multi-point kernel (issue 14)
+target('20-point α_CE sweep ≤ 3 runs (fixedReach)', fixedSweepRatio <= 3, `${fmt(fixedSweepRatio)} × one run`);
+target('20-point α_CE sweep ≤ 3 runs (track)', trackSweepRatio <= 3, `${fmt(trackSweepRatio)} × one run`);
