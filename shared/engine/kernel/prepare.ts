@@ -51,13 +51,24 @@ export interface PreparedRow {
   cdfSpan: number;
 }
 
+export interface PreparedFossil {
+  enabled: boolean;
+  fraction: number;
+  massRangeMsun: [number, number];
+  msField: { medianKG: number; widthDex: number };
+}
+
 export type PreparedGiant = { kind: 'fixedReach'; reachAU: number } | PreparedTrack;
 
 export type PreparedSelection =
   | { kind: 'volume' }
-  | { kind: 'magnitudeLimited'; floorGyr: number; wavelengthNm: number; referenceFlux: number };
+  | { kind: 'magnitudeLimited'; coolingAgeFloorGyr: number; wavelengthNm: number; referenceFlux: number };
 
-/** Everything runChunk needs, as plain structured-clone-able data. */
+/**
+ * Everything runChunk needs, as plain structured-clone-able data. Fields keep the scenario
+ * contract's names and nesting (envelope.alpha, disruption.eta, channels.fossil.msField, …);
+ * derived numbers say what they are (dissolutionBelowMsun, multiplierMax, …).
+ */
 export interface PreparedScenario {
   engineVersion: string;
   scenarioHash: string;
@@ -75,15 +86,15 @@ export interface PreparedScenario {
   /** Largest multiplier the rows allow, 1 / max(occurrence) (1 if no row has any). */
   multiplierMax: number;
   giant: PreparedGiant;
-  alphaCE: number;
-  lambda: number;
-  eta: number;
+  envelope: { alpha: number; lambda: number };
+  disruption: {
+    eta: number;
+    /** Destroyed companions lighter than this (Msun) dissolve in the envelope; 0 = none do. */
+    dissolutionBelowMsun: number;
+  };
   field: Scenario['field'];
-  disruptionMakesField: boolean;
-  closeSurvivorMakesField: boolean;
-  /** Destroyed companions lighter than this (Msun) dissolve in the envelope; 0 = none do. */
-  dissolutionBelowMsun: number;
-  fossil: { enabled: boolean; fraction: number; loMsun: number; hiMsun: number; medianKG: number; widthDex: number };
+  /** Which channels make a field (channels.disruption, channels.closeSurvivor) and the fossil channel's options. */
+  channels: { disruption: boolean; closeSurvivor: boolean; fossil: PreparedFossil };
   selection: PreparedSelection;
 }
 
@@ -122,20 +133,21 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
     multiplier,
     multiplierMax,
     giant: scenario.giant.kind === 'fixedReach' ? { kind: 'fixedReach', reachAU: scenario.giant.reachAU } : buildTrackGiant(scenario, options.engulfmentGrid),
-    alphaCE: scenario.envelope.alpha,
-    lambda: scenario.envelope.lambda,
-    eta: scenario.disruption.eta,
+    envelope: { alpha: scenario.envelope.alpha, lambda: scenario.envelope.lambda },
+    disruption: {
+      eta: scenario.disruption.eta,
+      dissolutionBelowMsun: scenario.disruption.dissolution.kind === 'belowMass' ? scenario.disruption.dissolution.massMJup * MJUP_MSUN : 0,
+    },
     field: scenario.field,
-    disruptionMakesField: scenario.channels.disruption,
-    closeSurvivorMakesField: scenario.channels.closeSurvivor,
-    dissolutionBelowMsun: scenario.disruption.dissolution.kind === 'belowMass' ? scenario.disruption.dissolution.massMJup * MJUP_MSUN : 0,
-    fossil: {
-      enabled: fossil.enabled,
-      fraction: fossil.fraction,
-      loMsun: fossil.massRangeMsun[0],
-      hiMsun: fossil.massRangeMsun[1],
-      medianKG: fossil.msField.medianKG,
-      widthDex: fossil.msField.widthDex,
+    channels: {
+      disruption: scenario.channels.disruption,
+      closeSurvivor: scenario.channels.closeSurvivor,
+      fossil: {
+        enabled: fossil.enabled,
+        fraction: fossil.fraction,
+        massRangeMsun: [fossil.massRangeMsun[0], fossil.massRangeMsun[1]],
+        msField: { medianKG: fossil.msField.medianKG, widthDex: fossil.msField.widthDex },
+      },
     },
     selection: preparedSelection(scenario, lifetime, ifmr),
   };
@@ -208,5 +220,5 @@ function preparedSelection(scenario: Scenario, lifetime: PreparedLifetime, ifmr:
     const mass = REFERENCE_SCAN_LO_MSUN + ((heaviest - REFERENCE_SCAN_LO_MSUN) * k) / scan;
     referenceFlux = Math.max(referenceFlux, opticalFlux(mass, youngest, selection.wavelengthNm));
   }
-  return { kind: 'magnitudeLimited', floorGyr: selection.coolingAgeFloorGyr, wavelengthNm: selection.wavelengthNm, referenceFlux: referenceFlux * (1 + 1e-6) };
+  return { kind: 'magnitudeLimited', coolingAgeFloorGyr: selection.coolingAgeFloorGyr, wavelengthNm: selection.wavelengthNm, referenceFlux: referenceFlux * (1 + 1e-6) };
 }

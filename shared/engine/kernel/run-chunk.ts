@@ -23,7 +23,7 @@ import { chunkUniform } from '../random.ts';
 import { CHUNK_SYSTEMS } from '../version.ts';
 import { BINS, binIndex } from './bins.ts';
 import type { PreparedTrack } from './engulfment.ts';
-import type { PreparedScenario } from './prepare.ts';
+import type { PreparedFossil, PreparedScenario } from './prepare.ts';
 import { lifetimeGyr } from './scenario-physics.ts';
 import { addCountsInto, emptyTallyFor, type ChunkTally } from './tally.ts';
 
@@ -60,14 +60,10 @@ export interface PreparedPoint {
   presentThresholds: number[];
   /** fixedReach: the reach, AU; track: NaN (the engulfment grid decides). */
   reachAU: number;
-  alphaCE: number;
-  lambda: number;
-  eta: number;
-  dissolutionBelowMsun: number;
+  envelope: PreparedScenario['envelope'];
+  disruption: PreparedScenario['disruption'];
   field: PreparedScenario['field'];
-  fossilFraction: number;
-  fossilMedianKG: number;
-  fossilWidthDex: number;
+  fossil: Pick<PreparedFossil, 'fraction' | 'msField'>;
   /** Index of the first point with the same α_CE and λ (the same post-common-envelope orbits). */
   envelopeGroup: number;
   /** Index of the first point with the same η and field.disruption (the same disruption fields). */
@@ -83,14 +79,10 @@ export function preparedPoint(prepared: PreparedScenario, groups: Pick<PreparedP
     multiplier: prepared.multiplier,
     presentThresholds: prepared.rows.map((row) => row.presentThreshold),
     reachAU: prepared.giant.kind === 'fixedReach' ? prepared.giant.reachAU : NaN,
-    alphaCE: prepared.alphaCE,
-    lambda: prepared.lambda,
-    eta: prepared.eta,
-    dissolutionBelowMsun: prepared.dissolutionBelowMsun,
+    envelope: prepared.envelope,
+    disruption: prepared.disruption,
     field: prepared.field,
-    fossilFraction: prepared.fossil.fraction,
-    fossilMedianKG: prepared.fossil.medianKG,
-    fossilWidthDex: prepared.fossil.widthDex,
+    fossil: { fraction: prepared.channels.fossil.fraction, msField: prepared.channels.fossil.msField },
     ...groups,
   };
 }
@@ -200,7 +192,9 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
   if (points.length === 0) throw new RangeError('points must hold at least one parameter point');
   const tallies = points.map((point) => emptyTallyFor(point.scenarioHash));
   const rng = chunkUniform(prepared.seed, chunkIndex);
-  const { imf, lifetime, ifmr, rows, fossil } = prepared;
+  const { imf, lifetime, ifmr, rows } = prepared;
+  const fossil = prepared.channels.fossil;
+  const [fossilLoMsun, fossilHiMsun] = fossil.massRangeMsun;
   const constantHistory = prepared.constantHistory;
   const ageGyr = prepared.ageGyr;
   const rowCount = rows.length;
@@ -229,7 +223,7 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
       zFossil = normalQuantile(rng() + HALF_STEP);
     }
     // Whether this system's outcome can differ between the points (false: point 0's counts hold for all).
-    let varies = spread.fossilVaries && uFossil < spread.maxFossilFraction && m1 >= fossil.loMsun && m1 <= fossil.hiMsun;
+    let varies = spread.fossilVaries && uFossil < spread.maxFossilFraction && m1 >= fossilLoMsun && m1 <= fossilHiMsun;
 
     for (let r = 0; r < rowCount; r++) {
       const row = rows[r];
@@ -261,9 +255,9 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
         const selection = prepared.selection as Extract<PreparedScenario['selection'], { kind: 'magnitudeLimited' }>;
         let accept: number;
         if (out.mwd === ifmrMass) {
-          if (Number.isNaN(acceptanceAtIfmr)) acceptanceAtIfmr = magnitudeLimitedAcceptance(ifmrMass, cooling, selection.floorGyr, selection.wavelengthNm, selection.referenceFlux);
+          if (Number.isNaN(acceptanceAtIfmr)) acceptanceAtIfmr = magnitudeLimitedAcceptance(ifmrMass, cooling, selection.coolingAgeFloorGyr, selection.wavelengthNm, selection.referenceFlux);
           accept = acceptanceAtIfmr;
-        } else accept = magnitudeLimitedAcceptance(out.mwd, cooling, selection.floorGyr, selection.wavelengthNm, selection.referenceFlux);
+        } else accept = magnitudeLimitedAcceptance(out.mwd, cooling, selection.coolingAgeFloorGyr, selection.wavelengthNm, selection.referenceFlux);
         out.accepted = uSelect < accept;
       }
       if (p === 0) tallyOutcome(tallies[0], reference, 1, rowCount, cooling, multiplierScale);
@@ -297,11 +291,11 @@ function pointSpread(points: readonly PreparedPoint[], rowCount: number) {
   const minPresent = first.presentThresholds.slice(0, rowCount);
   const maxPresent = first.presentThresholds.slice(0, rowCount);
   let maxReachAU = first.reachAU;
-  let maxFossilFraction = first.fossilFraction;
+  let maxFossilFraction = first.fossil.fraction;
   let multiplierVaries = false;
   let fateVaries = false;
   let fossilVaries = false;
-  const fieldKey = (p: PreparedPoint) => JSON.stringify([p.eta, p.dissolutionBelowMsun, p.field.disruption, p.field.closeSurvivor, p.field.emergenceDelayGyr]);
+  const fieldKey = (p: PreparedPoint) => JSON.stringify([p.disruption, p.field.disruption, p.field.closeSurvivor, p.field.emergenceDelayGyr]);
   const firstFieldKey = fieldKey(first);
   for (const p of points) {
     for (let r = 0; r < rowCount; r++) {
@@ -310,10 +304,10 @@ function pointSpread(points: readonly PreparedPoint[], rowCount: number) {
     }
     if (p.multiplier !== first.multiplier) multiplierVaries = true;
     const thresholdVaries = p.field.thresholdMG !== first.field.thresholdMG;
-    if (thresholdVaries || !Object.is(p.reachAU, first.reachAU) || p.alphaCE !== first.alphaCE || p.lambda !== first.lambda || fieldKey(p) !== firstFieldKey) fateVaries = true;
-    if (thresholdVaries || p.fossilFraction !== first.fossilFraction || p.fossilMedianKG !== first.fossilMedianKG || p.fossilWidthDex !== first.fossilWidthDex) fossilVaries = true;
+    if (thresholdVaries || !Object.is(p.reachAU, first.reachAU) || p.envelope.alpha !== first.envelope.alpha || p.envelope.lambda !== first.envelope.lambda || fieldKey(p) !== firstFieldKey) fateVaries = true;
+    if (thresholdVaries || p.fossil.fraction !== first.fossil.fraction || p.fossil.msField.medianKG !== first.fossil.msField.medianKG || p.fossil.msField.widthDex !== first.fossil.msField.widthDex) fossilVaries = true;
     if (p.reachAU > maxReachAU) maxReachAU = p.reachAU;
-    if (p.fossilFraction > maxFossilFraction) maxFossilFraction = p.fossilFraction;
+    if (p.fossil.fraction > maxFossilFraction) maxFossilFraction = p.fossil.fraction;
   }
   return { minPresent, maxPresent, maxReachAU, maxFossilFraction, multiplierVaries, fateVaries, fossilVaries };
 }
@@ -392,9 +386,9 @@ function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, out: Ou
     }
   }
 
-  const fossil = prepared.fossil;
-  if (fossil.enabled && uFossil < point.fossilFraction && m1 >= fossil.loMsun && m1 <= fossil.hiMsun) {
-    const fossilField = fossilFieldMG(lognormalFieldMG(point.fossilMedianKG, point.fossilWidthDex, zFossil), mainSequenceRadiusRsun(m1), whiteDwarfRadiusRsun(mwd));
+  const fossil = prepared.channels.fossil;
+  if (fossil.enabled && uFossil < point.fossil.fraction && m1 >= fossil.massRangeMsun[0] && m1 <= fossil.massRangeMsun[1]) {
+    const fossilField = fossilFieldMG(lognormalFieldMG(point.fossil.msField.medianKG, point.fossil.msField.widthDex, zFossil), mainSequenceRadiusRsun(m1), whiteDwarfRadiusRsun(mwd));
     if (fossilField >= threshold) smallestMultiplier = 0;
     if (fossilField > bestField) {
       bestField = fossilField;
@@ -532,7 +526,7 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: numb
   const coreRadius = rowCoreRadius[r];
   const r2 = rowCompanionRadius[r];
   if (rowEnvelopeGroup[r] !== point.envelopeGroup) {
-    rowFinalAU[r] = postCommonEnvelopeSeparationAU(rowOnsetAU[r], rowRadiusAU[r], rowGiantMass[r], coreMass, m2, point.alphaCE, point.lambda);
+    rowFinalAU[r] = postCommonEnvelopeSeparationAU(rowOnsetAU[r], rowRadiusAU[r], rowGiantMass[r], coreMass, m2, point.envelope.alpha, point.envelope.lambda);
     rowFinalPeriod[r] = NaN;
     rowEnvelopeGroup[r] = point.envelopeGroup;
   }
@@ -548,7 +542,7 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: numb
       fateOut[5] = finalPeriod;
       fateOut[6] = rowHelium[r];
       const close = point.field.closeSurvivor;
-      if (prepared.closeSurvivorMakesField && finalPeriod < close.maxPeriodDays) {
+      if (prepared.channels.closeSurvivor && finalPeriod < close.maxPeriodDays) {
         if (rowCloseGroup[r] !== point.closeFieldGroup) {
           rowCloseField[r] = lognormalFieldMG(close.medianMG, close.widthDex, z);
           rowCloseGroup[r] = point.closeFieldGroup;
@@ -563,7 +557,7 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: numb
   fateOut[4] = 0;
   fateOut[5] = 0;
   fateOut[6] = 0;
-  if (m2 < point.dissolutionBelowMsun) {
+  if (m2 < point.disruption.dissolutionBelowMsun) {
     fateOut[0] = DISSOLVED;
     fateOut[1] = 0;
     fateOut[2] = -1;
@@ -571,7 +565,7 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: numb
   }
   fateOut[0] = DISRUPTED;
   fateOut[2] = DISRUPTION;
-  if (!prepared.disruptionMakesField) {
+  if (!prepared.channels.disruption) {
     fateOut[1] = 0;
     return;
   }
@@ -588,7 +582,7 @@ function disruptionFieldMG(point: PreparedPoint, coreMass: number, coreRadius: n
   if (f.kind === 'lognormal') return lognormalFieldMG(f.medianMG, f.widthDex, z);
   if (f.kind === 'companionScaled') return lognormalFieldMG(companionScaledMedianMG(m2, f.referenceMG, f.referenceMassMJup, f.slope), f.widthDex, z);
   // The debris disc forms at the companion's tidal radius around the core (η sets it).
-  const tidalRadius = tidalRadiusRsun(point.eta, r2, coreMass, m2);
+  const tidalRadius = tidalRadiusRsun(point.disruption.eta, r2, coreMass, m2);
   return lognormalFieldMG(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio), f.widthDex, z);
 }
 

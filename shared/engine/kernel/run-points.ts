@@ -100,8 +100,8 @@ export function preparePoints(scenario: Scenario, prepared: PreparedScenario, po
     const pointPrepared = prepareScenario(pointScenario, { engulfmentGrid });
     assertSameDraws(prepared, pointPrepared);
     const point = preparedPoint(pointPrepared);
-    point.envelopeGroup = groupOf(envelopeKeys, JSON.stringify([point.alphaCE, point.lambda]));
-    point.disruptionFieldGroup = groupOf(disruptionKeys, JSON.stringify([point.eta, point.field.disruption]));
+    point.envelopeGroup = groupOf(envelopeKeys, JSON.stringify(point.envelope));
+    point.disruptionFieldGroup = groupOf(disruptionKeys, JSON.stringify([point.disruption.eta, point.field.disruption]));
     point.closeFieldGroup = groupOf(closeKeys, JSON.stringify(point.field.closeSurvivor));
     preparedPoints.push(point);
   }
@@ -163,7 +163,7 @@ function applicability(path: string, scenario: Scenario): string {
 /** Throws unless the two preparations draw the same numbers (an internal check of DRAW_FREE_PATHS). */
 function assertSameDraws(a: PreparedScenario, b: PreparedScenario): void {
   const draws = (p: PreparedScenario) =>
-    JSON.stringify([p.seed, p.systems, p.multiplierMax, p.ageGyr, p.constantHistory, p.selection.kind, p.fossil.enabled, p.rows.map((r) => r.drawThreshold), p.imf, p.ifmr, p.lifetime]);
+    JSON.stringify([p.seed, p.systems, p.multiplierMax, p.ageGyr, p.constantHistory, p.selection.kind, p.channels.fossil.enabled, p.rows.map((r) => r.drawThreshold), p.imf, p.ifmr, p.lifetime]);
   if (draws(a) !== draws(b)) throw new Error('a draw-free parameter changed the draws (DRAW_FREE_PATHS is wrong)');
 }
 
