@@ -10,6 +10,7 @@ import { opticalFlux } from '../physics/selection-magnitude-limited.ts';
 import { ENGINE_VERSION } from '../version.ts';
 import { planChunks } from './chunks.ts';
 import { buildTrackGiant, type EngulfmentGrid, type PreparedTrack } from './engulfment.ts';
+import { buildFormationScreen, type FormationScreen } from './formation-screen.ts';
 import { scenarioHash } from './scenario-hash.ts';
 import {
   heaviestWhiteDwarfMsun,
@@ -69,6 +70,8 @@ export interface PreparedScenario {
   constantHistory: boolean;
   ageGyr: number;
   lifetime: PreparedLifetime;
+  /** Lower bounds of t_MS over cells of the primary-mass uniform (rejects most non-white-dwarfs without a pow). */
+  formationScreen: FormationScreen;
   ifmr: IfmrSegments;
   rows: PreparedRow[];
   multiplier: number;
@@ -106,17 +109,19 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
   }
   const preparedRows = rows.map((row) => prepareRow(row, maxOccurrence, multiplierMax, multiplier));
   const fossil = scenario.channels.fossil;
+  const imf = buildImfSampler(p.imf, p.massRangeMsun);
   return {
     engineVersion: ENGINE_VERSION,
     scenarioHash: scenarioHash(scenario),
     seed: scenario.seed,
     systems: scenario.systems,
     chunkCount,
-    imf: buildImfSampler(p.imf, p.massRangeMsun),
+    imf,
     massRangeMsun: [p.massRangeMsun[0], p.massRangeMsun[1]],
     constantHistory: p.history.kind === 'constant',
     ageGyr: p.history.ageGyr,
     lifetime,
+    formationScreen: buildFormationScreen(imf, lifetime),
     ifmr,
     rows: preparedRows,
     multiplier,

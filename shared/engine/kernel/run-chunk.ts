@@ -22,6 +22,7 @@ import { whiteDwarfRadiusRsun } from '../physics/white-dwarf-radius-nauenberg197
 import { chunkUniform } from '../random.ts';
 import { CHUNK_SYSTEMS } from '../version.ts';
 import { BINS, binIndex } from './bins.ts';
+import { surelyNotWhiteDwarf } from './formation-screen.ts';
 import type { PreparedScenario } from './prepare.ts';
 import { lifetimeGyr } from './scenario-physics.ts';
 import { emptyTallyFor, type ChunkTally } from './tally.ts';
@@ -85,7 +86,7 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
     throw new RangeError(`chunkIndex = ${chunkIndex} is outside the allowed range [0, ${prepared.chunkCount - 1}]`);
   }
   const rng = chunkUniform(prepared.seed, chunkIndex);
-  const { imf, lifetime, ifmr, rows, field, selection, fossil } = prepared;
+  const { imf, lifetime, ifmr, rows, field, selection, fossil, formationScreen } = prepared;
   const constantHistory = prepared.constantHistory;
   const ageGyr = prepared.ageGyr;
   const threshold = field.thresholdMG;
@@ -123,22 +124,25 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
   const multiplierBins = tally.multiplierBins;
 
   for (let s = 0; s < n; s++) {
-    const m1 = sampleImfMsun(imf, rng());
+    const uPrimary = rng();
     const age = constantHistory ? ageGyr * rng() : ageGyr;
+    if (surelyNotWhiteDwarf(formationScreen, uPrimary, age)) continue; // exact: t_MS ≥ its cell's floor ≥ age
+    const m1 = sampleImfMsun(imf, uPrimary);
     const tms = lifetimeGyr(lifetime, m1);
     if (!(tms < age)) continue;
     whiteDwarfsFormed++;
     const ifmrMass = finalMassMsun(ifmr, m1);
     const cooling = age - tms;
     const uSelect = magnitudeLimited ? rng() : 0;
-    const z = normalQuantile(rng() + HALF_STEP);
+    // The field deviate's uniform; its normal quantile is taken only where a field is made.
+    const uField = rng() + HALF_STEP;
     const fieldsEmerged = cooling >= emergenceDelayGyr;
 
     let fossilCarries = false;
-    let zFossil = 0;
+    let uFossil = 0.5;
     if (fossil.enabled) {
       fossilCarries = rng() < fossil.fraction && m1 >= fossil.loMsun && m1 <= fossil.hiMsun;
-      zFossil = normalQuantile(rng() + HALF_STEP);
+      uFossil = rng() + HALF_STEP;
     }
 
     let mwd = ifmrMass;
@@ -163,7 +167,7 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
       const periodDays = row.periodQuantile
         ? powerLawQuantile(row.periodQuantile, uPeriod)
         : truncatedLognormalPeriodDays(row.meanLog10PeriodDays, row.sigmaLog10Period, row.cdfLo, row.cdfSpan, uPeriod, normalQuantile);
-      companionFate(prepared, m1, ifmrMass, m2, periodDays, z);
+      companionFate(prepared, m1, ifmrMass, m2, periodDays, uField);
       const fate = fateOut[0];
       const present = u < (row.hostMassSlope === 0 ? row.presentThreshold : Math.min(drawThreshold, occurrence * prepared.multiplier));
       const companionField = fieldsEmerged ? fateOut[1] : 0;
@@ -192,7 +196,7 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
     }
 
     if (fossilCarries) {
-      const fossilField = fossilFieldMG(lognormalFieldMG(fossil.medianKG, fossil.widthDex, zFossil), mainSequenceRadiusRsun(m1), whiteDwarfRadiusRsun(mwd));
+      const fossilField = fossilFieldMG(lognormalFieldMG(fossil.medianKG, fossil.widthDex, normalQuantile(uFossil)), mainSequenceRadiusRsun(m1), whiteDwarfRadiusRsun(mwd));
       if (fossilField >= threshold) smallestMultiplier = 0;
       if (fossilField > bestField) {
         bestField = fossilField;
@@ -263,7 +267,7 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
  * A close survivor (final period below field.closeSurvivor.maxPeriodDays) gets a field iff that
  * channel is on.
  */
-function companionFate(prepared: PreparedScenario, m1: number, ifmrMass: number, m2: number, periodDays: number, z: number): void {
+function companionFate(prepared: PreparedScenario, m1: number, ifmrMass: number, m2: number, periodDays: number, uField: number): void {
   const a0 = semiMajorAxisAU(periodDays, m1 + m2);
   const giant = prepared.giant;
   let giantMass: number;
@@ -299,7 +303,7 @@ function companionFate(prepared: PreparedScenario, m1: number, ifmrMass: number,
     fateOut[6] = helium ? 1 : 0;
     const close = prepared.field.closeSurvivor;
     if (prepared.closeSurvivorMakesField && finalPeriod < close.maxPeriodDays) {
-      fateOut[1] = lognormalFieldMG(close.medianMG, close.widthDex, z);
+      fateOut[1] = lognormalFieldMG(close.medianMG, close.widthDex, normalQuantile(uField));
       fateOut[2] = CLOSE_SURVIVOR;
     }
     return;
@@ -318,12 +322,12 @@ function companionFate(prepared: PreparedScenario, m1: number, ifmrMass: number,
   fateOut[2] = DISRUPTION;
   const f = prepared.field.disruption;
   if (!prepared.disruptionMakesField) fateOut[1] = 0;
-  else if (f.kind === 'lognormal') fateOut[1] = lognormalFieldMG(f.medianMG, f.widthDex, z);
-  else if (f.kind === 'companionScaled') fateOut[1] = lognormalFieldMG(companionScaledMedianMG(m2, f.referenceMG, f.referenceMassMJup, f.slope), f.widthDex, z);
+  else if (f.kind === 'lognormal') fateOut[1] = lognormalFieldMG(f.medianMG, f.widthDex, normalQuantile(uField));
+  else if (f.kind === 'companionScaled') fateOut[1] = lognormalFieldMG(companionScaledMedianMG(m2, f.referenceMG, f.referenceMassMJup, f.slope), f.widthDex, normalQuantile(uField));
   else {
     // The debris disc forms at the companion's tidal radius around the core (η sets it).
     const tidalRadius = tidalRadiusRsun(prepared.eta, r2, coreMass, m2);
-    fateOut[1] = lognormalFieldMG(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio), f.widthDex, z);
+    fateOut[1] = lognormalFieldMG(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio), f.widthDex, normalQuantile(uField));
   }
 }
 
