@@ -132,3 +132,17 @@ target('≤ 10 generator draws per kernel system', drawsPerSystem <= 10, `${fmt(
 target('2-worker speed-up ≥ 1.8', speedUp >= 1.8, fmt(speedUp));
 target('RSS growth 1e6 → 1e8 < 20 MB', rssGrowth < 20, `${fmt(rssGrowth)} MB`);
 target('1e8 baseline systems < 60 s on 2 cores', big.seconds < 60, `${fmt(big.seconds)} s`);
+
+// ---- single-run kernel cost in generator draws (issue 14 item 2, single-run half) ----------------
+// Per-system kernel time over the time of one raw generator draw, both measured above in this
+// process (the raw draws first, before any kernel run warms other closures: the conservative
+// figure). Target ≤ 40 for fixedReach.
+{
+  const fixedDraws = draws / fixedRate;
+  const trackDraws = draws / trackRate;
+  process.stdout.write('\nsingle-run kernel\n');
+  line("draws' time per system (fixedReach)", fmt(fixedDraws));
+  line("draws' time per system (track)", fmt(trackDraws));
+  target("≤ 40 draws' time per system (fixedReach)", fixedDraws <= 40, `${fmt(fixedDraws)}`);
+}
+// ---- end of the single-run kernel block ------------------------------------------------------------

@@ -1,5 +1,5 @@
-import { sampleImfMsun, type ImfSampler } from '../physics/imf-sampler.ts';
-import { lifetimeGyr, type PreparedLifetime } from './scenario-physics.ts';
+import { sampleImfLog10Msun, type ImfSampler } from '../physics/imf-sampler.ts';
+import { lifetimeAtLog10MassGyr, type PreparedLifetime } from './scenario-physics.ts';
 
 /** Cells of the screen over the primary-mass uniform (a power of two: u · CELLS and k / CELLS are exact). */
 const CELLS = 4096;
@@ -30,7 +30,7 @@ export interface FormationScreen {
 
 export function buildFormationScreen(imf: ImfSampler, lifetime: PreparedLifetime): FormationScreen {
   const atNode = new Float64Array(CELLS + 1);
-  for (let k = 0; k <= CELLS; k++) atNode[k] = lifetimeGyr(lifetime, sampleImfMsun(imf, k / CELLS));
+  for (let k = 0; k <= CELLS; k++) atNode[k] = lifetimeAtLog10MassGyr(lifetime, sampleImfLog10Msun(imf, k / CELLS)); // as the kernel computes it
   const lifetimeFloorGyr = new Float64Array(CELLS);
   for (let k = 0; k < CELLS; k++) lifetimeFloorGyr[k] = Math.min(atNode[k], atNode[k + 1]) * (1 - MARGIN);
   return { cells: CELLS, lifetimeFloorGyr };

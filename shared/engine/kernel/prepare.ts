@@ -3,8 +3,10 @@ import type { Scenario } from '../../contracts/scenario.ts';
 import { MJUP_MSUN } from '../constants.ts';
 import { EngineError } from '../errors.ts';
 import { standardNormalCdf } from '../numerics/normal-cdf.ts';
+import { normalQuantile } from '../numerics/normal-quantile.ts';
+import { tabulateQuantile, type QuantileTable } from '../numerics/quantile-table.ts';
 import type { IfmrSegments } from '../physics/ifmr-piecewise.ts';
-import { powerLawQuantileTable, type PowerLawQuantileTable } from '../physics/imf-power-law.ts';
+import { powerLawLog10Quantile, powerLawQuantileTable, type PowerLawQuantileTable } from '../physics/imf-power-law.ts';
 import { buildImfSampler, type ImfSampler } from '../physics/imf-sampler.ts';
 import { opticalFlux } from '../physics/selection-magnitude-limited.ts';
 import { ENGINE_VERSION } from '../version.ts';
@@ -45,6 +47,10 @@ export interface PreparedRow {
   periodHiDays: number;
   /** Inverse-CDF constants of dN ∝ P^periodSlope dln P; null for the log-normal shape. */
   periodQuantile: PowerLawQuantileTable | null;
+  /** log10 of the power-law mass quantile, tabulated (numerics/quantile-table.ts); null = exact or flat. */
+  log10MassTable: QuantileTable | null;
+  /** log10 of the period quantile (either shape), tabulated; null = drawn exactly. */
+  log10PeriodTable: QuantileTable | null;
   meanLog10PeriodDays: number;
   sigmaLog10Period: number;
   /** Φ at the lower truncation point and Φ(hi) − Φ(lo), for the log-normal shape. */
@@ -165,10 +171,14 @@ function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: num
     periodHiDays,
   };
   if (shape.kind === 'powerlaw') {
+    const massQuantile = powerLawQuantileTable(massLo, massHi, shape.massSlope);
+    const periodQuantile = powerLawQuantileTable(periodLoDays, periodHiDays, shape.periodSlope);
     return {
       ...base,
-      massQuantile: powerLawQuantileTable(massLo, massHi, shape.massSlope),
-      periodQuantile: powerLawQuantileTable(periodLoDays, periodHiDays, shape.periodSlope),
+      massQuantile,
+      periodQuantile,
+      log10MassTable: tabulateQuantile((u) => powerLawLog10Quantile(massQuantile, u)),
+      log10PeriodTable: tabulateQuantile((u) => powerLawLog10Quantile(periodQuantile, u)),
       meanLog10PeriodDays: 0,
       sigmaLog10Period: 1,
       cdfLo: 0,
@@ -186,6 +196,8 @@ function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: num
     ...base,
     massQuantile: null,
     periodQuantile: null,
+    log10MassTable: null,
+    log10PeriodTable: tabulateQuantile((u) => mean + sigma * normalQuantile(cdfLo + u * (cdfHi - cdfLo))),
     meanLog10PeriodDays: mean,
     sigmaLog10Period: sigma,
     cdfLo,

@@ -2,15 +2,13 @@ import { RSUN_PER_AU } from '../constants.ts';
 import { normalQuantile } from '../numerics/normal-quantile.ts';
 import { postCommonEnvelopeSeparationAU } from '../physics/common-envelope-webbink1984.ts';
 import { companionRadiusRsun } from '../physics/companion-radius.ts';
-import { flatSample, truncatedLognormalPeriodDays } from '../physics/companion-distribution.ts';
 import { commonEnvelopeOnset } from '../physics/engulfment-grid.ts';
 import { accretionFieldMG } from '../physics/field-accretion.ts';
 import { companionScaledMedianMG } from '../physics/field-companion-scaled.ts';
 import { lognormalFieldMG } from '../physics/field-lognormal.ts';
 import { fossilFieldMG } from '../physics/fossil-field.ts';
 import { finalMassMsun } from '../physics/ifmr-piecewise.ts';
-import { powerLawQuantile } from '../physics/imf-power-law.ts';
-import { sampleImfMsun } from '../physics/imf-sampler.ts';
+import { sampleImfLog10Msun } from '../physics/imf-sampler.ts';
 import { periodDays as keplerPeriodDays, semiMajorAxisAU } from '../physics/kepler.ts';
 import { mainSequenceRadiusRsun } from '../physics/main-sequence-radius-demircan1991.ts';
 import { widenedSeparationAU } from '../physics/orbit-mass-loss.ts';
@@ -22,9 +20,10 @@ import { whiteDwarfRadiusRsun } from '../physics/white-dwarf-radius-nauenberg197
 import { chunkUniform } from '../random.ts';
 import { CHUNK_SYSTEMS } from '../version.ts';
 import { BINS, binIndex } from './bins.ts';
+import { companionMassDraw, companionPeriodDaysDraw } from './companion-draws.ts';
 import { surelyNotWhiteDwarf } from './formation-screen.ts';
 import type { PreparedScenario } from './prepare.ts';
-import { lifetimeGyr } from './scenario-physics.ts';
+import { lifetimeAtLog10MassGyr } from './scenario-physics.ts';
 import { emptyTallyFor, type ChunkTally } from './tally.ts';
 
 // Fate codes (index into FATES).
@@ -127,8 +126,9 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
     const uPrimary = rng();
     const age = constantHistory ? ageGyr * rng() : ageGyr;
     if (surelyNotWhiteDwarf(formationScreen, uPrimary, age)) continue; // exact: t_MS ≥ its cell's floor ≥ age
-    const m1 = sampleImfMsun(imf, uPrimary);
-    const tms = lifetimeGyr(lifetime, m1);
+    const log10M1 = sampleImfLog10Msun(imf, uPrimary);
+    const m1 = Math.exp(log10M1 * Math.LN10);
+    const tms = lifetimeAtLog10MassGyr(lifetime, log10M1);
     if (!(tms < age)) continue;
     whiteDwarfsFormed++;
     const ifmrMass = finalMassMsun(ifmr, m1);
@@ -162,11 +162,9 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
       if (!(u < drawThreshold)) continue;
       const uMass = rng();
       const uPeriod = rng();
-      let m2 = row.massQuantile ? powerLawQuantile(row.massQuantile, uMass) : flatSample(row.massLo, row.massHi, uMass);
+      let m2 = companionMassDraw(row, uMass);
       if (row.massIsRatio) m2 *= m1;
-      const periodDays = row.periodQuantile
-        ? powerLawQuantile(row.periodQuantile, uPeriod)
-        : truncatedLognormalPeriodDays(row.meanLog10PeriodDays, row.sigmaLog10Period, row.cdfLo, row.cdfSpan, uPeriod, normalQuantile);
+      const periodDays = companionPeriodDaysDraw(row, uPeriod);
       companionFate(prepared, m1, ifmrMass, m2, periodDays, uField);
       const fate = fateOut[0];
       const present = u < (row.hostMassSlope === 0 ? row.presentThreshold : Math.min(drawThreshold, occurrence * prepared.multiplier));
