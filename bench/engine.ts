@@ -144,3 +144,17 @@ target('1e8 baseline systems < 60 s on 2 cores', big.seconds < 60, `${fmt(big.se
 // multi-point kernel (issue 14)
 target('20-point α_CE sweep ≤ 3 runs (fixedReach)', fixedSweepRatio <= 3, `${fmt(fixedSweepRatio)} × one run`);
 target('20-point α_CE sweep ≤ 3 runs (track)', trackSweepRatio <= 3, `${fmt(trackSweepRatio)} × one run`);
+
+// ---- single-run kernel cost in generator draws (issue 14 item 2, single-run half) ----------------
+// Per-system kernel time over the time of one raw generator draw, both measured above in this
+// process (the raw draws first, before any kernel run warms other closures: the conservative
+// figure). Target ≤ 40 for fixedReach.
+{
+  const fixedDraws = draws / fixedRate;
+  const trackDraws = draws / trackRate;
+  process.stdout.write('\nsingle-run kernel\n');
+  line("draws' time per system (fixedReach)", fmt(fixedDraws));
+  line("draws' time per system (track)", fmt(trackDraws));
+  target("≤ 40 draws' time per system (fixedReach)", fixedDraws <= 40, `${fmt(fixedDraws)}`);
+}
+// ---- end of the single-run kernel block ------------------------------------------------------------

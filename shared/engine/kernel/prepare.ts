@@ -3,13 +3,16 @@ import type { Scenario } from '../../contracts/scenario.ts';
 import { MJUP_MSUN } from '../constants.ts';
 import { EngineError } from '../errors.ts';
 import { standardNormalCdf } from '../numerics/normal-cdf.ts';
+import { normalQuantile } from '../numerics/normal-quantile.ts';
+import { tabulateQuantile, type QuantileTable } from '../numerics/quantile-table.ts';
 import type { IfmrSegments } from '../physics/ifmr-piecewise.ts';
-import { powerLawQuantileTable, type PowerLawQuantileTable } from '../physics/imf-power-law.ts';
+import { powerLawLog10Quantile, powerLawQuantileTable, type PowerLawQuantileTable } from '../physics/imf-power-law.ts';
 import { buildImfSampler, type ImfSampler } from '../physics/imf-sampler.ts';
 import { opticalFlux } from '../physics/selection-magnitude-limited.ts';
 import { ENGINE_VERSION } from '../version.ts';
 import { planChunks } from './chunks.ts';
 import { buildTrackGiant, type EngulfmentGrid, type PreparedTrack } from './engulfment.ts';
+import { buildFormationScreen, type FormationScreen } from './formation-screen.ts';
 import { scenarioHash } from './scenario-hash.ts';
 import {
   heaviestWhiteDwarfMsun,
@@ -44,6 +47,10 @@ export interface PreparedRow {
   periodHiDays: number;
   /** Inverse-CDF constants of dN ∝ P^periodSlope dln P; null for the log-normal shape. */
   periodQuantile: PowerLawQuantileTable | null;
+  /** log10 of the power-law mass quantile, tabulated (numerics/quantile-table.ts); null = exact or flat. */
+  log10MassTable: QuantileTable | null;
+  /** log10 of the period quantile (either shape), tabulated; null = drawn exactly. */
+  log10PeriodTable: QuantileTable | null;
   meanLog10PeriodDays: number;
   sigmaLog10Period: number;
   /** Φ at the lower truncation point and Φ(hi) − Φ(lo), for the log-normal shape. */
@@ -80,6 +87,8 @@ export interface PreparedScenario {
   constantHistory: boolean;
   ageGyr: number;
   lifetime: PreparedLifetime;
+  /** Lower bounds of t_MS over cells of the primary-mass uniform (rejects most non-white-dwarfs without a pow). */
+  formationScreen: FormationScreen;
   ifmr: IfmrSegments;
   rows: PreparedRow[];
   multiplier: number;
@@ -117,17 +126,19 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
   }
   const preparedRows = rows.map((row) => prepareRow(row, maxOccurrence, multiplierMax, multiplier));
   const fossil = scenario.channels.fossil;
+  const imf = buildImfSampler(p.imf, p.massRangeMsun);
   return {
     engineVersion: ENGINE_VERSION,
     scenarioHash: scenarioHash(scenario),
     seed: scenario.seed,
     systems: scenario.systems,
     chunkCount,
-    imf: buildImfSampler(p.imf, p.massRangeMsun),
+    imf,
     massRangeMsun: [p.massRangeMsun[0], p.massRangeMsun[1]],
     constantHistory: p.history.kind === 'constant',
     ageGyr: p.history.ageGyr,
     lifetime,
+    formationScreen: buildFormationScreen(imf, lifetime),
     ifmr,
     rows: preparedRows,
     multiplier,
@@ -172,10 +183,14 @@ function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: num
     periodHiDays,
   };
   if (shape.kind === 'powerlaw') {
+    const massQuantile = powerLawQuantileTable(massLo, massHi, shape.massSlope);
+    const periodQuantile = powerLawQuantileTable(periodLoDays, periodHiDays, shape.periodSlope);
     return {
       ...base,
-      massQuantile: powerLawQuantileTable(massLo, massHi, shape.massSlope),
-      periodQuantile: powerLawQuantileTable(periodLoDays, periodHiDays, shape.periodSlope),
+      massQuantile,
+      periodQuantile,
+      log10MassTable: tabulateQuantile((u) => powerLawLog10Quantile(massQuantile, u)),
+      log10PeriodTable: tabulateQuantile((u) => powerLawLog10Quantile(periodQuantile, u)),
       meanLog10PeriodDays: 0,
       sigmaLog10Period: 1,
       cdfLo: 0,
@@ -193,6 +208,8 @@ function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: num
     ...base,
     massQuantile: null,
     periodQuantile: null,
+    log10MassTable: null,
+    log10PeriodTable: tabulateQuantile((u) => mean + sigma * normalQuantile(cdfLo + u * (cdfHi - cdfLo))),
     meanLog10PeriodDays: mean,
     sigmaLog10Period: sigma,
     cdfLo,

@@ -2,15 +2,13 @@ import { RSUN_PER_AU } from '../constants.ts';
 import { normalQuantile } from '../numerics/normal-quantile.ts';
 import { postCommonEnvelopeSeparationAU } from '../physics/common-envelope-webbink1984.ts';
 import { companionRadiusRsun } from '../physics/companion-radius.ts';
-import { flatSample, truncatedLognormalPeriodDays } from '../physics/companion-distribution.ts';
 import { commonEnvelopeOnset } from '../physics/engulfment-grid.ts';
 import { accretionFieldMG } from '../physics/field-accretion.ts';
 import { companionScaledMedianMG } from '../physics/field-companion-scaled.ts';
 import { lognormalFieldMG } from '../physics/field-lognormal.ts';
 import { fossilFieldMG } from '../physics/fossil-field.ts';
 import { finalMassMsun } from '../physics/ifmr-piecewise.ts';
-import { powerLawQuantile } from '../physics/imf-power-law.ts';
-import { sampleImfMsun } from '../physics/imf-sampler.ts';
+import { sampleImfLog10Msun } from '../physics/imf-sampler.ts';
 import { periodDays as keplerPeriodDays, semiMajorAxisAU } from '../physics/kepler.ts';
 import { mainSequenceRadiusRsun } from '../physics/main-sequence-radius-demircan1991.ts';
 import { widenedSeparationAU } from '../physics/orbit-mass-loss.ts';
@@ -22,9 +20,11 @@ import { whiteDwarfRadiusRsun } from '../physics/white-dwarf-radius-nauenberg197
 import { chunkUniform } from '../random.ts';
 import { CHUNK_SYSTEMS } from '../version.ts';
 import { BINS, binIndex } from './bins.ts';
+import { companionMassDraw, companionPeriodDaysDraw } from './companion-draws.ts';
+import { surelyNotWhiteDwarf } from './formation-screen.ts';
 import type { PreparedTrack } from './engulfment.ts';
 import type { PreparedFossil, PreparedScenario } from './prepare.ts';
-import { lifetimeGyr } from './scenario-physics.ts';
+import { lifetimeAtLog10MassGyr } from './scenario-physics.ts';
 import { addCountsInto, emptyTallyFor, type ChunkTally } from './tally.ts';
 
 // Fate codes (index into FATES).
@@ -192,7 +192,7 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
   if (points.length === 0) throw new RangeError('points must hold at least one parameter point');
   const tallies = points.map((point) => emptyTallyFor(point.scenarioHash));
   const rng = chunkUniform(prepared.seed, chunkIndex);
-  const { imf, lifetime, ifmr, rows } = prepared;
+  const { imf, lifetime, ifmr, rows, formationScreen } = prepared;
   const fossil = prepared.channels.fossil;
   const [fossilLoMsun, fossilHiMsun] = fossil.massRangeMsun;
   const constantHistory = prepared.constantHistory;
@@ -206,9 +206,12 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
 
   let whiteDwarfsFormed = 0;
   for (let s = 0; s < n; s++) {
-    const m1 = sampleImfMsun(imf, rng());
+    const uPrimary = rng();
     const age = constantHistory ? ageGyr * rng() : ageGyr;
-    const tms = lifetimeGyr(lifetime, m1);
+    if (surelyNotWhiteDwarf(formationScreen, uPrimary, age)) continue; // exact: t_MS ≥ its cell's floor ≥ age
+    const log10M1 = sampleImfLog10Msun(imf, uPrimary);
+    const m1 = Math.exp(log10M1 * Math.LN10);
+    const tms = lifetimeAtLog10MassGyr(lifetime, log10M1);
     if (!(tms < age)) continue;
     whiteDwarfsFormed++;
     const ifmrMass = finalMassMsun(ifmr, m1);
@@ -235,11 +238,9 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
       if (!(u < drawThreshold)) continue;
       const uMass = rng();
       const uPeriod = rng();
-      let m2 = row.massQuantile ? powerLawQuantile(row.massQuantile, uMass) : flatSample(row.massLo, row.massHi, uMass);
+      let m2 = companionMassDraw(row, uMass);
       if (row.massIsRatio) m2 *= m1;
-      const periodDays = row.periodQuantile
-        ? powerLawQuantile(row.periodQuantile, uPeriod)
-        : truncatedLognormalPeriodDays(row.meanLog10PeriodDays, row.sigmaLog10Period, row.cdfLo, row.cdfSpan, uPeriod, normalQuantile);
+      const periodDays = companionPeriodDaysDraw(row, uPeriod);
       drawnCompanion(r, u, occurrence, drawThreshold, m1, m2, periodDays, track);
       if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : rowA0[r] < spread.maxReachAU)) varies = true;
       if (spread.multiplierVaries && (row.hostMassSlope !== 0 || (u >= spread.minPresent[r] && u < spread.maxPresent[r]))) varies = true;

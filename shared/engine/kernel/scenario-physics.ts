@@ -5,8 +5,8 @@ import { CUMMINGS_2018 } from '../physics/ifmr-cummings2018.ts';
 import { KALIRAI_2008 } from '../physics/ifmr-kalirai2008.ts';
 import { finalMassMsun, type IfmrSegments } from '../physics/ifmr-piecewise.ts';
 import { ifmrFromTable } from '../physics/ifmr-table.ts';
-import { scalingLifetimeGyr } from '../physics/lifetime-scaling.ts';
-import { tabulatedLifetimeGyr } from '../physics/lifetime-table.ts';
+import { scalingLifetimeAtLog10MassGyr, scalingLifetimeGyr } from '../physics/lifetime-scaling.ts';
+import { tabulatedLifetimeAtLog10MassGyr, tabulatedLifetimeGyr } from '../physics/lifetime-table.ts';
 
 /** Scenario-level physics shared by preparation and the engulfment grid: IFMR, lifetimes, rows. */
 
@@ -51,6 +51,13 @@ export function lifetimeGyr(lifetime: PreparedLifetime, massMsun: number): numbe
   return lifetime.kind === 'scaling'
     ? scalingLifetimeGyr(massMsun, lifetime.t0Gyr, lifetime.exponent)
     : tabulatedLifetimeGyr(massMsun, lifetime.log10Mass, lifetime.log10Gyr);
+}
+
+/** Main-sequence lifetime (Gyr) under the prepared relation at log10(M/Msun) (the kernel's form). */
+export function lifetimeAtLog10MassGyr(lifetime: PreparedLifetime, log10MassMsun: number): number {
+  return lifetime.kind === 'scaling'
+    ? scalingLifetimeAtLog10MassGyr(log10MassMsun, lifetime.t0Gyr, lifetime.exponent)
+    : tabulatedLifetimeAtLog10MassGyr(log10MassMsun, lifetime.log10Mass, lifetime.log10Gyr);
 }
 
 /**

@@ -37,6 +37,11 @@ export function powerLawQuantile(table: PowerLawQuantileTable, u: number): numbe
   return Math.exp(table.log ? table.base + u * table.span : table.inverseExponent * Math.log(table.base + u * table.span));
 }
 
+/** log10 of x at cumulative probability u (the same inverse CDF, without the final exp). */
+export function powerLawLog10Quantile(table: PowerLawQuantileTable, u: number): number {
+  return (table.log ? table.base + u * table.span : table.inverseExponent * Math.log(table.base + u * table.span)) * Math.LOG10E;
+}
+
 /**
  * ∫ M^-slope dM over [lo, hi] (the un-normalised number in a piece), used to weight the
  * pieces of a broken power law. Example: slope 2.35 on [1, 8] gives (1 − 8^-1.35)/1.35 ≈ 0.696.

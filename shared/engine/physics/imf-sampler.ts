@@ -2,12 +2,17 @@ import type { ImfOptions } from '../../contracts/scenario.ts';
 import { EngineError } from '../errors.ts';
 import { CHABRIER_2003, chabrierLognormalPerLog } from './imf-chabrier2003.ts';
 import { KROUPA_2001 } from './imf-kroupa2001.ts';
-import { brokenPowerLawPieces, powerLawPieceIntegral, powerLawQuantile, powerLawQuantileTable, type PowerLawQuantileTable } from './imf-power-law.ts';
+import { tableQuantile, tabulateQuantile, type QuantileTable } from '../numerics/quantile-table.ts';
+import { brokenPowerLawPieces, powerLawLog10Quantile, powerLawPieceIntegral, powerLawQuantileTable, type PowerLawQuantileTable } from './imf-power-law.ts';
 import { SALPETER_1955 } from './imf-salpeter1955.ts';
 
-/** A power-law piece (sampled exactly) or a tabulated piece (log10 M at u = i/(n−1)). */
+/**
+ * A power-law piece (its exact inverse CDF, and that inverse CDF of log10 M tabulated when the table
+ * meets numerics/quantile-table.ts's tolerance; null = drawn exactly) or a tabulated log-normal
+ * piece (log10 M at u = i/(n−1)).
+ */
 export type ImfPiece =
-  | { kind: 'powerlaw'; loMsun: number; hiMsun: number; slope: number; quantile: PowerLawQuantileTable }
+  | { kind: 'powerlaw'; loMsun: number; hiMsun: number; slope: number; quantile: PowerLawQuantileTable; log10MassTable: QuantileTable | null }
   | { kind: 'table'; loMsun: number; hiMsun: number; log10MassAtU: number[] };
 
 /** Plain-data sampler for one IMF over one mass range; `cumulative[i]` is P(M ≤ piece i's top). */
@@ -60,7 +65,8 @@ export function buildImfSampler(imf: ImfOptions, massRangeMsun: readonly [number
 }
 
 function powerLawPiece(loMsun: number, hiMsun: number, slope: number): ImfPiece {
-  return { kind: 'powerlaw', loMsun, hiMsun, slope, quantile: powerLawQuantileTable(loMsun, hiMsun, 1 - slope) };
+  const quantile = powerLawQuantileTable(loMsun, hiMsun, 1 - slope);
+  return { kind: 'powerlaw', loMsun, hiMsun, slope, quantile, log10MassTable: tabulateQuantile((u) => powerLawLog10Quantile(quantile, u)) };
 }
 
 function brokenLaw(imf: Exclude<ImfOptions, { law: 'chabrier2003' }>): { breaksMsun: readonly number[]; slopes: readonly number[] } {
@@ -103,15 +109,23 @@ function tabulateLognormal(lo: number, hi: number): { table: number[]; total: nu
 
 /** Draws one initial mass (Msun) from the sampler with one uniform u in [0, 1). */
 export function sampleImfMsun(sampler: ImfSampler, u: number): number {
+  return Math.exp(sampleImfLog10Msun(sampler, u) * Math.LN10); // 10^x without Math.pow's cost
+}
+
+/**
+ * log10 of the initial mass (Msun) drawn with the uniform u in [0, 1): the kernel's form, since
+ * the main-sequence lifetime is a function of log10 M (no logarithm of the drawn mass needed).
+ */
+export function sampleImfLog10Msun(sampler: ImfSampler, u: number): number {
   const { pieces, cumulative } = sampler;
   let i = 0;
   while (i < pieces.length - 1 && u >= cumulative[i]) i++;
   const below = i === 0 ? 0 : cumulative[i - 1];
   const v = (u - below) / (cumulative[i] - below); // rescaled uniform inside the piece
   const piece = pieces[i];
-  if (piece.kind === 'powerlaw') return powerLawQuantile(piece.quantile, v);
+  if (piece.kind === 'powerlaw') return piece.log10MassTable ? tableQuantile(piece.log10MassTable, v) : powerLawLog10Quantile(piece.quantile, v);
   const table = piece.log10MassAtU;
   const position = v * (table.length - 1);
   const k = Math.min(table.length - 2, Math.floor(position));
-  return Math.exp((table[k] + (position - k) * (table[k + 1] - table[k])) * Math.LN10); // 10^x without Math.pow's cost
+  return table[k] + (position - k) * (table[k + 1] - table[k]);
 }
