@@ -1,6 +1,7 @@
 import { emptyRangeMessage } from '../../../../shared/contracts/occurrence-table.ts';
 import type { FieldIssue } from '../../../../shared/contracts/schema-issues.ts';
-import { getAt, type DraftPath } from './scenario-draft.ts';
+import { isApiError } from '../../../lib/api-client.ts';
+import { getAt, serverErrorTarget, type DraftPath } from './scenario-draft.ts';
 
 /** The row keys of a companion row that hold a [low, high] range. */
 const ROW_RANGE_KEYS = ['massMJup', 'massMsun', 'massRatio', 'periodDays'] as const;
@@ -40,4 +41,18 @@ export function rangeOrderIssues(doc: unknown, formatField: (path: DraftPath) =>
 export function mergeIssues(schemaIssues: readonly FieldIssue[], extra: readonly FieldIssue[]): FieldIssue[] {
   const seen = new Set(schemaIssues.map((i) => i.field));
   return [...schemaIssues, ...extra.filter((i) => !seen.has(i.field))];
+}
+
+/** Where each problem the server listed belongs, as builder fields ("name", or a document path). */
+export function serverIssuesOf(error: unknown): FieldIssue[] {
+  if (!isApiError(error)) return [];
+  const listed = error.issues && error.issues.length > 0 ? error.issues : error.field ? [{ field: error.field, message: error.message }] : [];
+  const out: FieldIssue[] = [];
+  for (const issue of listed) {
+    const target = serverErrorTarget(issue.field);
+    if (!target) continue;
+    const message = issue.message.startsWith(`${issue.field} `) ? `${target.field} ${issue.message.slice(issue.field.length + 1)}` : issue.message;
+    out.push({ field: target.field, message });
+  }
+  return out;
 }

@@ -44,3 +44,26 @@ describe('range-order checks', () => {
     expect(all.filter((i) => i.field === 'primaries.massRangeMsun')).toHaveLength(1);
   });
 });
+
+describe("the server's answer", () => {
+  it('places every listed issue at its builder field, and falls back to the single field', async () => {
+    const { ApiError } = await import('../../../lib/api-client.ts');
+    const { serverIssuesOf } = await import('./draft-checks.ts');
+    const listed = new ApiError({
+      status: 400,
+      code: 'invalid_input',
+      message: 'document.envelope.alpha must be between 0.01 and 10 (got 50)',
+      field: 'document.envelope.alpha',
+      issues: [
+        { field: 'document.envelope.alpha', message: 'document.envelope.alpha must be between 0.01 and 10 (got 50)' },
+        { field: 'name', message: 'name must not be empty' },
+      ],
+    });
+    expect(serverIssuesOf(listed)).toEqual([
+      { field: 'envelope.alpha', message: 'envelope.alpha must be between 0.01 and 10 (got 50)' },
+      { field: 'name', message: 'name must not be empty' },
+    ]);
+    const single = new ApiError({ status: 409, code: 'conflict', message: 'A scenario is already called "A".', field: 'name' });
+    expect(serverIssuesOf(single)).toEqual([{ field: 'name', message: 'A scenario is already called "A".' }]);
+  });
+});

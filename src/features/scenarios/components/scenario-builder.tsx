@@ -9,10 +9,9 @@ import { errorMessage } from '../../../components/ui/error-state.tsx';
 import { Field, controlClasses } from '../../../components/ui/field.tsx';
 import { TextField } from '../../../components/ui/text-field.tsx';
 import { useUnsavedChanges } from '../../../hooks/use-unsaved-changes.tsx';
-import { isApiError } from '../../../lib/api-client.ts';
 import { cx } from '../../../lib/class-names.ts';
 import { BuilderContext, useBuilder, type BuilderContextValue } from './builder-context.tsx';
-import { mergeIssues, rangeOrderIssues } from './draft-checks.ts';
+import { mergeIssues, rangeOrderIssues, serverIssuesOf } from './draft-checks.ts';
 import { problemSentence } from './field-labels.ts';
 import { DraftNumber, DraftText } from './builder-fields.tsx';
 import { BUILDER_SECTIONS, BuilderSection, FieldGrid, problemCounts, sectionAnchor, type BuilderSectionId } from './builder-section.tsx';
@@ -27,7 +26,6 @@ import {
   newSeed,
   runSystems,
   sameDocument,
-  serverErrorTarget,
   setAt,
   withDefaults,
   type Draft,
@@ -83,20 +81,6 @@ function withoutTitle(doc: Draft): Draft {
   if (!('title' in doc)) return doc;
   const { title: _title, ...rest } = doc;
   return rest;
-}
-
-/** Where each problem the server listed belongs, as builder fields ("name", or a document path). */
-function serverIssuesOf(error: unknown): FieldIssue[] {
-  if (!isApiError(error)) return [];
-  const listed = error.issues && error.issues.length > 0 ? error.issues : error.field ? [{ field: error.field, message: error.message }] : [];
-  const out: FieldIssue[] = [];
-  for (const issue of listed) {
-    const target = serverErrorTarget(issue.field);
-    if (!target) continue;
-    const message = issue.message.startsWith(`${issue.field} `) ? `${target.field} ${issue.message.slice(issue.field.length + 1)}` : issue.message;
-    out.push({ field: target.field, message });
-  }
-  return out;
 }
 
 /** Where a field's input is, or the first input inside it (a range, a row). */
