@@ -39,7 +39,8 @@ export default {
       ...colours,
     },
     fontFamily: {
-      sans: ['"Atkinson Hyperlegible"', 'ui-sans-serif', 'system-ui', 'sans-serif'],
+      // The plain zero of prose first (it covers only U+0030; see src/index.css), then the text face.
+      sans: ['"Tidefield Prose Zero"', '"Atkinson Hyperlegible"', 'ui-sans-serif', 'system-ui', 'sans-serif'],
       mono: ['ui-monospace', '"DejaVu Sans Mono"', 'Menlo', 'monospace'],
     },
     // Base 18 px: readable from a few metres away in a dim control room.

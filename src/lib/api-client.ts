@@ -1,7 +1,14 @@
-import type { z } from 'zod';
+import { z } from 'zod';
 import { apiErrorBodySchema, type ApiErrorBody } from '../../shared/contracts/api-error.ts';
 
 export type ApiErrorDetail = NonNullable<ApiErrorBody['error']['details']>[number];
+export interface ApiErrorIssue {
+  field: string;
+  message: string;
+}
+
+// Read beside the contract's body: a server that lists every problem of an input sends them as `error.issues`.
+const errorIssuesSchema = z.object({ error: z.object({ issues: z.array(z.object({ field: z.string(), message: z.string() })) }) });
 
 /** What every failed call throws: the server's error body, or one made up for the failure. */
 export class ApiError extends Error {
@@ -13,6 +20,8 @@ export class ApiError extends Error {
   readonly field?: string;
   /** Row-level problems of an upload (file line, column, message). */
   readonly details?: readonly ApiErrorDetail[];
+  /** Every problem of a rejected input, each at its field (the first is also `field`/`message`). */
+  readonly issues?: readonly ApiErrorIssue[];
   /** From a Retry-After header in seconds (429, 503). */
   readonly retryAfterSeconds?: number;
   /** The parsed body of a failed response that was not of the error shape (a 503 health report). */
@@ -24,6 +33,7 @@ export class ApiError extends Error {
     message: string;
     field?: string;
     details?: readonly ApiErrorDetail[];
+    issues?: readonly ApiErrorIssue[];
     retryAfterSeconds?: number;
     body?: unknown;
   }) {
@@ -32,6 +42,7 @@ export class ApiError extends Error {
     this.code = options.code;
     this.field = options.field;
     this.details = options.details;
+    this.issues = options.issues;
     this.retryAfterSeconds = options.retryAfterSeconds;
     this.body = options.body;
   }
@@ -68,7 +79,8 @@ export async function errorFromResponse(response: Response): Promise<ApiError> {
   const retryAfterSeconds = Number.isFinite(retryAfter) && retryAfter > 0 ? retryAfter : undefined;
   const parsed = apiErrorBodySchema.safeParse(body);
   if (parsed.success) {
-    return new ApiError({ status: response.status, ...parsed.data.error, retryAfterSeconds });
+    const listed = errorIssuesSchema.safeParse(body);
+    return new ApiError({ status: response.status, ...parsed.data.error, ...(listed.success ? { issues: listed.data.error.issues } : {}), retryAfterSeconds });
   }
   const status = response.status;
   return new ApiError({ status, code: `http_${status}`, message: fallbackMessage(status), retryAfterSeconds, body });

@@ -1,13 +1,14 @@
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
 import { HealthPanel } from '../../features/overview/components/health-panel.tsx';
+import { RecentFits } from '../../features/overview/components/recent-fits.tsx';
 import { StartHere } from '../../features/overview/components/start-here.tsx';
 import { WhatYouCanDo } from '../../features/overview/components/what-you-can-do.tsx';
 import { useRuns } from '../../features/runs/api/get-runs.ts';
 import { RecentRuns } from '../../features/runs/components/recent-runs.tsx';
 import { RecentSweeps } from '../../features/sweeps/components/recent-sweeps.tsx';
 
-/** The user's work first: a start for a new department, recent runs and sweeps with their status, then what the role can do. */
+/** The user's work first: a start for a new department, recent runs, sweeps and fits with their status, then what the role can do. */
 export function Component() {
   const me = useSignedInMe();
   // Any run of the department, the caller's or not: "start here" is for a department with none.
@@ -21,6 +22,9 @@ export function Component() {
         </div>
         <RecentRuns departmentId={me.department.id} />
         <RecentSweeps departmentId={me.department.id} />
+        <div className="lg:col-span-2 empty:hidden">
+          <RecentFits departmentId={me.department.id} />
+        </div>
         <div className="lg:col-span-2">
           <WhatYouCanDo role={me.role} />
         </div>

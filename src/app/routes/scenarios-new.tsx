@@ -58,7 +58,8 @@ function NewScenarioBuilder({ preset }: { preset: Preset | null }) {
   const navigate = useNavigate();
   const create = useCreateScenario(me.department.id);
   const baseline = useMemo(
-    () => ({ name: preset?.title ?? '', doc: preset ? resolvedDraft(preset.document) : defaultDraft() }),
+    // The example's name is not kept: the new scenario gets a name of its own (the field says where it started).
+    () => ({ name: '', doc: preset ? resolvedDraft(preset.document) : defaultDraft() }),
     [preset],
   );
 
@@ -73,6 +74,7 @@ function NewScenarioBuilder({ preset }: { preset: Preset | null }) {
       readOnly={!roleAtLeast(me.role, 'modeller')}
       baseline={baseline}
       isNew
+      nameNote={preset ? `Started from the example “${preset.title}”: name your own scenario.` : undefined}
       saveLabel="Save scenario"
       onSave={save}
       renderCost={(systems) => <RunCostNotice departmentId={me.department.id} systems={systems} />}

@@ -1,6 +1,6 @@
 import type { VisualizationSpec } from 'vega-embed';
 import { chartInk } from '../ui/chart-palette.ts';
-import { decadeAxis } from './log-axis.ts';
+import { COUNT_AXIS, decadeAxis } from './log-axis.ts';
 
 /**
  * Histograms that were binned on the server (a run's white-dwarf mass and field bins), drawn as
@@ -32,7 +32,7 @@ export interface BinnedChartInput {
   countNoun: string;
   /** Vertical rules at these edge-unit positions (the detection threshold). */
   markers?: readonly { at: number; label: string }[];
-  /** Fill under each outline; for one or two series. */
+  /** Fill under the first series' outline (the others stay outlines, so no two fills overlap). */
   fill?: boolean;
   /** Leave out empty bins at both ends (keeping one), across all series. */
   trim?: boolean;
@@ -140,22 +140,24 @@ export function binnedChartSpec(input: BinnedChartInput): VisualizationSpec {
     type: 'quantitative' as const,
     title: input.xTitle,
     scale: input.logX ? { type: 'log' as const, domain, nice: false } : { type: 'linear' as const, domain, nice: false, zero: false },
-    axis: input.logX ? decadeAxis(input.edges[range[0]], input.edges[range[1]]) : { format: '~g' },
+    axis: input.logX ? decadeAxis(input.edges[range[0]], input.edges[range[1]]) : { format: '~g', labelOverlap: 'greedy' as const },
   };
   const y = {
     field: 'y',
     type: 'quantitative' as const,
     title: yTitle,
-    axis: { format: input.normalise ? '.0%' : '~s' },
+    axis: input.normalise ? { format: '.0%' } : COUNT_AXIS,
   };
   const markers = (input.markers ?? []).map((m) => ({ x: toAxis(m.at), label: m.label }));
 
   return {
     height: input.height ?? 260,
     layer: [
-      // One fill layer per series with a fixed colour: an encoded one would merge into the legend and switch it off.
+      // One fill layer with a fixed colour (an encoded one would merge into the legend and switch it off),
+      // under the first series only: two translucent fills over each other mix into a third colour
+      // (orange over pale blue reads as brown) that belongs to neither series.
       ...(input.fill
-        ? input.series.map((s) => ({
+        ? input.series.slice(0, 1).map((s) => ({
             // Areas are drawn in x order, so they get the bins' own step points rather than the outline.
             data: { values: stepFill(rows.filter((r) => r.series === s.name)) },
             mark: { type: 'area' as const, opacity: 0.22, interpolate: 'step-after' as const, color: s.colour },

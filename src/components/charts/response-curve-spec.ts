@@ -116,7 +116,8 @@ export function responseCurveSpec(input: ResponseCurveInput): VisualizationSpec 
     title: titleLines(input.xTitle),
     // A log axis is not rounded out to whole decades, which would squeeze a short grid into a corner.
     scale: input.logX ? { type: 'log' as const, nice: false, padding: 16 } : { type: 'linear' as const, zero: false, nice: true },
-    axis: { format: '~g' },
+    // On a narrow screen a log axis offers more ticks than fit: those that would touch are left out.
+    axis: { format: '~g', labelOverlap: 'greedy' as const, labelSeparation: 6 },
   };
   const y = (field: string) => ({
     field,

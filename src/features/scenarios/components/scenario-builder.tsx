@@ -9,9 +9,10 @@ import { errorMessage } from '../../../components/ui/error-state.tsx';
 import { Field, controlClasses } from '../../../components/ui/field.tsx';
 import { TextField } from '../../../components/ui/text-field.tsx';
 import { useUnsavedChanges } from '../../../hooks/use-unsaved-changes.tsx';
-import { isApiError } from '../../../lib/api-client.ts';
 import { cx } from '../../../lib/class-names.ts';
 import { BuilderContext, useBuilder, type BuilderContextValue } from './builder-context.tsx';
+import { mergeIssues, rangeOrderIssues, serverIssuesOf } from './draft-checks.ts';
+import { problemSentence } from './field-labels.ts';
 import { DraftNumber, DraftText } from './builder-fields.tsx';
 import { BUILDER_SECTIONS, BuilderSection, FieldGrid, problemCounts, sectionAnchor, type BuilderSectionId } from './builder-section.tsx';
 import { CompanionsSection } from './companions-section.tsx';
@@ -25,7 +26,6 @@ import {
   newSeed,
   runSystems,
   sameDocument,
-  serverErrorTarget,
   setAt,
   withDefaults,
   type Draft,
@@ -52,6 +52,8 @@ export interface ScenarioBuilderProps {
   start?: Draft;
   /** A new scenario can be saved even unchanged. */
   isNew: boolean;
+  /** Shown under the name field (where a new scenario started from). */
+  nameNote?: ReactNode;
   saveLabel: string;
   /**
    * Stores the scenario; resolves to the words that confirm it ("Saved as version 3.") and,
@@ -69,6 +71,17 @@ const NAME_ID = 'scenario-name';
 const NOTE_ID = 'scenario-note';
 /** Marks a pending focus on a whole section (from the section list) rather than on a field. */
 const SECTION_PREFIX = 'section:';
+const SAVE_REASON_ID = 'scenario-save-reason';
+
+/**
+ * The document without its inner `title`: the scenario's name is its one name (a preset's
+ * title would otherwise travel on silently inside a document saved under another name).
+ */
+function withoutTitle(doc: Draft): Draft {
+  if (!('title' in doc)) return doc;
+  const { title: _title, ...rest } = doc;
+  return rest;
+}
 
 /** Where a field's input is, or the first input inside it (a range, a row). */
 function findInput(root: HTMLElement | null, field: string): HTMLElement | null {
@@ -85,15 +98,18 @@ function findInput(root: HTMLElement | null, field: string): HTMLElement | null 
  * with the shared schema, every problem shown at its input with the allowed range. On save the
  * server's answer is shown at the field it names (`document.<path>` → that input).
  */
-export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBaseline, start, isNew, saveLabel, onSave, renderCost, banner }: ScenarioBuilderProps) {
+export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBaseline, start, isNew, nameNote, saveLabel, onSave, renderCost, banner }: ScenarioBuilderProps) {
   const formRef = useRef<HTMLFormElement>(null);
-  const [baseline, setBaseline] = useState(initialBaseline);
-  const [doc, setDoc] = useState<Draft>(() => start ?? initialBaseline.doc);
+  const [baseline, setBaseline] = useState(() => ({ name: initialBaseline.name, doc: withoutTitle(initialBaseline.doc) }));
+  const [doc, setDoc] = useState<Draft>(() => withoutTitle(start ?? initialBaseline.doc));
   const [name, setName] = useState(initialBaseline.name);
   const [note, setNote] = useState('');
   const [view, setView] = useState<View>('form');
   const [jsonKey, setJsonKey] = useState(0);
-  const [serverIssue, setServerIssue] = useState<FieldIssue | null>(null);
+  // What the server said of the last save, each at its field; cleared by the next edit.
+  const [serverIssues, setServerIssues] = useState<FieldIssue[]>([]);
+  // The JSON tab's text when it cannot be read (the document is then the last readable one).
+  const [jsonError, setJsonError] = useState<string | null>(null);
   const [formFieldErrors, setFormFieldErrors] = useState<{ name?: string; note?: string }>({});
   const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
@@ -102,22 +118,30 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
   // An empty name is only pointed out once the user has typed in it or tried to save.
   const [nameTouched, setNameTouched] = useState(false);
 
-  const issues = useMemo(() => draftIssues(doc), [doc]);
+  // Every problem at once: the schema's, and the range-order checks it makes only once everything else is valid.
+  const issues = useMemo(() => mergeIssues(draftIssues(doc), rangeOrderIssues(doc, fieldKey)), [doc]);
   const messages = useMemo(() => messagesByField(issues), [issues]);
-  const nameCheck = nameSchema.safeParse(name);
-  const nameError = formFieldErrors.name ?? (nameCheck.success || !nameTouched ? undefined : atFieldMessage('name', nameCheck.error.issues[0]?.message ?? 'name is required'));
-  const changed = !sameDocument(doc, baseline.doc) || name !== baseline.name;
+  const nameCheck = nameSchema.safeParse(name.trim());
+  const nameEmpty = name.trim() === '';
+  const nameProblem = nameCheck.success ? null : nameEmpty ? 'Give the scenario a name.' : atFieldMessage('name', nameCheck.error.issues[0]?.message ?? 'name is not allowed');
+  const nameServerIssue = serverIssues.find((i) => i.field === 'name');
+  const nameError = formFieldErrors.name ?? (nameServerIssue ? atFieldMessage('name', nameServerIssue.message) : nameProblem && nameTouched ? nameProblem : undefined);
+  const changed = !sameDocument(doc, baseline.doc) || name !== baseline.name || jsonError !== null;
 
-  // The server's problem first (it decides), then the live ones at other fields.
-  const shownIssues = useMemo(
-    () => (serverIssue ? [serverIssue, ...issues.filter((i) => i.field !== serverIssue.field)] : issues),
-    [issues, serverIssue],
-  );
-  const counts = problemCounts(shownIssues);
+  // The server's problems first (it decides), then the live ones at other fields; the name's own problem is one of them.
+  const shownIssues = useMemo(() => {
+    const fromServer = serverIssues.filter((i) => i.field !== 'name' && i.field !== 'note');
+    const serverFields = new Set(fromServer.map((i) => i.field));
+    const live = issues.filter((i) => !serverFields.has(i.field));
+    const nameIssue: FieldIssue[] = nameServerIssue ? [nameServerIssue] : nameProblem ? [{ field: 'name', message: nameEmpty ? 'needs a name' : nameProblem }] : [];
+    return [...nameIssue, ...fromServer, ...live];
+  }, [issues, serverIssues, nameServerIssue, nameProblem, nameEmpty]);
+  const counts = problemCounts(shownIssues.filter((i) => i.field !== 'name'));
+  const problemTotal = shownIssues.length + (jsonError ? 1 : 0);
 
   const update = useCallback((path: DraftPath, value: unknown) => {
     setDoc((current) => setAt(current, path, value));
-    setServerIssue(null);
+    setServerIssues([]);
     setSaved(null);
   }, []);
 
@@ -129,11 +153,12 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
       departmentId,
       messageAt: (path) => {
         const key = fieldKey(path);
-        if (serverIssue && serverIssue.field === key) return atFieldMessage(key, serverIssue.message);
+        const fromServer = serverIssues.find((i) => i.field === key);
+        if (fromServer) return atFieldMessage(key, fromServer.message);
         return messages.get(key);
       },
     }),
-    [doc, update, readOnly, departmentId, messages, serverIssue],
+    [doc, update, readOnly, departmentId, messages, serverIssues],
   );
 
   // Focus moves after the render that shows the field (and its message).
@@ -154,14 +179,15 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
     event.preventDefault();
     if (readOnly || saving) return;
     setNameTouched(true);
+    // Known problems are listed under Check; Save stays disabled until they are fixed (Enter in a field lands here too).
+    if (problemTotal > 0) return;
     setSaving(true);
     setFormError(null);
     setFormFieldErrors({});
-    setServerIssue(null);
+    setServerIssues([]);
     setSaved(null);
     try {
       const trimmedNote = note.trim();
-      // Sent even when the live check finds problems: the server is the judge, and its message lands at the field.
       const { message, next } = await onSave({
         name: name.trim(),
         ...(trimmedNote ? { note: trimmedNote } : {}),
@@ -178,16 +204,14 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
         next();
       }
     } catch (error) {
-      const target = isApiError(error) ? serverErrorTarget(error.field) : null;
-      const message = errorMessage(error);
-      setFormError(`Not saved. ${message}`);
-      if (target?.kind === 'document') {
-        setServerIssue({ field: target.field, message });
-        goTo(target.field);
-      } else if (target?.kind === 'form' && (target.field === 'name' || target.field === 'note')) {
-        setFormFieldErrors({ [target.field]: atFieldMessage(target.field, message) });
-        setPendingFocus(target.field);
-      }
+      // Every problem the server listed goes to its field; the first one gets the focus.
+      const listed = serverIssuesOf(error);
+      const count = listed.length;
+      setFormError(count > 1 ? `Not saved: the server found ${count} problems, listed under Check and shown at their fields.` : `Not saved. ${errorMessage(error)}`);
+      const note = listed.find((i) => i.field === 'note');
+      if (note) setFormFieldErrors({ note: atFieldMessage('note', note.message) });
+      setServerIssues(listed);
+      if (listed.length > 0) goTo(listed[0].field);
     } finally {
       setSaving(false);
     }
@@ -197,7 +221,8 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
     setDoc(baseline.doc);
     setName(baseline.name);
     setNote('');
-    setServerIssue(null);
+    setServerIssues([]);
+    setJsonError(null);
     setFormError(null);
     setFormFieldErrors({});
     setJsonKey((k) => k + 1);
@@ -206,6 +231,8 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
   function switchView(next: View) {
     // Back from pasted JSON: show a value in every field the document leaves to its defaults.
     if (view === 'json' && next === 'form' && !readOnly) setDoc((current) => withDefaults(current));
+    // Text that could not be read is left behind with the JSON tab; the form shows the last readable document.
+    if (next === 'form') setJsonError(null);
     setView(next);
   }
 
@@ -226,7 +253,12 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
             <TextField
               id={NAME_ID}
               label="Scenario name"
-              hint="How the department finds it in lists and on runs. Up to 160 characters."
+              hint={
+                <>
+                  The scenario’s one name: in lists, on runs and in the methods paragraph. Up to 160 characters.
+                  {nameNote && <span className="mt-1 block">{nameNote}</span>}
+                </>
+              }
               value={name}
               maxLength={160}
               readOnly={readOnly}
@@ -236,6 +268,7 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
                 setName(event.target.value);
                 setNameTouched(true);
                 setFormFieldErrors((e) => ({ ...e, name: undefined }));
+                setServerIssues((list) => list.filter((i) => i.field !== 'name'));
                 setSaved(null);
               }}
             />
@@ -284,16 +317,30 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
           </>
         ) : (
           <div className="rounded-lg border border-ink-700 bg-ink-850 p-5 sm:p-6">
-            <ScenarioJsonView key={jsonKey} doc={doc} readOnly={readOnly} fileName={name} onChange={(next) => update([], next)} />
+            <ScenarioJsonView
+              key={jsonKey}
+              doc={doc}
+              readOnly={readOnly}
+              fileName={name}
+              onChange={(next) => update([], withoutTitle(next))}
+              onUnreadable={(message) => {
+                setJsonError(message);
+                setSaved(null);
+              }}
+            />
           </div>
         )}
 
         <section aria-labelledby="scenario-check-title" className="grid items-start gap-6 rounded-lg border border-ink-700 bg-ink-850 p-5 sm:p-6 md:grid-cols-2">
           <div className="min-w-0">
             <h2 id="scenario-check-title" className="text-xl font-bold text-foam-50">
-              {shownIssues.length === 0 ? 'Check: no problems' : `Check: ${shownIssues.length} problem${shownIssues.length === 1 ? '' : 's'}`}
+              {jsonError ? 'Check: the JSON cannot be read' : shownIssues.length === 0 ? 'Check: no problems' : `Check: ${shownIssues.length} problem${shownIssues.length === 1 ? '' : 's'}`}
             </h2>
-            <ProblemList issues={shownIssues} onGoTo={goTo} />
+            {jsonError ? (
+              <p className="mt-1 text-foam-300">The text in the JSON tab is not a readable document, so nothing in it can be checked yet. Its error is shown under the text; once it reads, every value is checked here.</p>
+            ) : (
+              <ProblemList issues={shownIssues} onGoTo={goTo} />
+            )}
           </div>
           {!readOnly && (
             <Field id={NOTE_ID} label="Note for this version" hint="Optional: what changed and why. Kept in the version history." error={formFieldErrors.note}>
@@ -314,7 +361,7 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
           >
             <Alert message={formError ?? undefined} />
             <div className="flex flex-wrap items-center gap-3">
-              <Button type="submit" pending={saving} disabled={!isNew && !changed}>
+              <Button type="submit" pending={saving} disabled={(!isNew && !changed) || problemTotal > 0} aria-describedby={problemTotal > 0 ? SAVE_REASON_ID : undefined}>
                 {saveLabel}
               </Button>
               {changed && !isNew && (
@@ -325,7 +372,14 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
               <span aria-live="polite" className="text-sm text-foam-300">
                 {saved ? <span className="font-bold text-kelp-300">{saved}</span> : changed ? <Badge tone="warning">Unsaved changes</Badge> : isNew ? 'Not saved yet.' : 'No unsaved changes.'}
               </span>
-              {shownIssues.length > 0 && (
+              {problemTotal > 0 && (
+                <p id={SAVE_REASON_ID} className="text-sm text-foam-300">
+                  {jsonError
+                    ? 'Saving waits until the JSON text can be read.'
+                    : `Saving waits until ${shownIssues.length === 1 ? 'the problem under Check is' : `the ${shownIssues.length} problems under Check are`} fixed.`}
+                </p>
+              )}
+              {!jsonError && shownIssues.length > 0 && (
                 <button type="button" onClick={() => goTo(shownIssues[0].field)} className="ml-auto text-sm font-bold text-coral-300 underline underline-offset-3">
                   {shownIssues.length} problem{shownIssues.length === 1 ? '' : 's'}: go to the first
                 </button>
@@ -365,9 +419,8 @@ function ViewSwitch({ view, onChange }: { view: View; onChange: (view: View) => 
 function RunSection({ renderCost, systems }: { renderCost?: (systems: number | null) => ReactNode; systems: number | null }) {
   const { update, readOnly } = useBuilder();
   return (
-    <BuilderSection id="run" description="What the document is called inside, its seed and how many primaries a run draws.">
+    <BuilderSection id="run" description="The scenario’s description, its seed and how many primaries a run draws.">
       <FieldGrid>
-        <DraftText path={['title']} label="Title" hint="Optional; shown on runs and in the methods paragraph." maxLength={200} />
         <DraftText
           path={['seed']}
           label="Seed"
@@ -423,7 +476,7 @@ function ProblemList({ issues, onGoTo }: { issues: readonly FieldIssue[]; onGoTo
           {issues.slice(0, SHOWN).map((issue) => (
             <li key={`${issue.field}:${issue.message}`}>
               <button type="button" onClick={() => onGoTo(issue.field)} className="text-left text-coral-300 underline decoration-1 underline-offset-3 hover:decoration-2 [overflow-wrap:anywhere]">
-                {issue.message}
+                {problemSentence(issue.field, issue.message)}
               </button>
             </li>
           ))}

@@ -90,7 +90,7 @@ describe('draft helpers', () => {
   it('reads pasted JSON or says why it cannot', () => {
     expect(parseDraftJson('{"seed":"x"}')).toEqual({ ok: true, doc: { seed: 'x' } });
     expect(parseDraftJson('[1]')).toMatchObject({ ok: false });
-    expect(parseDraftJson('{seed:')).toMatchObject({ ok: false, message: expect.stringContaining('not valid JSON') });
+    expect(parseDraftJson('{seed:')).toMatchObject({ ok: false, message: expect.stringContaining('JSON cannot be read') });
   });
 
   it('quotes only valid run sizes', () => {

@@ -168,7 +168,7 @@ export function parseDraftJson(text: string): { ok: true; doc: Draft } | { ok: f
   try {
     value = JSON.parse(text);
   } catch (error) {
-    return { ok: false, message: `This is not valid JSON: ${error instanceof Error ? error.message : String(error)}` };
+    return { ok: false, message: `The JSON cannot be read: ${error instanceof Error ? error.message : String(error)}` };
   }
   if (!isRecord(value) || Array.isArray(value)) return { ok: false, message: 'A scenario document is a JSON object ({ … }), not a list or a single value.' };
   return { ok: true, doc: value as Draft };

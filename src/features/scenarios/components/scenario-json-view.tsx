@@ -8,6 +8,8 @@ export interface ScenarioJsonViewProps {
   doc: Draft;
   /** Called with the pasted document as soon as the text is a JSON object. */
   onChange: (doc: Draft) => void;
+  /** Why the text cannot be read as a document, or null once it can. */
+  onUnreadable?: (message: string | null) => void;
   readOnly: boolean;
   /** The file name of a download, without ".json". */
   fileName: string;
@@ -28,7 +30,7 @@ function download(text: string, fileName: string) {
  * REST API, or paste one. Pasted text takes effect as soon as it is a JSON object; the
  * problems list beside the builder then says what the schema thinks of it.
  */
-export function ScenarioJsonView({ doc, onChange, readOnly, fileName }: ScenarioJsonViewProps) {
+export function ScenarioJsonView({ doc, onChange, onUnreadable, readOnly, fileName }: ScenarioJsonViewProps) {
   const id = useId();
   const [text, setText] = useState(() => draftJson(doc));
   const [parseError, setParseError] = useState<string | null>(null);
@@ -52,6 +54,7 @@ export function ScenarioJsonView({ doc, onChange, readOnly, fileName }: Scenario
           setText(event.target.value);
           const parsed = parseDraftJson(event.target.value);
           setParseError(parsed.ok ? null : parsed.message);
+          onUnreadable?.(parsed.ok ? null : parsed.message);
           if (parsed.ok) onChange(parsed.doc);
         }}
         className={cx(controlClasses, 'min-h-96 resize-y font-mono text-sm leading-relaxed', readOnly && 'bg-ink-850')}
