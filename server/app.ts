@@ -37,6 +37,8 @@ import { scenariosRoutes } from './modules/scenarios/scenarios.routes.ts';
 import { createScenariosService } from './modules/scenarios/scenarios.service.ts';
 import { sweepsRoutes } from './modules/sweeps/sweeps.routes.ts';
 import { createSweepsService } from './modules/sweeps/sweeps.service.ts';
+import { fitsRoutes } from './modules/fits/fits.routes.ts';
+import { createFitsService } from './modules/fits/fits.service.ts';
 import { tokensRoutes } from './modules/tokens/tokens.routes.ts';
 import { createTokensService } from './modules/tokens/tokens.service.ts';
 import { createGridResolver } from './modules/runs/engulfment-grid-cache.ts';
@@ -136,6 +138,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   const runs = createRunsService({ db, scheduler, scenarios, tables, samples, billing: deps.billing ?? billing.runBilling });
   const sweeps = createSweepsService({ db, runs, scenarios, samples, scheduler });
   const constraintSets = createConstraintSetsService(db);
+  const fitsService = createFitsService({ db, runs, scenarios, constraintSets, scheduler, logger });
   const exports = createExportsService({ db, config, runs, sweeps });
   const shares = createSharesService({ db, config, runs, sweeps, exports });
 
@@ -176,6 +179,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   app.use('/api/samples', samplesRoutes(registry, samples));
   app.use('/api', runsRoutes(registry, runs, events));
   app.use('/api/sweeps', sweepsRoutes(registry, sweeps));
+  app.use('/api/fits', fitsRoutes(registry, fitsService));
   app.use('/api', constraintsRoutes(registry, constraintSets, runs));
   app.use('/api', exportsRoutes(registry, exports));
   app.use('/api', sharesRoutes(registry, config, shares));

@@ -59,7 +59,7 @@ function readArgs(argv: readonly string[]): CliArgs {
   return { scenarioPath: positionals[0], workers, out: values.out, constraints: values.constraints };
 }
 
-async function readScenarioDocument(path: string): Promise<unknown> {
+export async function readScenarioDocument(path: string): Promise<unknown> {
   let text: string;
   try {
     text = await readFile(path, 'utf8');
@@ -74,7 +74,7 @@ async function readScenarioDocument(path: string): Promise<unknown> {
 }
 
 /** Replaces `companions.tableId` by the rows of the stored table shared/scenarios/<tableId>.json. */
-async function resolveTable(document: unknown): Promise<unknown> {
+export async function resolveTable(document: unknown): Promise<unknown> {
   const companions = (document as { companions?: { tableId?: unknown; rows?: unknown } } | null)?.companions;
   if (!companions || typeof companions.tableId !== 'string' || companions.rows !== undefined) return document;
   const id = companions.tableId;

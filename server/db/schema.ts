@@ -11,6 +11,7 @@ export { occurrenceTables, occurrenceRows } from '../modules/occurrence-tables/o
 export { samples, sampleBins } from '../modules/samples/samples.table.ts';
 export { runs, runCheckpoints, runResults, runBins, engulfmentGrids } from '../modules/runs/runs.table.ts';
 export { sweeps } from '../modules/sweeps/sweeps.table.ts';
+export { fits } from '../modules/fits/fits.table.ts';
 export { apiTokens } from '../modules/tokens/tokens.table.ts';
 export { billingAccounts, creditLedger, creditCheckouts, paymentEvents } from '../modules/billing/billing.table.ts';
 export { invitations } from '../modules/invitations/invitations.table.ts';

@@ -1,4 +1,5 @@
 import type { Scenario } from '../../shared/contracts/scenario.ts';
+import type { PointValues } from '../../shared/engine/kernel/run-points.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
 import type { WorkerStatus } from '../../shared/contracts/workers.ts';
 
@@ -7,7 +8,10 @@ export interface BatchDone {
   /** Index of the batch in the run's fixed partition (chunks batch·size … batch·size + size − 1). */
   batch: number;
   chunks: number[];
+  /** The summed tally (of the first point, for a multi-point job). */
   tally: ChunkTally;
+  /** A multi-point job: one summed tally per point, in the request's order (tally === pointTallies[0]). */
+  pointTallies?: ChunkTally[];
 }
 
 export interface ExecuteRequest {
@@ -16,6 +20,11 @@ export interface ExecuteRequest {
   /** The chunks still to compute (the others are in the caller's running total). */
   pending: number[];
   signal: AbortSignal;
+  /**
+   * A multi-point job (a sweep or a fit in one pass): the parameter values of every point; the
+   * scenario is the first point's. Each batch then carries one tally per point.
+   */
+  points?: PointValues[];
 }
 
 /**

@@ -3,6 +3,7 @@ import type { Piscina } from 'piscina';
 import type { Scenario } from '../../shared/contracts/scenario.ts';
 import type { EngulfmentGrid } from '../../shared/engine/kernel/engulfment.ts';
 import { prepareScenario } from '../../shared/engine/kernel/prepare.ts';
+import { preparePoints } from '../../shared/engine/kernel/run-points.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
 import { BATCH_RETRIES, BatchFailedError, pendingBatches, RunAbortedError, type BatchDone, type ChunkExecutor, type ExecuteRequest } from './chunk-executor.ts';
 import type { ChunkBatchTask } from './chunk-task.ts';
@@ -37,11 +38,11 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
   let jobsDone = 0;
   let activeJobs = 0;
 
-  async function runBatch(task: ChunkBatchTask, signal: AbortSignal): Promise<ChunkTally> {
+  async function runBatch(task: ChunkBatchTask, signal: AbortSignal): Promise<ChunkTally | ChunkTally[]> {
     for (let attempt = 0; ; attempt++) {
       activeJobs++;
       try {
-        const tally = (await pool.run(task, { signal })) as ChunkTally;
+        const tally = (await pool.run(task, { signal })) as ChunkTally | ChunkTally[];
         jobsDone++;
         return tally;
       } catch (error) {
@@ -58,6 +59,7 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
     const { signal } = request;
     if (signal.aborted) throw new RunAbortedError(signal.reason);
     const prepared = prepareScenario(request.scenario, { engulfmentGrid: await options.resolveGrid?.(request.scenario) });
+    const points = request.points ? preparePoints(request.scenario, prepared, request.points) : undefined;
     const threads = poolThreads(pool);
     const size = options.chunksPerTask ?? Math.max(1, Math.min(16, Math.ceil(request.pending.length / (threads * 8))));
     const batches = pendingBatches(request.pending, size);
@@ -76,7 +78,9 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
       while (next < batches.length || inFlight.size > 0) {
         while (inFlight.size < threads * 2 && next < batches.length) {
           const { batch, chunks } = batches[next++];
-          const done = runBatch({ prepared, chunks }, local.signal).then((tally) => ({ batch, chunks, tally }));
+          const done = runBatch({ prepared, chunks, points }, local.signal).then((tally): BatchDone =>
+            Array.isArray(tally) ? { batch, chunks, tally: tally[0], pointTallies: tally } : { batch, chunks, tally },
+          );
           done.catch(() => {}); // observed by the race below; a late rejection after a failure is expected
           inFlight.set(batch, done);
         }

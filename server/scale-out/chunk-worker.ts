@@ -6,6 +6,7 @@ import type { Piscina } from 'piscina';
 import type { Scenario } from '../../shared/contracts/scenario.ts';
 import { engulfmentGridInputFor, type EngulfmentGrid } from '../../shared/engine/kernel/engulfment.ts';
 import { prepareScenario, type PreparedScenario } from '../../shared/engine/kernel/prepare.ts';
+import { preparePoints, type PreparedPoints } from '../../shared/engine/kernel/run-points.ts';
 import { scenarioHash } from '../../shared/engine/kernel/scenario-hash.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
 import { engulfmentGridKey } from '../../shared/engine/physics/engulfment-grid.ts';
@@ -43,6 +44,8 @@ export function createChunkWorker(options: ChunkWorkerOptions) {
   const subscriber = redisConnection(options.url);
   const grids = new Map<string, Promise<EngulfmentGrid>>();
   const prepared = new Map<string, Promise<PreparedScenario>>();
+  /** Prepared points of the multi-point jobs seen last (a job's batches share them). */
+  const preparedPointsOfRun = new Map<string, PreparedPoints>();
   const startedAt = new Date().toISOString();
   let jobsDone = 0;
   let activeJobs = 0;
@@ -81,13 +84,24 @@ export function createChunkWorker(options: ChunkWorkerOptions) {
   const beat = () => heartbeat().catch((error: unknown) => logger.warn({ err: error }, 'worker heartbeat failed'));
 
   async function processJob(job: Job<ChunkJobData, ChunkJobResult>, _token?: string, signal?: AbortSignal): Promise<ChunkJobResult> {
-    const { runId, chunks, scenario } = job.data;
+    const { runId, chunks, scenario, points } = job.data;
     if (await commands.exists(cancelledKey(options.queue, runId))) throw new UnrecoverableError('the run was cancelled');
     activeJobs++;
     running.add(job.id!);
     try {
-      const task = { prepared: await preparedFor(scenario), chunks };
-      const tally = (await pool.run(task, { signal })) as ChunkTally;
+      const base = await preparedFor(scenario);
+      if (points) {
+        let preparedPoints = preparedPointsOfRun.get(runId);
+        if (!preparedPoints) {
+          preparedPoints = preparePoints(scenario, base, points);
+          preparedPointsOfRun.set(runId, preparedPoints);
+          if (preparedPointsOfRun.size > PREPARED_CACHE) preparedPointsOfRun.delete(preparedPointsOfRun.keys().next().value!);
+        }
+        const tallies = (await pool.run({ prepared: base, chunks, points: preparedPoints }, { signal })) as ChunkTally[];
+        jobsDone++;
+        return { chunks, tally: tallies[0], tallies };
+      }
+      const tally = (await pool.run({ prepared: base, chunks }, { signal })) as ChunkTally;
       jobsDone++;
       return { chunks, tally };
     } catch (error) {

@@ -1,5 +1,6 @@
 import { Redis, type RedisOptions } from 'ioredis';
 import type { Scenario } from '../../shared/contracts/scenario.ts';
+import type { PointValues } from '../../shared/engine/kernel/run-points.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
 
 /**
@@ -15,12 +16,16 @@ export interface ChunkJobData {
   batch: number;
   chunks: number[];
   scenario: Scenario;
+  /** A multi-point job: every point's values (the scenario is the first point's). */
+  points?: PointValues[];
 }
 
 /** A job's return value: integer tallies only (JSON through Redis). */
 export interface ChunkJobResult {
   chunks: number[];
   tally: ChunkTally;
+  /** A multi-point job: one tally per point (tally === tallies[0]). */
+  tallies?: ChunkTally[];
 }
 
 /**

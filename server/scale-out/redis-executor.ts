@@ -62,7 +62,7 @@ export function createRedisExecutor(options: RedisExecutorOptions): ChunkExecuto
     ids.add(jobId);
     const job: Job<ChunkJobData, ChunkJobResult> = await queue.add(
       'chunks',
-      { runId: request.runId, batch, chunks, scenario: request.scenario },
+      { runId: request.runId, batch, chunks, scenario: request.scenario, ...(request.points ? { points: request.points } : {}) },
       {
         jobId,
         attempts: BATCH_RETRIES + 1,
@@ -78,7 +78,7 @@ export function createRedisExecutor(options: RedisExecutorOptions): ChunkExecuto
       if (request.signal.aborted) throw new RunAbortedError(request.signal.reason);
       throw new BatchFailedError(chunks, BATCH_RETRIES + 1, error);
     }
-    return { batch, chunks: result.chunks, tally: result.tally };
+    return { batch, chunks: result.chunks, tally: result.tally, ...(result.tallies ? { pointTallies: result.tallies } : {}) };
   }
 
   async function* execute(request: ExecuteRequest): AsyncGenerator<BatchDone> {

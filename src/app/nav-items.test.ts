@@ -9,6 +9,7 @@ const EVERYONE = [
   'Scenarios',
   'Runs',
   'Sweeps',
+  'Fits',
   'Implied occurrence',
   'Compare',
   'Constraint sets',

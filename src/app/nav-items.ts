@@ -44,6 +44,12 @@ export const NAV_GROUPS: readonly NavGroup[] = [
         summary: 'One scenario across a parameter grid, with the same seed at every point, to see how the answer moves.',
         minimumRole: 'observer',
       },
+      {
+        key: 'fits',
+        label: 'Fits',
+        summary: 'Which parameter values all the observations together allow: posteriors on a grid, scored against a constraint set.',
+        minimumRole: 'observer',
+      },
     ],
   },
   {

@@ -53,6 +53,10 @@ export const paths = {
     ...page('/sweeps'),
     detail: { path: '/sweeps/:id', getHref: (id: string) => `/sweeps/${encodeURIComponent(id)}` },
   },
+  fits: {
+    ...page('/fits'),
+    detail: { path: '/fits/:id', getHref: (id: string) => `/fits/${encodeURIComponent(id)}` },
+  },
   impliedOccurrence: {
     ...page('/implied-occurrence'),
     /** A question already asked: the run that answers it and the sample it was asked for. */

@@ -58,7 +58,8 @@ export function createRunNotices(deps: { db: Db; config: Config; mailer: Mailer 
     if (!owner) return;
     const settings = await findNotificationSettings(db, owner.id);
     if (outcome === 'succeeded' ? !settings.runFinished : !settings.runFailed) return;
-    const common = { name: owner.name, scenarioName: run.scenarioName, link: `${base}/runs/${run.id}`, settingsLink };
+    // A fit's computing run links to the fit.
+    const common = { name: owner.name, scenarioName: run.scenarioName, link: run.fitId ? `${base}/fits/${run.fitId}` : `${base}/runs/${run.id}`, settingsLink };
     mailer.sendInBackground({
       to: owner.email,
       kind: outcome === 'succeeded' ? 'run-finished' : 'run-failed',

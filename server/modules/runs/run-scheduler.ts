@@ -1,6 +1,8 @@
 import type { Logger } from 'pino';
 import type { RunProgressEvent, RunStatus } from '../../../shared/contracts/runs.ts';
-import { parseScenario } from '../../../shared/contracts/scenario.ts';
+import { scenarioAtPoint } from '../../../shared/contracts/point-scenario.ts';
+import { parseScenario, type Scenario } from '../../../shared/contracts/scenario.ts';
+import { scenarioHash } from '../../../shared/engine/kernel/scenario-hash.ts';
 import { addTallyInto, emptyTallyFor, type ChunkTally } from '../../../shared/engine/kernel/tally.ts';
 import { buildResult } from '../../../shared/engine/result/build-result.ts';
 import { RunAbortedError, type ChunkExecutor } from '../../engine-pool/chunk-executor.ts';
@@ -21,6 +23,7 @@ import {
   saveCheckpoint,
   saveResult,
   updateRun,
+  updateRuns,
   type RunRow,
 } from './runs.repository.ts';
 
@@ -44,6 +47,13 @@ export const DEFAULT_SCHEDULER_TIMING = {
   leaseMs: 30_000,
   saveRetry: { firstDelayMs: 200, maxDelayMs: 10_000 },
 } as const;
+
+/**
+ * Told when a multi-point job has computed every point, after the points with runs of their own
+ * have their results saved and before the job settles (a fit computes its posterior here). It
+ * must not throw: what it stores on failure is its own business.
+ */
+export type JobFinishedHook = (run: RunRow, tallies: ChunkTally[], scenarios: Scenario[]) => Promise<void>;
 
 /** Told when a run reaches a final state (billing settles or refunds, e-mail notices go out). */
 export type RunSettledHook = (run: RunRow, outcome: 'succeeded' | 'failed' | 'cancelled') => Promise<void>;
@@ -81,6 +91,7 @@ export function createRunScheduler(deps: {
   onSettled?: RunSettledHook;
 }) {
   const { db, executor, events, logger, options } = deps;
+  let onJobFinished: JobFinishedHook | undefined;
   const active = new Map<string, ActiveRun>();
   /** Department of each executing run, for fair share. */
   const activeDepartments = new Map<string, string>();
@@ -141,8 +152,19 @@ export function createRunScheduler(deps: {
     const scenario = parseScenario(run.snapshot);
     const checkpoint = await loadCheckpoint(db, runId);
     const done = new ChunkSet(checkpoint?.doneChunks ?? []);
-    // The run's one running total: the checkpoint's, or the engine's empty tally of this scenario.
-    const total: ChunkTally = checkpoint ? (JSON.parse(checkpoint.tally) as ChunkTally) : emptyTallyFor(run.scenarioHash);
+    // A multi-point job computes every point from the same draws; the run itself is its first point.
+    const job = run.jobPoints;
+    const pointScenarios: Scenario[] = job ? job.values.map((values, p) => (p === 0 ? scenario : scenarioAtPoint(scenario, values))) : [scenario];
+    const pointRunIds: string[] = job ? [...new Set(job.runIds.filter((id): id is string => id !== null))] : [runId];
+    const passengers = pointRunIds.filter((id) => id !== runId);
+    // The running totals, one per point: the checkpoint's, or the engine's empty tallies.
+    const totals: ChunkTally[] = checkpoint
+      ? job
+        ? (JSON.parse(checkpoint.tally) as ChunkTally[])
+        : [JSON.parse(checkpoint.tally) as ChunkTally]
+      : pointScenarios.map((s, p) => emptyTallyFor(p === 0 ? run.scenarioHash : scenarioHash(s)));
+    const total = totals[0];
+    if (passengers.length > 0) await updateRuns(db, passengers, { status: 'running', startedAt: new Date() }, ['queued', 'running']);
     entry.chunkCount = run.chunkCount;
     entry.chunksDone = done.size;
     entry.chunksAtStart = done.size;
@@ -159,11 +181,12 @@ export function createRunScheduler(deps: {
       if (!dirty || (!force && now - lastWrite < options.checkpointIntervalMs)) return;
       lastWrite = now;
       dirty = false;
-      const snapshot = { tally: JSON.stringify(total), ranges: done.ranges(), chunksDone: done.size };
+      const snapshot = { tally: JSON.stringify(job ? totals : total), ranges: done.ranges(), chunksDone: done.size };
       writes = writes
         .then(async () => {
           await saveCheckpoint(db, runId, snapshot.tally, snapshot.ranges);
           await updateRun(db, runId, { chunksDone: snapshot.chunksDone, progress: snapshot.chunksDone / run.chunkCount }, ['running']);
+          await updateRuns(db, passengers, { chunksDone: snapshot.chunksDone, progress: snapshot.chunksDone / run.chunkCount }, ['running']);
         })
         .catch((error: unknown) => {
           dirty = true;
@@ -173,10 +196,14 @@ export function createRunScheduler(deps: {
 
     publish(runId, 'running', done.size, run.chunkCount);
     try {
-      for await (const batch of executor.execute({ runId, scenario, pending, signal: entry.controller.signal })) {
+      const points = job ? job.values : undefined;
+      for await (const batch of executor.execute({ runId, scenario, pending, signal: entry.controller.signal, ...(points ? { points } : {}) })) {
         // A batch delivered twice (a replayed job) is counted once.
         if (batch.chunks.some((chunk) => done.has(chunk))) continue;
-        addTallyInto(total, batch.tally);
+        if (job) {
+          if (batch.pointTallies?.length !== totals.length) throw new Error(`a batch of a ${totals.length}-point job came back with ${batch.pointTallies?.length ?? 0} point tallies`);
+          batch.pointTallies.forEach((tally, p) => addTallyInto(totals[p], tally));
+        } else addTallyInto(total, batch.tally);
         for (const chunk of batch.chunks) done.add(chunk);
         dirty = true;
         entry.chunksDone = done.size;
@@ -185,39 +212,48 @@ export function createRunScheduler(deps: {
         if (now - lastPublish >= PUBLISH_INTERVAL_MS) {
           lastPublish = now;
           publish(runId, 'running', done.size, run.chunkCount);
+          for (const id of passengers) publish(id, 'running', done.size, run.chunkCount);
         }
       }
       if (entry.controller.signal.aborted) throw new RunAbortedError(entry.controller.signal.reason);
       if (done.size !== run.chunkCount) throw new Error(`the executor finished with ${run.chunkCount - done.size} of ${run.chunkCount} chunks missing`);
-      const result = buildResult(scenario, total);
       await writes;
       const computeMs = run.computeMs + (Date.now() - entry.startedMs);
-      const resultJson = JSON.stringify(result);
-      const bins = resultBinRows(runId, result);
-      // Saved once: a retry after a commit whose answer was lost finds the run already succeeded.
-      await untilDatabase(runId, 'saving the result', async () => {
-        await db.transaction(async (tx) => {
-          const current = await loadRun(tx, runId);
-          if (!current || current.status === 'succeeded') return;
-          await saveResult(tx, runId, resultJson, bins);
-          await updateRun(tx, runId, {
-            status: 'succeeded',
-            progress: 1,
-            chunksDone: run.chunkCount,
-            whiteDwarfs: result.counts.whiteDwarfs,
-            magnetic: result.counts.magnetic,
-            fraction: result.fraction.value,
-            fractionSe: result.fraction.se,
-            finishedAt: new Date(),
-            computeMs,
-            error: null,
-            leaseUntil: null,
+      // Every point with a run of its own gets its result (passengers first: the job's own run
+      // succeeding last means a retry after an outage saves whatever is still missing).
+      const saves = job ? job.runIds.map((id, p) => ({ id, p })).filter((x): x is { id: string; p: number } => x.id !== null) : [{ id: runId, p: 0 }];
+      saves.sort((a, b) => Number(a.id === runId) - Number(b.id === runId));
+      for (const { id, p } of saves) {
+        const result = buildResult(pointScenarios[p], totals[p]);
+        const resultJson = JSON.stringify(result);
+        const bins = resultBinRows(id, result);
+        // Saved once: a retry after a commit whose answer was lost finds the run already succeeded.
+        await untilDatabase(runId, 'saving the result', async () => {
+          await db.transaction(async (tx) => {
+            const current = await loadRun(tx, id);
+            if (!current || current.status === 'succeeded') return;
+            await saveResult(tx, id, resultJson, bins);
+            await updateRun(tx, id, {
+              status: 'succeeded',
+              progress: 1,
+              chunksDone: run.chunkCount,
+              whiteDwarfs: result.counts.whiteDwarfs,
+              magnetic: result.counts.magnetic,
+              fraction: result.fraction.value,
+              fractionSe: result.fraction.se,
+              finishedAt: new Date(),
+              computeMs: id === runId ? computeMs : 0,
+              error: null,
+              leaseUntil: null,
+            });
+            if (id === runId) await deleteCheckpoint(tx, runId);
           });
-          await deleteCheckpoint(tx, runId);
-        });
-      }, entry.controller.signal);
-      publish(runId, 'succeeded', run.chunkCount, run.chunkCount);
-      logger.info({ runId, systems: run.systems, computeMs }, 'run succeeded');
+        }, entry.controller.signal);
+      }
+      if (job) await onJobFinished?.((await loadRun(db, runId)) ?? run, totals, pointScenarios);
+      for (const id of pointRunIds) publish(id, 'succeeded', run.chunkCount, run.chunkCount);
+      logger.info({ runId, systems: run.systems, points: totals.length, computeMs }, 'run succeeded');
+      for (const id of passengers) await settle(id, 'succeeded', entry.controller.signal);
       await settle(runId, 'succeeded', entry.controller.signal);
     } catch (error) {
       await writes;
@@ -233,9 +269,11 @@ export function createRunScheduler(deps: {
       if (entry.reason === 'cancel') {
         await untilDatabase(runId, 'cancelling the run', async () => {
           await updateRun(db, runId, { status: 'cancelled', finishedAt: new Date(), computeMs, chunksDone: done.size, progress: done.size / run.chunkCount, leaseUntil: null });
+          await updateRuns(db, passengers, { status: 'cancelled', finishedAt: new Date() }, ['queued', 'running']);
           await deleteCheckpoint(db, runId);
         });
-        publish(runId, 'cancelled', done.size, run.chunkCount);
+        for (const id of pointRunIds) publish(id, 'cancelled', done.size, run.chunkCount);
+        for (const id of passengers) await settle(id, 'cancelled');
         await settle(runId, 'cancelled');
         return;
       }
@@ -244,10 +282,12 @@ export function createRunScheduler(deps: {
       logger.warn({ runId, err: error }, 'run failed');
       persist(true);
       await writes;
-      await untilDatabase(runId, 'recording the failure', () =>
-        updateRun(db, runId, { status: 'failed', error: message.slice(0, 4000), finishedAt: new Date(), computeMs, chunksDone: done.size, progress: done.size / run.chunkCount, leaseUntil: null }),
-      );
-      publish(runId, 'failed', done.size, run.chunkCount, message);
+      await untilDatabase(runId, 'recording the failure', async () => {
+        await updateRun(db, runId, { status: 'failed', error: message.slice(0, 4000), finishedAt: new Date(), computeMs, chunksDone: done.size, progress: done.size / run.chunkCount, leaseUntil: null });
+        await updateRuns(db, passengers, { status: 'failed', error: message.slice(0, 4000), finishedAt: new Date() }, ['queued', 'running']);
+      });
+      for (const id of pointRunIds) publish(id, 'failed', done.size, run.chunkCount, message);
+      for (const id of passengers) await settle(id, 'failed');
       await settle(runId, 'failed');
     } finally {
       if (entry.reason !== 'stop') await executor.forget?.(runId).catch((e: unknown) => logger.warn({ err: e, runId }, 'executor cleanup failed'));
@@ -343,12 +383,23 @@ export function createRunScheduler(deps: {
 
     wake,
 
-    /** Cancels a queued or running run. Returns false if it had already finished. */
+    /** Registers the hook told when a multi-point job has computed every point (the fits module's). */
+    onJobFinished(hook: JobFinishedHook): void {
+      onJobFinished = hook;
+    },
+
+    /** Cancels a queued or running run (a point of a multi-point job cancels the whole job). Returns false if it had already finished. */
     async cancel(runId: string): Promise<boolean> {
+      const own = await loadRun(db, runId);
+      if (own?.jobRunId) return this.cancel(own.jobRunId);
+      const passengersOf = (run: RunRow | undefined) => (run?.jobPoints?.runIds ?? []).filter((id): id is string => id !== null && id !== runId);
       if (await updateRun(db, runId, { status: 'cancelled', finishedAt: new Date() }, ['queued'])) {
         const run = await loadRun(db, runId);
-        if (run) publish(runId, 'cancelled', run.chunksDone, run.chunkCount);
+        const passengers = [...new Set(passengersOf(run))];
+        await updateRuns(db, passengers, { status: 'cancelled', finishedAt: new Date() }, ['queued', 'running']);
+        if (run) for (const id of [runId, ...passengers]) publish(id, 'cancelled', run.chunksDone, run.chunkCount);
         await executor.cancel?.(runId);
+        for (const id of passengers) await settle(id, 'cancelled');
         await settle(runId, 'cancelled');
         return true;
       }
@@ -362,8 +413,11 @@ export function createRunScheduler(deps: {
       }
       // Running but not here (claimed by a process that died without a restart): end it.
       if (await updateRun(db, runId, { status: 'cancelled', finishedAt: new Date(), leaseUntil: null }, ['running'])) {
+        const passengers = [...new Set(passengersOf(own))];
+        await updateRuns(db, passengers, { status: 'cancelled', finishedAt: new Date() }, ['queued', 'running']);
         await executor.cancel?.(runId);
         await deleteCheckpoint(db, runId);
+        for (const id of passengers) await settle(id, 'cancelled');
         await settle(runId, 'cancelled');
         return true;
       }

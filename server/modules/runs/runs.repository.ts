@@ -45,6 +45,8 @@ export async function listRuns(db: Db, departmentId: string, userId: string, q: 
   if (q.scenarioId) filters.push(eq(runs.scenarioId, q.scenarioId));
   if (q.owner === 'me') filters.push(eq(runs.ownerUserId, userId));
   if (q.includeSweepPoints === 'false') filters.push(isNull(runs.sweepId));
+  // A fit's computing run is read through its fit.
+  filters.push(isNull(runs.fitId));
   if (q.q) filters.push(like(runs.scenarioName, `%${q.q.replace(/[%_\\]/g, (c) => `\\${c}`)}%`));
   const where = and(...filters);
   const column = SORT_COLUMNS[q.sort];
@@ -93,7 +95,8 @@ export async function releaseLeases(db: Db, ids: string[]): Promise<void> {
  * the calling scheduler is executing itself, never touched here.
  */
 export async function requeueOrphans(db: Db, now: Date, ownIds: string[]): Promise<number> {
-  const filters: SQL[] = [eq(runs.status, 'running'), sql`(${runs.leaseUntil} IS NULL OR ${runs.leaseUntil} < ${now})`];
+  // Points of a multi-point job follow the run that computes them; only that run holds a lease.
+  const filters: SQL[] = [eq(runs.status, 'running'), isNull(runs.jobRunId), sql`(${runs.leaseUntil} IS NULL OR ${runs.leaseUntil} < ${now})`];
   if (ownIds.length > 0) filters.push(notInArray(runs.id, ownIds));
   const result = await db
     .update(runs)
@@ -106,7 +109,7 @@ export async function queuedRuns(db: Db, limit: number) {
   return db
     .select({ id: runs.id, departmentId: runs.departmentId, createdAt: runs.createdAt, resumes: runs.resumes })
     .from(runs)
-    .where(eq(runs.status, 'queued'))
+    .where(and(eq(runs.status, 'queued'), isNull(runs.jobRunId)))
     // Interrupted runs first (they hold work already done), then oldest first.
     .orderBy(desc(runs.resumes), asc(runs.createdAt))
     .limit(limit);
@@ -121,6 +124,12 @@ export async function updateRun(db: DbOrTx, id: string, values: Partial<typeof r
   const where = onlyIfStatus ? and(eq(runs.id, id), inArray(runs.status, onlyIfStatus)) : eq(runs.id, id);
   const result = await db.update(runs).set(values).where(where);
   return result[0].affectedRows === 1;
+}
+
+/** Updates several runs at once (the points of a multi-point job). */
+export async function updateRuns(db: DbOrTx, ids: string[], values: Partial<typeof runs.$inferInsert>, onlyIfStatus?: RunStatus[]) {
+  if (ids.length === 0) return;
+  await db.update(runs).set(values).where(onlyIfStatus ? and(inArray(runs.id, ids), inArray(runs.status, onlyIfStatus)) : inArray(runs.id, ids));
 }
 
 export async function deleteRun(tx: DbOrTx, id: string) {

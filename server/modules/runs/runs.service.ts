@@ -135,13 +135,26 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
     auth: RequestAuth,
     source: { scenarioId: string; scenarioVersion: number; scenarioName: string },
     snapshot: Scenario,
-    extra: { sweepId?: string; sweepPointIndex?: number; tx?: Tx } = {},
+    extra: {
+      sweepId?: string;
+      sweepPointIndex?: number;
+      tx?: Tx;
+      /** The run's id, when the caller needs it before queueing (the points of a multi-point job name each other). */
+      id?: string;
+      /** This run computes a multi-point job: every point's values and the run receiving each point's result. */
+      jobPoints?: { values: Record<string, number>[]; runIds: (string | null)[] };
+      /** This run is a point computed by another run's multi-point job. */
+      jobRunId?: string;
+      fitId?: string;
+      /** Systems to reserve credit for (default: the snapshot's); a fit reserves every grid point, like a sweep. */
+      chargedSystems?: number;
+    } = {},
   ): Promise<string> {
     const department = departmentOf(auth);
-    checkSize(auth, snapshot.systems);
-    const id = newId();
+    checkSize(auth, extra.chargedSystems ?? snapshot.systems);
+    const id = extra.id ?? newId();
     const insert = async (tx: Tx) => {
-      const { costCredits } = await billing.reserve(tx, { id, departmentId: department.id, userId: auth.user.id, systems: snapshot.systems });
+      const { costCredits } = await billing.reserve(tx, { id, departmentId: department.id, userId: auth.user.id, systems: extra.chargedSystems ?? snapshot.systems });
       await insertRun(tx, {
         id,
         departmentId: department.id,
@@ -159,6 +172,9 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
         costCredits,
         sweepId: extra.sweepId ?? null,
         sweepPointIndex: extra.sweepPointIndex ?? null,
+        jobPoints: extra.jobPoints ?? null,
+        jobRunId: extra.jobRunId ?? null,
+        fitId: extra.fitId ?? null,
         createdAt: new Date(),
       });
       await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'run.queued', target: id, detail: { systems: snapshot.systems, costCredits } });
@@ -238,6 +254,9 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       if (!found) throw runNotFound();
       if (found.run.ownerUserId !== auth.user.id && !roleAtLeast(auth.role!, 'modeller')) throw forbidden('Only the run\'s owner or a modeller can resume it.');
       if (found.run.status !== 'failed') throw conflict(`The run is ${found.run.status}; only a failed run can be resumed.`);
+      if (found.run.jobPoints || found.run.jobRunId) {
+        throw conflict(`The run is ${found.run.fitId ? 'the computing run of a fit' : 'a point of a sweep computed in one pass'}; start the ${found.run.fitId ? 'fit' : 'sweep'} again instead (resuming a multi-point job is not supported yet).`);
+      }
       const checkpoint = await loadCheckpoint(db, id);
       if (!checkpoint) throw conflict('The run kept no computed chunks to continue from; start it again instead.');
       const snapshot = parseScenario(found.run.snapshot);

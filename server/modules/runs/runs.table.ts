@@ -33,6 +33,16 @@ export const runs = mysqlTable(
     error: text('error'),
     sweepId: idColumn('sweep_id'),
     sweepPointIndex: int('sweep_point_index'),
+    /**
+     * A multi-point job (a sweep or a fit computed in one pass over the same draws): every point's
+     * parameter values and the run that receives each point's result (null: the point has no run of
+     * its own, e.g. a fit's grid node). This run is the first point: its snapshot is that point's.
+     */
+    jobPoints: json('job_points').$type<{ values: Record<string, number>[]; runIds: (string | null)[] }>(),
+    /** A point of another run's multi-point job: that run computes it, so the scheduler never starts this one. */
+    jobRunId: idColumn('job_run_id'),
+    /** The fit whose grid this run computes. */
+    fitId: idColumn('fit_id'),
     /** How many times the run was resumed after the server stopped. */
     resumes: int('resumes').notNull().default(0),
     createdAt: timestamp('created_at').notNull(),
@@ -50,6 +60,7 @@ export const runs = mysqlTable(
     index('runs_department_idx').on(t.departmentId, t.createdAt),
     index('runs_status_idx').on(t.status, t.createdAt),
     index('runs_sweep_idx').on(t.sweepId, t.sweepPointIndex),
+    index('runs_job_idx').on(t.jobRunId),
   ],
 );
 

@@ -67,7 +67,11 @@ export function createSweepsService(deps: { db: Db; runs: RunsService; scenarios
   }
 
   return {
-    /** Queues one run per grid point, every one with the same seed (common random numbers). */
+    /**
+     * Queues the sweep as one job: a run per grid point (each holds its point's scenario and gets
+     * its own result and credit reservation), all computed by the first point's run in one pass over
+     * the same draws (common random numbers), so the points equal separate runs with the same seed.
+     */
     async create(auth: RequestAuth, body: CreateSweepBody): Promise<{ id: string }> {
       const department = departmentOf(auth);
       body.axes.forEach((axis, i) => {
@@ -99,8 +103,13 @@ export function createSweepsService(deps: { db: Db; runs: RunsService; scenarios
           id, departmentId: department.id, ownerUserId: auth.user.id, scenarioId: body.scenarioId, scenarioVersion: source.version,
           name: name.slice(0, 160), axes: body.axes, seed: base.seed, systems: base.systems, pointCount: points.length, createdAt: new Date(),
         });
+        const runIds = snapshots.map(() => newId());
+        const values = points.map((point) => Object.fromEntries(point.map((value, axisIndex) => [body.axes[axisIndex].path, value])));
         for (const [index, snapshot] of snapshots.entries()) {
-          await runs.enqueue(auth, { scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: source.name }, snapshot, { sweepId: id, sweepPointIndex: index, tx });
+          await runs.enqueue(auth, { scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: source.name }, snapshot, {
+            sweepId: id, sweepPointIndex: index, tx, id: runIds[index],
+            ...(index === 0 ? { jobPoints: { values, runIds } } : { jobRunId: runIds[0] }),
+          });
         }
         await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'sweep.created', target: id, detail: { points: points.length } });
       });
@@ -169,13 +178,14 @@ export function createSweepsService(deps: { db: Db; runs: RunsService; scenarios
                 note: 'The smallest and largest grid values whose prediction the sample does not reject (exact two-sided binomial test); the true limits lie between grid values, and each point carries its own Monte Carlo error.',
               }
             : null,
-        method: `Every point is a separate run with the same seed, so the points share their random numbers (common random numbers) and the curve is smooth; p-values are exact two-sided binomial tests of the sample against each point's predicted fraction${sample && sample.setting !== 'all' ? ` among ${sample.setting === 'single' ? 'single white dwarfs' : 'white dwarfs with a detached companion'} (the sample's setting)` : ' among all white dwarfs'}.`,
+        method: `Every point is computed from the same draws in one pass (common random numbers), so each point equals a separate run with the same seed and the curve is smooth; p-values are exact two-sided binomial tests of the sample against each point's predicted fraction${sample && sample.setting !== 'all' ? ` among ${sample.setting === 'single' ? 'single white dwarfs' : 'white dwarfs with a detached companion'} (the sample's setting)` : ' among all white dwarfs'}.`,
       };
     },
 
     async cancel(auth: RequestAuth, id: string): Promise<SweepSummary> {
       const department = departmentOf(auth);
       const { points } = await load(department.id, id);
+      // The points are one job: cancelling any cancels them all.
       for (const run of points) if (run.status === 'queued' || run.status === 'running') await scheduler.cancel(run.id);
       await recordAudit(db, { departmentId: department.id, actorUserId: auth.user.id, action: 'sweep.cancelled', target: id });
       const after = await load(department.id, id);

@@ -1,0 +1,202 @@
+import { and, desc, eq, inArray } from 'drizzle-orm';
+import { SWEEPABLE_PARAMETERS, ScenarioValidationError, withParameter, type Scenario } from '../../../shared/contracts/scenario.ts';
+import type { CreateFitBody, FitDetail, FitPosterior, FitSummary } from '../../../shared/contracts/fits.ts';
+import type { RunStatus } from '../../../shared/contracts/runs.ts';
+import { scenarioAtPoint } from '../../../shared/contracts/point-scenario.ts';
+import { multiplierMaxFor } from '../../../shared/engine/kernel/scenario-physics.ts';
+import type { ChunkTally } from '../../../shared/engine/kernel/tally.ts';
+import { buildResult } from '../../../shared/engine/result/build-result.ts';
+import { ENGINE_VERSION } from '../../../shared/engine/version.ts';
+import type { Db } from '../../db/client.ts';
+import { newId } from '../../db/columns.ts';
+import { AppError, notFound } from '../../lib/errors.ts';
+import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
+import type { Logger } from 'pino';
+import { recordAudit } from '../audit/audit.service.ts';
+import { resolveConstraints, type ConstraintSetsService } from '../constraints/constraint-sets.service.ts';
+import type { RunScheduler } from '../runs/run-scheduler.ts';
+import { runs } from '../runs/runs.table.ts';
+import type { RunRow } from '../runs/runs.repository.ts';
+import type { RunsService } from '../runs/runs.service.ts';
+import type { ScenariosService } from '../scenarios/scenarios.service.ts';
+import { analyseFit, fitMethodsParagraph, fitPoints, parameterWords, type FitDefinition } from './fit-analysis.ts';
+import { fits, type FitRow } from './fits.table.ts';
+
+export const fitNotFound = () => notFound('That fit');
+
+const invalid = (field: string, message: string) => new AppError({ code: 'invalid_input', status: 400, field, message });
+
+/** The fit's state: its computing run's, except that a finished grid is "running" until the posterior is stored, and "failed" when none could be computed. */
+function fitStatus(fit: FitRow, run: Pick<RunRow, 'status'> | undefined): RunStatus {
+  const status = run?.status ?? 'failed';
+  if (status !== 'succeeded') return status;
+  if (fit.error) return 'failed';
+  return fit.posterior ? 'succeeded' : 'running';
+}
+
+export function definitionOf(fit: FitRow, scenario: Scenario): FitDefinition {
+  return {
+    scenario,
+    parameters: fit.parameters,
+    constraints: fit.constraints,
+    constraintSet: { id: fit.constraintSetId, name: fit.constraintSetName, version: fit.constraintSetVersion },
+  };
+}
+
+export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: ScenariosService; constraintSets: ConstraintSetsService; scheduler: RunScheduler; logger: Logger }) {
+  const { db, runs: runsService, scenarios, constraintSets, scheduler, logger } = deps;
+
+  async function load(departmentId: string, id: string) {
+    const rows = await db.select().from(fits).where(and(eq(fits.departmentId, departmentId), eq(fits.id, id))).limit(1);
+    if (!rows[0]) throw fitNotFound();
+    return rows[0];
+  }
+
+  async function runsOf(ids: string[]) {
+    if (ids.length === 0) return new Map<string, RunRow>();
+    const rows = await db.select().from(runs).where(inArray(runs.id, ids));
+    return new Map(rows.map((r) => [r.id, r]));
+  }
+
+  function summary(fit: FitRow, run: RunRow | undefined): FitSummary {
+    const status = fitStatus(fit, run);
+    const live = run ? scheduler.live(run.id) : null;
+    const progress = status === 'succeeded' ? 1 : run && run.chunkCount > 0 ? (live?.chunksDone ?? run.chunksDone) / run.chunkCount : 0;
+    return {
+      id: fit.id,
+      name: fit.name,
+      status,
+      progress,
+      createdAt: fit.createdAt.toISOString(),
+      scenarioName: fit.scenarioName,
+      constraintSetName: fit.constraintSetName,
+      parameters: fit.parameters.map((p) => p.path),
+    };
+  }
+
+  /** Called by the scheduler when the fit's run has computed every grid point: scores each point and stores the posterior (or why there is none). */
+  async function onJobFinished(run: RunRow, tallies: ChunkTally[], scenarios: Scenario[]): Promise<void> {
+    if (!run.fitId) return;
+    const [fit] = await db.select().from(fits).where(eq(fits.id, run.fitId)).limit(1);
+    if (!fit || fit.posterior) return;
+    let posterior: FitPosterior | null = null;
+    let error: string | null = null;
+    let methods: string | null = null;
+    try {
+      const definition = definitionOf(fit, scenarios[0]);
+      posterior = analyseFit(definition, tallies.length, (i) => buildResult(scenarios[i], tallies[i]));
+      methods = fitMethodsParagraph(definition, posterior, { engineVersion: fit.engineVersion, fitId: fit.id, scenarioName: fit.scenarioName });
+    } catch (e) {
+      error = e instanceof Error ? e.message : String(e);
+      logger.warn({ fitId: fit.id, err: e }, 'fit posterior failed');
+    }
+    await db
+      .update(fits)
+      .set({ posterior: posterior ? JSON.stringify(posterior) : null, methods, error: error?.slice(0, 4000) ?? null, finishedAt: new Date() })
+      .where(eq(fits.id, fit.id));
+  }
+
+  scheduler.onJobFinished(onJobFinished);
+
+  return {
+    /**
+     * Queues a fit: the grid's first point as a run whose multi-point job computes every grid
+     * point from the same draws. Credit is reserved for every grid point (systems × points), as
+     * a sweep reserves each point.
+     */
+    async create(auth: RequestAuth, body: CreateFitBody): Promise<{ id: string }> {
+      const department = departmentOf(auth);
+      body.parameters.forEach((p, i) => {
+        if (!SWEEPABLE_PARAMETERS.some((known) => known.path === p.path)) {
+          throw invalid(`parameters[${i}].path`, `parameters[${i}].path must be one of ${SWEEPABLE_PARAMETERS.map((k) => k.path).join(', ')} (got "${p.path}")`);
+        }
+      });
+      const source = await scenarios.resolve(department.id, body.scenarioId);
+      const base = await runsService.snapshotOf(department.id, source.scenario, { systems: body.systems, seed: body.seed });
+      // Every parameter's range must be allowed by the scenario's schema (both ends; the fields are independent).
+      body.parameters.forEach((p, i) => {
+        for (const end of ['min', 'max'] as const) {
+          try {
+            withParameter(base, p.path, p[end]);
+          } catch (error) {
+            if (!(error instanceof ScenarioValidationError)) throw error;
+            throw invalid(`parameters[${i}].${end}`, `parameters[${i}].${end} = ${p[end]}: ${error.issues[0]?.message ?? 'invalid'}`);
+          }
+        }
+        if (p.path === 'companions.multiplier') {
+          const mMax = multiplierMaxFor(base.companions.rows ?? []);
+          if (p.max > mMax * (1 + 1e-12)) throw invalid(`parameters[${i}].max`, `parameters[${i}].max = ${p.max} is above the largest multiplier this scenario's rows allow (${mMax}, 1 / the largest row occurrence)`);
+        }
+      });
+      const set = await constraintSets.detail(auth, body.constraintSetId);
+      const constraints = resolveConstraints(set.constraints);
+      const points = fitPoints(body.parameters);
+      const first = scenarioAtPoint(base, points[0]);
+      const id = newId();
+      const runId = newId();
+      const words = body.parameters.map((p) => parameterWords(p.path).label).join(' × ');
+      const name = (body.name ?? `${source.name}: ${words} given ${set.name}`).slice(0, 160);
+      await db.transaction(async (tx) => {
+        await tx.insert(fits).values({
+          id, departmentId: department.id, ownerUserId: auth.user.id, name, scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: source.name,
+          constraintSetId: set.id, constraintSetVersion: set.library ? null : set.currentVersion, constraintSetName: set.name, constraints,
+          parameters: body.parameters, seed: base.seed, systems: base.systems, pointCount: points.length, runId, engineVersion: ENGINE_VERSION, createdAt: new Date(),
+        });
+        await runsService.enqueue(auth, { scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: `Fit: ${name}`.slice(0, 160) }, first, {
+          tx, id: runId, fitId: id, chargedSystems: base.systems * points.length,
+          jobPoints: { values: points.map((p) => ({ ...p })), runIds: points.map((_, i) => (i === 0 ? runId : null)) },
+        });
+        await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'fit.created', target: id, detail: { points: points.length, systems: base.systems } });
+      });
+      scheduler.wake();
+      return { id };
+    },
+
+    async list(auth: RequestAuth): Promise<FitSummary[]> {
+      const department = departmentOf(auth);
+      const rows = await db.select().from(fits).where(eq(fits.departmentId, department.id)).orderBy(desc(fits.createdAt)).limit(200);
+      const byRun = await runsOf(rows.map((r) => r.runId));
+      return rows.map((row) => summary(row, byRun.get(row.runId)));
+    },
+
+    async detail(auth: RequestAuth, id: string): Promise<FitDetail> {
+      const fit = await load(departmentOf(auth).id, id);
+      const run = (await runsOf([fit.runId])).get(fit.runId);
+      return {
+        ...summary(fit, run),
+        scenarioId: fit.scenarioId,
+        scenarioVersion: fit.scenarioVersion,
+        constraintSetId: fit.constraintSetId,
+        constraintSetVersion: fit.constraintSetVersion,
+        grid: fit.parameters.map((p) => ({ ...p, ...parameterWords(p.path) })),
+        pointCount: fit.pointCount,
+        systems: fit.systems,
+        seed: fit.seed,
+        engineVersion: fit.engineVersion,
+        costCredits: run?.costCredits ?? null,
+        runId: fit.runId,
+        error: fit.error ?? (run?.status === 'failed' ? run.error : null),
+        finishedAt: fit.finishedAt?.toISOString() ?? run?.finishedAt?.toISOString() ?? null,
+        posterior: fit.posterior ? (JSON.parse(fit.posterior) as FitPosterior) : null,
+        methods: fit.methods,
+      };
+    },
+
+    async methods(auth: RequestAuth, id: string): Promise<string> {
+      const fit = await load(departmentOf(auth).id, id);
+      if (!fit.methods) throw new AppError({ code: 'fit_not_finished', status: 409, message: 'The fit has no posterior yet; its methods paragraph exists once it has succeeded.' });
+      return fit.methods;
+    },
+
+    async cancel(auth: RequestAuth, id: string): Promise<FitSummary> {
+      const department = departmentOf(auth);
+      const fit = await load(department.id, id);
+      await scheduler.cancel(fit.runId);
+      await recordAudit(db, { departmentId: department.id, actorUserId: auth.user.id, action: 'fit.cancelled', target: id });
+      const run = (await runsOf([fit.runId])).get(fit.runId);
+      return summary(fit, run);
+    },
+  };
+}
+
+export type FitsService = ReturnType<typeof createFitsService>;

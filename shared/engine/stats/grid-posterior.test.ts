@@ -1,0 +1,87 @@
+import { describe, expect, it } from 'vitest';
+import { gridAxisValues, gridNodes, gridPosterior, type GridAxis } from './grid-posterior.ts';
+
+const axis = (over: Partial<GridAxis>): GridAxis => ({ path: 'x', min: 0, max: 1, points: 11, scale: 'linear', prior: 'uniform', ...over });
+
+describe('grid axes', () => {
+  it('spaces a log grid evenly in ln x and ends exactly on the range', () => {
+    const v = gridAxisValues(axis({ min: 1, max: 100, points: 3, scale: 'log' }));
+    expect(v[0]).toBe(1);
+    expect(v[1]).toBeCloseTo(10, 12);
+    expect(v[2]).toBe(100);
+  });
+  it('lists the nodes row-major, the last parameter fastest', () => {
+    expect(gridNodes([axis({ path: 'a', points: 2 }), axis({ path: 'b', points: 3 })])).toEqual([
+      [0, 0], [0, 0.5], [0, 1], [1, 0], [1, 0.5], [1, 1],
+    ]);
+  });
+  it('refuses a log grid that reaches zero, naming the field', () => {
+    expect(() => gridAxisValues(axis({ path: 'envelope.alpha', min: 0, scale: 'log' }))).toThrow(/envelope\.alpha\.min/);
+  });
+});
+
+describe('gridPosterior', () => {
+  it('recovers μ ± σ and μ ± 1.96σ of a Gaussian likelihood under a flat prior', () => {
+    // A Gaussian posterior's central 68.27% interval is μ ± σ and its 95% one μ ± 1.960σ (common
+    // practice, no source). Grid step 0.01σ over ±8σ: the trapezoid and the linear-density
+    // quantiles are accurate to O(h²) ≈ 1e-4 σ, so 1e-3 σ is a safe bound.
+    const mu = 2;
+    const sigma = 0.5;
+    const ax = axis({ path: 'alpha', min: mu - 8 * sigma, max: mu + 8 * sigma, points: 1601 });
+    const ll = gridAxisValues(ax).map((x) => -0.5 * ((x - mu) / sigma) ** 2);
+    const post = gridPosterior([ax], ll);
+    const [iv] = post.intervals;
+    expect(iv.best).toBeCloseTo(mu, 9);
+    expect(Math.abs(iv.lo68 - (mu - sigma))).toBeLessThan(1e-3 * sigma);
+    expect(Math.abs(iv.hi68 - (mu + sigma))).toBeLessThan(1e-3 * sigma);
+    expect(Math.abs(iv.lo95 - (mu - 1.959964 * sigma))).toBeLessThan(1e-3 * sigma);
+    expect(Math.abs(iv.hi95 - (mu + 1.959964 * sigma))).toBeLessThan(1e-3 * sigma);
+    // The peak density of a normal distribution is 1/(σ√(2π)).
+    expect(Math.max(...post.marginals[0].density)).toBeCloseTo(1 / (sigma * Math.sqrt(2 * Math.PI)), 4);
+    expect(post.warnings).toEqual([]);
+  });
+
+  it('a log-uniform prior on a log grid with a flat likelihood gives θ_q = a (b/a)^q, and says the likelihood is flat', () => {
+    // Density ∝ 1/θ on [a, b]: CDF = ln(θ/a) / ln(b/a), so the quantile q is a (b/a)^q exactly.
+    // 401 log-spaced nodes: the linear-in-θ density between nodes differs from 1/θ by O(h²); the
+    // relative step is 1.2%, so quantiles agree within 1e-3 relative.
+    const ax = axis({ path: 'companions.multiplier', min: 1, max: 100, points: 401, scale: 'log', prior: 'logUniform' });
+    const post = gridPosterior([ax], new Array(401).fill(-3.2));
+    const [iv] = post.intervals;
+    const q = (p: number) => 100 ** p;
+    expect(iv.lo68 / q(0.15865525)).toBeCloseTo(1, 3);
+    expect(iv.hi68 / q(0.84134475)).toBeCloseTo(1, 3);
+    expect(iv.lo95 / q(0.025)).toBeCloseTo(1, 3);
+    expect(iv.hi95 / q(0.975)).toBeCloseTo(1, 3);
+    expect(post.warnings.some((w) => w.includes('flat over the grid'))).toBe(true);
+  });
+
+  it('says so when the posterior piles up at a range edge', () => {
+    // ln L rising all the way to the upper edge: the data prefer values beyond the range.
+    const ax = axis({ path: 'envelope.alpha', min: 0.1, max: 1, points: 10 });
+    const post = gridPosterior([ax], gridAxisValues(ax).map((x) => 5 * x));
+    expect(post.warnings.join(' ')).toMatch(/envelope\.alpha is still \d+% of its peak at the upper edge of the range \(1\)/);
+    expect(post.warnings.join(' ')).not.toMatch(/lower edge/);
+  });
+
+  it('marginalises a 2-D grid: an independent product likelihood gives each factor back, and a flat axis is named', () => {
+    // L(a, b) = N(a; 0.3, 0.05) · const(b): the marginal of a is the 1-D Gaussian, b is unconstrained.
+    const a = axis({ path: 'a', min: 0, max: 0.6, points: 121 });
+    const b = axis({ path: 'b', min: 1, max: 2, points: 5 });
+    const ll = gridNodes([a, b]).map(([x]) => -0.5 * ((x - 0.3) / 0.05) ** 2);
+    const post = gridPosterior([a, b], ll);
+    // Step 0.1σ: the linear-density quantiles are good to ~1e-3σ.
+    expect(post.intervals[0].lo68).toBeCloseTo(0.25, 3);
+    expect(post.intervals[0].hi68).toBeCloseTo(0.35, 3);
+    expect(post.marginals[1].density.every((d) => Math.abs(d - 1) < 1e-12)).toBe(true);
+    expect(post.warnings.join(' ')).toMatch(/flat along b/);
+    expect(post.bestIndex).toBe(60 * 5);
+  });
+
+  it('counts nodes without a likelihood as zero likelihood and says how many', () => {
+    const ax = axis({ points: 5 });
+    const post = gridPosterior([ax], [null, -1, 0, -1, -4]);
+    expect(post.marginals[0].density[0]).toBe(0);
+    expect(post.warnings[0]).toMatch(/^1 of 5 grid nodes/);
+  });
+});

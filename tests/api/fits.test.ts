@@ -1,0 +1,159 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type request from 'supertest';
+import { addMember, createTestApp, signUp, type TestContext } from '../support/test-app.ts';
+import { checkScenario, createScenario, waitForRun } from '../support/runs.ts';
+import { jStat } from '../../shared/engine/stats/testing/jstat-reference.ts';
+
+let ctx: TestContext;
+let owner: { agent: request.Agent };
+let modeller: { agent: request.Agent };
+let observer: { agent: request.Agent };
+beforeAll(async () => {
+  ctx = await createTestApp();
+  const admin = await signUp(ctx.app);
+  owner = admin;
+  modeller = await addMember(ctx, admin.me.department.id, 'modeller');
+  observer = await addMember(ctx, admin.me.department.id, 'observer');
+}, 60_000);
+afterAll(() => ctx.close());
+
+const SYSTEMS = 20_000;
+const SEED = 'fit-crn';
+
+/** A separate run of the check scenario with these companions/giant values and the shared seed. */
+async function separateRun(overrides: Record<string, unknown>) {
+  const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: SYSTEMS, seed: SEED, ...overrides }));
+  const run = await modeller.agent.post('/api/runs').send({ scenarioId }).expect(201);
+  expect((await waitForRun(modeller.agent, run.body.id, 60_000)).status).toBe('succeeded');
+  return (await modeller.agent.get(`/api/runs/${run.body.id}/result`).expect(200)).body;
+}
+
+const base = checkScenario();
+const withMultiplier = (m: number) => ({ companions: { ...(base.companions as object), multiplier: m } });
+
+async function waitForFit(agent: request.Agent, id: string, timeoutMs = 90_000) {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const res = await agent.get(`/api/fits/${id}`).expect(200);
+    if (['succeeded', 'failed', 'cancelled'].includes(res.body.status)) return res.body;
+    if (Date.now() > deadline) throw new Error(`fit ${id} still ${res.body.status}`);
+    await new Promise((r) => setTimeout(r, 150));
+  }
+}
+
+describe('sweeps as one job', () => {
+  it('gives every point the counts of a separate run with the same seed, readable as a run', async () => {
+    const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: SYSTEMS, seed: SEED }));
+    const values = [0.5, 3];
+    const sweep = await modeller.agent.post('/api/sweeps').send({ scenarioId, axes: [{ path: 'giant.reachAU', values }] }).expect(201);
+    let detail;
+    for (let i = 0; i < 600; i++) {
+      detail = (await modeller.agent.get(`/api/sweeps/${sweep.body.id}`).expect(200)).body;
+      if (detail.status === 'finished') break;
+      await new Promise((r) => setTimeout(r, 100));
+    }
+    expect(detail.points.map((p: { status: string }) => p.status)).toEqual(['succeeded', 'succeeded']);
+    for (const [i, reach] of values.entries()) {
+      const point = detail.points[i];
+      const own = (await modeller.agent.get(`/api/runs/${point.runId}/result`).expect(200)).body;
+      const separate = await separateRun({ giant: { kind: 'fixedReach', reachAU: reach } });
+      // Exactness of common random numbers: identical integer counts, not merely close ones.
+      expect(own.counts).toEqual(separate.counts);
+      expect(own.bins.wdMass).toEqual(separate.bins.wdMass);
+      const methods = await modeller.agent.get(`/api/runs/${point.runId}/methods.txt`).expect(200);
+      expect(methods.text).toContain(`Engulfment reach = ${reach} AU`);
+      const summary = (await modeller.agent.get(`/api/runs/${point.runId}`).expect(200)).body;
+      expect(summary.sweepId).toBe(sweep.body.id);
+    }
+  }, 180_000);
+});
+
+describe('fits', () => {
+  it('gives the posterior over the multiplier that the binomial likelihood of separate runs gives', async () => {
+    const multipliers = [0.5, 1.125, 1.75, 2.375, 3];
+    const separate = [];
+    for (const m of multipliers) separate.push(await separateRun(withMultiplier(m)));
+    // An observation near the model's prediction at m ≈ 1.75, so that the posterior lies inside the range.
+    const f = separate[2].counts.magnetic / separate[2].counts.whiteDwarfs;
+    const total = 400;
+    const magnetic = Math.round(f * total);
+    const set = await modeller.agent
+      .post('/api/constraint-sets')
+      .send({ name: 'One survey (illustrative)', constraints: [{ kind: 'fraction', magnetic, total, label: 'Illustrative survey', citation: 'Invented for this test' }] })
+      .expect(201);
+    const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: SYSTEMS, seed: SEED }));
+    const created = await modeller.agent
+      .post('/api/fits')
+      .send({ scenarioId, constraintSetId: set.body.id, parameters: [{ path: 'companions.multiplier', min: 0.5, max: 3, points: 5 }] })
+      .expect(201);
+    const fit = await waitForFit(observer.agent, created.body.id);
+    expect(fit.status).toBe('succeeded');
+    expect(fit.pointCount).toBe(5);
+    const post = fit.posterior;
+    expect(post.parameters[0].values).toEqual(multipliers);
+
+    // The likelihood at each node is the binomial probability of k of n at the separate run's
+    // predicted fraction (jStat's pmf, an independent implementation); 1e-9 covers log-gamma rounding.
+    const ll = separate.map((r) => Math.log(jStat.binomial.pdf(magnetic, total, r.counts.magnetic / r.counts.whiteDwarfs)));
+    post.logLikelihood.forEach((x: number, i: number) => expect(x).toBeCloseTo(ll[i], 9));
+
+    // The 68% interval from those likelihoods, integrated independently: the density linear between
+    // nodes, summed on 10^5 sub-steps. Agreement within 1e-3 of the range (the sub-step sum's error).
+    const L = ll.map((x) => Math.exp(x - Math.max(...ll)));
+    const steps = 100_000;
+    const xs: number[] = [];
+    const cdf: number[] = [];
+    let acc = 0;
+    for (let s = 0; s <= steps; s++) {
+      const x = 0.5 + (2.5 * s) / steps;
+      const j = Math.min(3, Math.floor((x - 0.5) / 0.625));
+      const t = (x - multipliers[j]) / 0.625;
+      const d = L[j] * (1 - t) + L[j + 1] * t;
+      if (s > 0) acc += d * (2.5 / steps);
+      xs.push(x);
+      cdf.push(acc);
+    }
+    const q = (p: number) => xs[cdf.findIndex((c) => c >= p * acc)];
+    const [iv] = post.intervals;
+    expect(Math.abs(iv.lo68 - q(0.158655))).toBeLessThan(2.5e-3);
+    expect(Math.abs(iv.hi68 - q(0.841345))).toBeLessThan(2.5e-3);
+
+    // Best point, its scorecard, the sentence and the methods paragraph (grid, prior, set with citation, MC size, engine).
+    const best = ll.indexOf(Math.max(...ll));
+    expect(post.bestPoint.values).toEqual({ 'companions.multiplier': multipliers[best] });
+    expect(post.bestPoint.evaluation.constraints[0].label).toBe('Illustrative survey');
+    expect(post.sentence).toMatch(/^We find Occurrence multiplier between /);
+    const methods = (await observer.agent.get(`/api/fits/${created.body.id}/methods.txt`).expect(200)).text;
+    expect(methods).toContain('5 linearly spaced values from 0.5 to 3 with a uniform prior');
+    expect(methods).toContain('Invented for this test');
+    expect(methods).toContain(`${SYSTEMS.toLocaleString('en-US')} primaries`);
+    expect(methods).toContain(`engine ${fit.engineVersion}`);
+
+    // Listed for the Overview; credit reserved for every grid point (5 × 20,000 systems).
+    const list = (await observer.agent.get('/api/fits').expect(200)).body.fits;
+    expect(list[0]).toMatchObject({ id: created.body.id, status: 'succeeded', progress: 1, parameters: ['companions.multiplier'], constraintSetName: 'One survey (illustrative)' });
+    const ledger = (await owner.agent.get('/api/billing/ledger?pageSize=100').expect(200)).body.entries;
+    const reservation = ledger.find((e: { runId: string | null; kind: string }) => e.runId === fit.runId && e.kind === 'reservation');
+    expect(reservation.description).toContain(`${(5 * SYSTEMS).toLocaleString('en-US')} systems`);
+  }, 240_000);
+
+  it('refuses a bad grid, naming the field, and lets observers read but not start fits', async () => {
+    const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: 2000 }));
+    const over = await modeller.agent
+      .post('/api/fits')
+      .send({ scenarioId, constraintSetId: 'library', parameters: [{ path: 'companions.multiplier', min: 0.5, max: 5, points: 3 }] })
+      .expect(400);
+    expect(over.body.error.field).toBe('parameters[0].max');
+    const log = await modeller.agent
+      .post('/api/fits')
+      .send({ scenarioId, constraintSetId: 'library', parameters: [{ path: 'envelope.alpha', min: 0, max: 1, points: 3, scale: 'log' }] })
+      .expect(400);
+    expect(log.body.error.message).toMatch(/parameters\[0\]\.min must be above 0 for a log grid/);
+    const big = await modeller.agent
+      .post('/api/fits')
+      .send({ scenarioId, constraintSetId: 'library', parameters: [{ path: 'envelope.alpha', min: 0.1, max: 1, points: 200 }, { path: 'envelope.lambda', min: 0.1, max: 1, points: 60 }] })
+      .expect(400);
+    expect(big.body.error.message).toMatch(/12000 grid points; a fit may have at most 10000/);
+    await observer.agent.post('/api/fits').send({ scenarioId, constraintSetId: 'library', parameters: [{ path: 'envelope.alpha', min: 0.1, max: 1, points: 3 }] }).expect(403);
+  }, 60_000);
+});

@@ -1,0 +1,57 @@
+/**
+ * A small two-parameter fit from the browser: the demo modeller fits α_CE × engulfment reach of the
+ * fixed-reach baseline against the published library, sees the cost before starting, then the
+ * intervals, the corner plot (two marginals and one joint heat map) and the sentence.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { chooseOption, startBrowserStack, type BrowserStack } from '../support/browser.ts';
+
+let stack: BrowserStack;
+beforeAll(async () => {
+  stack = await startBrowserStack();
+}, 240_000);
+afterAll(() => stack?.stop());
+
+describe('fits', () => {
+  it('runs a 3 × 3 fit and shows the corner plot and intervals', async () => {
+    const { page, context } = await stack.newPage();
+    try {
+      await stack.signIn(page, 'modeller');
+      await page.goto('/fits');
+      const form = page.getByRole('form', { name: 'New fit' });
+      await form.waitFor({ timeout: 30_000 });
+      await chooseOption(form.getByLabel('Scenario'), 'Baseline, fixed engulfment reach');
+      await chooseOption(form.getByLabel('Constraint set'), 'library');
+      await form.getByLabel('Systems per grid point').fill('20000');
+      const first = form.getByRole('group', { name: 'Parameter 1' });
+      await first.getByLabel('Parameter 1').selectOption('envelope.alpha');
+      await first.getByLabel('From').fill('0.1');
+      await first.getByLabel('To').fill('1');
+      await first.getByLabel('Points').fill('3');
+      await form.getByRole('button', { name: 'Add a parameter' }).click();
+      const second = form.getByRole('group', { name: 'Parameter 2' });
+      await second.getByLabel('Parameter 2').selectOption('giant.reachAU');
+      await second.getByLabel('From').fill('1');
+      await second.getByLabel('To').fill('4');
+      await second.getByLabel('Points').fill('3');
+      await second.getByLabel('Spacing').selectOption('log');
+      // The cost comes first: 9 points × 20,000 systems.
+      await expect.poll(() => page.getByTestId('fit-cost').textContent(), { timeout: 20_000 }).toMatch(/9 grid points × 20,000 systems, reserved at once as 180,000 systems/);
+      await stack.screenshot(page, 'fit-form');
+      await form.getByRole('button', { name: 'Start the fit' }).click();
+      await page.waitForURL(/\/fits\/[A-Za-z0-9_-]{8,}$/);
+      const intervals = page.getByTestId('fit-intervals');
+      await intervals.waitFor({ timeout: 180_000 });
+      const rows = intervals.locator('tbody tr');
+      expect(await rows.count()).toBe(2);
+      expect(await rows.nth(0).textContent()).toMatch(/Common-envelope efficiency/);
+      const corner = page.getByTestId('fit-corner');
+      // Two marginals and one joint panel render as SVG charts.
+      await expect.poll(() => corner.locator('svg').count(), { timeout: 60_000 }).toBeGreaterThanOrEqual(3);
+      expect(await page.getByTestId('fit-sentence').textContent()).toMatch(/^We find Common-envelope efficiency α_CE between .* \(68%/);
+      await stack.screenshot(page, 'fit-corner-plot');
+    } finally {
+      await context.close();
+    }
+  }, 400_000);
+});
