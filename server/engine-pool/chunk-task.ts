@@ -1,15 +1,16 @@
 import { buildEngulfmentGrid as buildGrid, type EngulfmentGrid, type EngulfmentGridInput } from '../../shared/engine/physics/engulfment-grid.ts';
 import { runChunk } from '../../shared/engine/kernel/run-chunk.ts';
-import { runChunkPoints, type PreparedPoints } from '../../shared/engine/kernel/run-points.ts';
+import { runChunkPoints } from '../../shared/engine/kernel/run-points.ts';
 import type { PreparedScenario } from '../../shared/engine/kernel/prepare.ts';
 import { addTallyInto, type ChunkTally } from '../../shared/engine/kernel/tally.ts';
+import type { PointPass } from './point-passes.ts';
 
 /** One pool task: several chunks of one prepared scenario (sent once per batch, not per chunk). */
 export interface ChunkBatchTask {
   prepared: PreparedScenario;
   chunks: number[];
-  /** A multi-point job: the points evaluated from each chunk's draws (one tally per point comes back). */
-  points?: PreparedPoints;
+  /** A multi-point job: its passes (one per set of draw-changing values); one tally per point comes back, in the job's order. */
+  passes?: PointPass[];
 }
 
 /**
@@ -18,7 +19,7 @@ export interface ChunkBatchTask {
  */
 export default function runChunkBatch(task: ChunkBatchTask): ChunkTally | ChunkTally[] {
   if (task.chunks.length === 0) throw new Error('a chunk batch needs at least one chunk');
-  if (task.points) return runChunkBatchPoints(task.prepared, task.points, task.chunks);
+  if (task.passes) return runChunkBatchPasses(task.passes, task.chunks);
   const [first, ...rest] = task.chunks;
   const sum = runChunk(task.prepared, first);
   for (const chunkIndex of rest) addTallyInto(sum, runChunk(task.prepared, chunkIndex));
@@ -33,10 +34,14 @@ export function buildEngulfmentGrid(task: { input: EngulfmentGridInput }): Engul
   return buildGrid(task.input);
 }
 
-/** A multi-point batch: the chunks' tallies summed per point (tally p belongs to point p). */
-function runChunkBatchPoints(prepared: PreparedScenario, points: PreparedPoints, chunks: number[]): ChunkTally[] {
-  const [first, ...rest] = chunks;
-  const sums = runChunkPoints(prepared, points, first);
-  for (const chunkIndex of rest) runChunkPoints(prepared, points, chunkIndex).forEach((tally, p) => addTallyInto(sums[p], tally));
-  return sums;
+/** A multi-point batch: each pass's chunks run once, the tallies summed per point and put in the job's order. */
+function runChunkBatchPasses(passes: PointPass[], chunks: number[]): ChunkTally[] {
+  const out: ChunkTally[] = [];
+  for (const pass of passes) {
+    const [first, ...rest] = chunks;
+    const sums = runChunkPoints(pass.prepared, pass.points, first);
+    for (const chunkIndex of rest) runChunkPoints(pass.prepared, pass.points, chunkIndex).forEach((tally, p) => addTallyInto(sums[p], tally));
+    sums.forEach((tally, p) => (out[pass.indices[p]] = tally));
+  }
+  return out;
 }

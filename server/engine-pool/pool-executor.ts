@@ -3,10 +3,10 @@ import type { Piscina } from 'piscina';
 import type { Scenario } from '../../shared/contracts/scenario.ts';
 import type { EngulfmentGrid } from '../../shared/engine/kernel/engulfment.ts';
 import { prepareScenario } from '../../shared/engine/kernel/prepare.ts';
-import { preparePoints } from '../../shared/engine/kernel/run-points.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
 import { BATCH_RETRIES, BatchFailedError, pendingBatches, RunAbortedError, type BatchDone, type ChunkExecutor, type ExecuteRequest } from './chunk-executor.ts';
 import type { ChunkBatchTask } from './chunk-task.ts';
+import { preparePointPasses } from './point-passes.ts';
 
 export interface PoolExecutorOptions {
   pool: Piscina;
@@ -58,8 +58,9 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
   async function* execute(request: ExecuteRequest): AsyncGenerator<BatchDone> {
     const { signal } = request;
     if (signal.aborted) throw new RunAbortedError(signal.reason);
-    const prepared = prepareScenario(request.scenario, { engulfmentGrid: await options.resolveGrid?.(request.scenario) });
-    const points = request.points ? preparePoints(request.scenario, prepared, request.points) : undefined;
+    const prepare = async (scenario: Scenario) => prepareScenario(scenario, { engulfmentGrid: await options.resolveGrid?.(scenario) });
+    const prepared = await prepare(request.scenario);
+    const passes = request.points ? await preparePointPasses(request.scenario, request.points, prepare) : undefined;
     const threads = poolThreads(pool);
     const size = options.chunksPerTask ?? Math.max(1, Math.min(16, Math.ceil(request.pending.length / (threads * 8))));
     const batches = pendingBatches(request.pending, size);
@@ -78,7 +79,7 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
       while (next < batches.length || inFlight.size > 0) {
         while (inFlight.size < threads * 2 && next < batches.length) {
           const { batch, chunks } = batches[next++];
-          const done = runBatch({ prepared, chunks, points }, local.signal).then((tally): BatchDone =>
+          const done = runBatch({ prepared, chunks, passes }, local.signal).then((tally): BatchDone =>
             Array.isArray(tally) ? { batch, chunks, tally: tally[0], pointTallies: tally } : { batch, chunks, tally },
           );
           done.catch(() => {}); // observed by the race below; a late rejection after a failure is expected

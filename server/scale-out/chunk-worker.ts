@@ -6,10 +6,10 @@ import type { Piscina } from 'piscina';
 import type { Scenario } from '../../shared/contracts/scenario.ts';
 import { engulfmentGridInputFor, type EngulfmentGrid } from '../../shared/engine/kernel/engulfment.ts';
 import { prepareScenario, type PreparedScenario } from '../../shared/engine/kernel/prepare.ts';
-import { preparePoints, type PreparedPoints } from '../../shared/engine/kernel/run-points.ts';
 import { scenarioHash } from '../../shared/engine/kernel/scenario-hash.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
 import { engulfmentGridKey } from '../../shared/engine/physics/engulfment-grid.ts';
+import { preparePointPasses, type PointPass } from '../engine-pool/point-passes.ts';
 import { poolThreads } from '../engine-pool/pool-executor.ts';
 import { cancelChannel, cancelledKey, redisConnection, workerKeyPrefix, type ChunkJobData, type ChunkJobResult, type WorkerHeartbeat } from './queue-names.ts';
 
@@ -45,7 +45,7 @@ export function createChunkWorker(options: ChunkWorkerOptions) {
   const grids = new Map<string, Promise<EngulfmentGrid>>();
   const prepared = new Map<string, Promise<PreparedScenario>>();
   /** Prepared points of the multi-point jobs seen last (a job's batches share them). */
-  const preparedPointsOfRun = new Map<string, PreparedPoints>();
+  const passesOfRun = new Map<string, Promise<PointPass[]>>();
   const startedAt = new Date().toISOString();
   let jobsDone = 0;
   let activeJobs = 0;
@@ -91,13 +91,14 @@ export function createChunkWorker(options: ChunkWorkerOptions) {
     try {
       const base = await preparedFor(scenario);
       if (points) {
-        let preparedPoints = preparedPointsOfRun.get(runId);
-        if (!preparedPoints) {
-          preparedPoints = preparePoints(scenario, base, points);
-          preparedPointsOfRun.set(runId, preparedPoints);
-          if (preparedPointsOfRun.size > PREPARED_CACHE) preparedPointsOfRun.delete(preparedPointsOfRun.keys().next().value!);
+        let passes = passesOfRun.get(runId);
+        if (!passes) {
+          passes = preparePointPasses(scenario, points, preparedFor);
+          passes.catch(() => passesOfRun.delete(runId));
+          passesOfRun.set(runId, passes);
+          if (passesOfRun.size > PREPARED_CACHE) passesOfRun.delete(passesOfRun.keys().next().value!);
         }
-        const tallies = (await pool.run({ prepared: base, chunks, points: preparedPoints }, { signal })) as ChunkTally[];
+        const tallies = (await pool.run({ prepared: base, chunks, passes: await passes }, { signal })) as ChunkTally[];
         jobsDone++;
         return { chunks, tally: tallies[0], tallies };
       }

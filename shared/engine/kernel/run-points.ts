@@ -207,3 +207,33 @@ function valueAt(root: unknown, path: string): unknown {
 function isRecord(x: unknown): x is Record<string, unknown> {
   return typeof x === 'object' && x !== null;
 }
+
+/** Points that share every value of the paths that are not draw-free: one pass of the kernel. */
+export interface PointValueGroup {
+  /** The values of paths that change the draws or the track grid (age, giant.reimersEta, …), set on the pass's scenario. */
+  shared: PointValues;
+  /** Each point's draw-free values, for preparePoints on the pass's scenario. */
+  points: PointValues[];
+  /** The index of each of these points in the caller's list. */
+  indices: number[];
+}
+
+/**
+ * Splits a list of points into passes: points that differ only in draw-free paths share one
+ * pass; every distinct combination of the other values (a sweep over the age, say) gets its
+ * own pass on the scenario with those values, still on the same seed (common random numbers).
+ * Passes come in the order of their first point.
+ */
+export function splitPointValues(points: readonly PointValues[]): PointValueGroup[] {
+  const groups = new Map<string, PointValueGroup>();
+  points.forEach((values, index) => {
+    const entries = Object.entries(values);
+    const shared = Object.fromEntries(entries.filter(([path]) => !isDrawFreePath(path)).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)));
+    const key = JSON.stringify(shared);
+    let group = groups.get(key);
+    if (!group) groups.set(key, (group = { shared, points: [], indices: [] }));
+    group.points.push(Object.fromEntries(entries.filter(([path]) => isDrawFreePath(path))));
+    group.indices.push(index);
+  });
+  return [...groups.values()];
+}
