@@ -1,6 +1,5 @@
 import type { Logger } from 'pino';
 import type { RunProgressEvent, RunStatus } from '../../../shared/contracts/runs.ts';
-import { parseScenario } from '../../../shared/contracts/scenario.ts';
 import { addTallyInto, emptyTallyFor, type ChunkTally } from '../../../shared/engine/kernel/tally.ts';
 import { buildResult } from '../../../shared/engine/result/build-result.ts';
 import { RunAbortedError, type ChunkExecutor } from '../../engine-pool/chunk-executor.ts';
@@ -138,7 +137,7 @@ export function createRunScheduler(deps: {
   async function execute(runId: string, entry: ActiveRun): Promise<void> {
     const run = await loadRun(db, runId);
     if (!run) return;
-    const scenario = parseScenario(run.snapshot);
+    const scenario = run.snapshot;
     const checkpoint = await loadCheckpoint(db, runId);
     const done = new ChunkSet(checkpoint?.doneChunks ?? []);
     // The run's one running total: the checkpoint's, or the engine's empty tally of this scenario.
