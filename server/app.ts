@@ -46,6 +46,8 @@ import { accountRoutes } from './modules/account/account.routes.ts';
 import { settingsRoutes } from './modules/account/settings.routes.ts';
 import { createSettingsService } from './modules/account/settings.service.ts';
 import { createAccountService } from './modules/account/account.service.ts';
+import { signUpRoutes } from './modules/sign-up/sign-up.routes.ts';
+import { createSignUpService } from './modules/sign-up/sign-up.service.ts';
 import { billingRoutes, WEBHOOK_PATH } from './modules/billing/billing.routes.ts';
 import { createBillingService, type BillingService } from './modules/billing/billing.service.ts';
 import { createPaymentGateway } from './modules/billing/payment-gateway.ts';
@@ -133,6 +135,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   const billing = createBillingService({ db, config, payments: createPaymentGateway(config), mailer, logger });
   const runNotices = createRunNotices({ db, config, mailer });
   const account = createAccountService({ db, config, mailer, sessions, logger });
+  const signUp = createSignUpService({ db, config, mailer, auth, logger });
   const settings = createSettingsService({ db, config, mailer, sessions });
   const invitations = createInvitationsService({ db, config, mailer, sessions, logger });
   const runs = createRunsService({ db, scheduler, scenarios, tables, samples, billing: deps.billing ?? billing.runBilling });
@@ -172,6 +175,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   app.use('/api', authenticate(db, sessions, tokens.resolver()));
 
   app.use('/api', authRoutes(registry, config, auth, sessions));
+  app.use('/api', signUpRoutes(registry, config, signUp, sessions));
   app.use('/api/members', membersRoutes(registry, members));
   app.use('/api/tokens', tokensRoutes(registry, tokens));
   app.use('/api/scenarios', scenariosRoutes(registry, scenarios));

@@ -19,3 +19,4 @@ export { passwordResets, notificationSettings } from '../modules/account/account
 export { constraintSets, constraintSetVersions } from '../modules/constraints/constraint-sets.table.ts';
 export { shareLinks } from '../modules/shares/share-links.table.ts';
 export { emailChanges } from '../modules/account/email-changes.table.ts';
+export { signUps } from '../modules/sign-up/sign-ups.table.ts';

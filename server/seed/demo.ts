@@ -4,6 +4,7 @@ import type { Role } from '../../shared/contracts/roles.ts';
 import type { RequestAuth } from '../lib/request-auth.ts';
 import { createOccurrenceTablesService } from '../modules/occurrence-tables/occurrence-tables.service.ts';
 import { createSamplesService } from '../modules/samples/samples.service.ts';
+import { createScenarioBodySchema } from '../../shared/contracts/scenarios-api.ts';
 import { loadPresets } from '../modules/scenarios/presets.ts';
 import { createScenariosService } from '../modules/scenarios/scenarios.service.ts';
 import type { Db } from '../db/client.ts';
@@ -107,7 +108,9 @@ async function seedDemoWork(db: Db, departmentId: string): Promise<void> {
   const scenarios = createScenariosService(db, (dept, id) => tables.exists(dept, id));
   const existing = new Set((await scenarios.list(modellerAuth)).map((s) => s.name));
   for (const preset of loadPresets()) {
-    if (!existing.has(preset.title)) await scenarios.create(modellerAuth, { name: preset.title, document: preset.document, note: 'Example scenario shipped with Tidefield' });
+    if (existing.has(preset.title)) continue;
+    // The presets come from a file, so they are parsed here at the edge like a request body.
+    await scenarios.create(modellerAuth, createScenarioBodySchema.parse({ name: preset.title, document: preset.document, note: 'Example scenario shipped with Tidefield' }));
   }
 
   const samples = createSamplesService(db);

@@ -1,21 +1,46 @@
 import { z } from 'zod';
 import { nameSchema } from './common.ts';
+import { parseScenario, ScenarioValidationError } from './scenario.ts';
 
-/** The document is validated by parseScenario (shared/contracts/scenario.ts) in the service, which names the failing field as `document.<path>`. */
+/**
+ * A scenario document in a request, parsed once at the edge: it reaches the service as the
+ * document as written (stored as such, so the builder shows what the user wrote) with its
+ * typed `Scenario` (defaults filled in). Errors name the field as `document.<path>`.
+ */
+export const scenarioDocumentSchema = z
+  .record(z.string(), z.unknown(), { error: 'document must be a JSON object (a scenario document)' })
+  .transform((written, ctx) => {
+    try {
+      return { written, scenario: parseScenario(written) };
+    } catch (error) {
+      if (!(error instanceof ScenarioValidationError)) throw error;
+      for (const issue of error.issues) {
+        const message = issue.field && issue.message.startsWith(issue.field) ? `document.${issue.message}` : issue.message;
+        ctx.addIssue({ code: 'custom', path: issue.field ? issue.field.split('.') : [], message, input: written });
+      }
+      return z.NEVER;
+    }
+  });
+export type ScenarioDocument = z.output<typeof scenarioDocumentSchema>;
+
 export const createScenarioBodySchema = z.strictObject({
   name: nameSchema,
-  document: z.record(z.string(), z.unknown(), { error: 'document must be a JSON object (a scenario document)' }),
+  document: scenarioDocumentSchema,
   note: z.string().max(2000).optional(),
 });
-export type CreateScenarioBody = z.infer<typeof createScenarioBodySchema>;
+/** The body as sent. */
+export type CreateScenarioBody = z.input<typeof createScenarioBodySchema>;
+/** The body as the service receives it (document parsed). */
+export type CreateScenarioRequest = z.output<typeof createScenarioBodySchema>;
 
 export const updateScenarioBodySchema = z.strictObject({
   name: nameSchema.optional(),
   /** A new document creates a new version; the old ones stay. */
-  document: z.record(z.string(), z.unknown()).optional(),
+  document: scenarioDocumentSchema.optional(),
   note: z.string().max(2000).optional(),
 });
-export type UpdateScenarioBody = z.infer<typeof updateScenarioBodySchema>;
+export type UpdateScenarioBody = z.input<typeof updateScenarioBodySchema>;
+export type UpdateScenarioRequest = z.output<typeof updateScenarioBodySchema>;
 
 export const cloneScenarioBodySchema = z.strictObject({ name: nameSchema.optional() });
 

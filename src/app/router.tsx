@@ -17,6 +17,7 @@ export const routes: RouteObject[] = [
       { path: paths.acceptInvitation.path, lazy: () => import('./routes/accept-invitation.tsx') },
       { path: sharedPath.path, lazy: () => import('./routes/shared.tsx') },
       { path: paths.confirmEmail.path, lazy: () => import('./routes/confirm-email.tsx') },
+      { path: paths.confirmSignUp.path, lazy: () => import('./routes/confirm-sign-up.tsx') },
       {
         lazy: () => import('./routes/app-root.tsx'),
         children: [

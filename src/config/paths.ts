@@ -30,6 +30,8 @@ export const paths = {
   acceptInvitation: page('/accept-invitation'),
   // Opened from the link mailed to a new e-mail address (?token=…).
   confirmEmail: page('/confirm-email'),
+  // Opened from the link mailed after sign-up (?token=…): creates the account.
+  confirmSignUp: page('/confirm-sign-up'),
 
   overview: page('/'),
   scenarios: {
@@ -91,7 +93,7 @@ export const paths = {
 export const MOVED_PAGES: readonly { from: string; to: string }[] = [{ from: '/notifications', to: '/settings#notices' }];
 
 /** Pages outside the signed-in app (no navigation entry). */
-export const PUBLIC_PAGE_KEYS: readonly PathKey[] = ['signIn', 'signUp', 'forgotPassword', 'resetPassword', 'acceptInvitation', 'confirmEmail'];
+export const PUBLIC_PAGE_KEYS: readonly PathKey[] = ['signIn', 'signUp', 'forgotPassword', 'resetPassword', 'acceptInvitation', 'confirmEmail', 'confirmSignUp'];
 
 /**
  * A read-only share link to a run or sweep, opened without signing in. Kept beside `paths`

@@ -3,7 +3,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { expectSelfContained, linkToken } from '../support/billing.ts';
 import { checkScenario, createScenario, waitForRun } from '../support/runs.ts';
-import { createTestApp, GOOD_PASSWORD, signUp, uniqueEmail, type TestContext } from '../support/test-app.ts';
+import { createTestApp, GOOD_PASSWORD, signUp, signUpWithoutMail, uniqueEmail, type TestContext } from '../support/test-app.ts';
 
 let ctx: TestContext;
 beforeAll(async () => {
@@ -130,7 +130,7 @@ describe('run notices', () => {
   it('the outbox is off unless e-mail goes to the local stand-in', async () => {
     const hosted = await createTestApp({ SMTP_HOST: 'smtp.example.org' });
     try {
-      const { agent } = await signUp(hosted.app);
+      const { agent } = await signUpWithoutMail(hosted);
       expect((await agent.get('/api/outbox').expect(200)).body).toEqual({ enabled: false, messages: [] });
     } finally {
       await hosted.close();

@@ -15,6 +15,7 @@ type Minimum = 'public' | 'signedIn' | 'observer' | 'modeller' | 'admin';
 export const EXPECTED_ACCESS: Record<string, Minimum> = {
   'GET /api/health': 'public',
   'POST /api/auth/sign-up': 'public',
+  'POST /api/auth/sign-up/confirm': 'public',
   'POST /api/auth/sign-in': 'public',
   'POST /api/auth/sign-out': 'signedIn',
   'GET /api/me': 'signedIn',

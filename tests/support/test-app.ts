@@ -12,6 +12,7 @@ import { connectDatabase, migrateDatabase, type Database } from '../../server/db
 import { createLogger } from '../../server/logger.ts';
 import { startFakesOnFreePorts, type FakesOnFreePorts } from '../../server/fakes/local-fakes.ts';
 import type { DbConnection } from '../../scripts/mariadb.ts';
+import { linkToken } from './billing.ts';
 
 export interface TestContext {
   app: Express;
@@ -117,15 +118,34 @@ export function uniqueEmail(label = 'user'): string {
 
 export const GOOD_PASSWORD = 'correct horse battery';
 
-/** Signs up a new user (with a new department) and returns a cookie-carrying agent. */
+/**
+ * Signs up a new user (with a new department) the way a person does: asks for the account,
+ * reads the confirmation link from the test file's mail stand-in, opens it, and returns the
+ * cookie-carrying agent. The app must send its mail to that stand-in (createTestApp does).
+ */
 export async function signUp(app: Express, options: { email?: string; name?: string; department?: string } = {}) {
+  if (!fakes) throw new Error('signUp needs the mail stand-in of createTestApp');
+  const mail = (await fakes).mail;
   const agent = request.agent(app);
   const email = options.email ?? uniqueEmail();
-  const res = await agent
+  const asked = await agent
     .post('/api/auth/sign-up')
     .send({ email, password: GOOD_PASSWORD, name: options.name ?? 'Test Person', department: options.department ?? `Dept ${email}` });
-  if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
+  if (asked.status !== 202) throw new Error(`sign-up failed: ${asked.status} ${JSON.stringify(asked.body)}`);
+  const message = await mail.waitFor((m) => m.to.includes(email) && m.subject === SIGN_UP_SUBJECT);
+  const res = await agent.post('/api/auth/sign-up/confirm').send({ token: linkToken(message, '/confirm-sign-up') });
+  if (res.status !== 201) throw new Error(`sign-up confirmation failed: ${res.status} ${JSON.stringify(res.body)}`);
   return { agent, email, me: res.body as { user: { id: string }; department: { id: string; name: string } } };
+}
+export const SIGN_UP_SUBJECT = 'Confirm your Tidefield account';
+
+/** A new admin of a new department, made in the database directly (for an app whose mail goes nowhere a test can read). */
+export async function signUpWithoutMail(ctx: TestContext) {
+  const { insertDepartment } = await import('../../server/modules/departments/departments.repository.ts');
+  const { newId } = await import('../../server/db/columns.ts');
+  const departmentId = newId();
+  await insertDepartment(ctx.database.db, { id: departmentId, name: `Dept ${departmentId}`, createdAt: new Date() });
+  return { departmentId, ...(await addMember(ctx, departmentId, 'admin')) };
 }
 
 /** Adds a new user to a department with a role (the way an accepted invitation would) and signs them in. */

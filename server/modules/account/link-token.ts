@@ -10,7 +10,7 @@ export function newLinkToken(): { token: string; hash: string } {
 
 export const hashLinkToken = sha256Hex;
 
-type LinkKind = 'invitation' | 'password-reset link';
+type LinkKind = 'invitation' | 'password-reset link' | 'sign-up link';
 
 export const linkUnknown = (kind: LinkKind) =>
   new AppError({ code: 'invalid_link', status: 404, field: 'token', message: `This ${kind} is not valid. Check that the whole link from the e-mail was opened, or ask for a new one.` });

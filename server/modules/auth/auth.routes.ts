@@ -2,7 +2,6 @@ import { Router } from 'express';
 import {
   meResponseSchema,
   signInBodySchema,
-  signUpBodySchema,
   switchDepartmentBodySchema,
 } from '../../../shared/contracts/auth.ts';
 import type { Config } from '../../config.ts';
@@ -26,36 +25,10 @@ function signInLimiters(config: Config) {
   ];
 }
 
-/** Sign-ups per client address and per e-mail address in an hour. */
-function signUpLimiters(config: Config) {
-  const windowMs = 3_600_000;
-  return [
-    limiter({
-      name: 'signUpClient', windowMs, limit: config.SIGN_UP_LIMIT, key: clientKey,
-      message: (m) => `Too many sign-ups from your network. Try again in ${minutesText(m)}.`,
-    }),
-    limiter({
-      name: 'signUpEmail', windowMs, limit: SIGN_UPS_PER_EMAIL, key: bodyEmailKey,
-      message: (m) => `Too many sign-ups for this e-mail address. Check your mail, or try again in ${minutesText(m)}.`,
-    }),
-  ];
-}
-const SIGN_UPS_PER_EMAIL = 3;
-
 export function authRoutes(registry: RouteRegistry, config: Config, auth: AuthService, sessions: SessionStore): Router {
   const router = Router();
   const mount = '/api';
   const tag = 'Accounts';
-
-  defineRoute(router, registry, mount, {
-    method: 'post', path: '/auth/sign-up', tag, access: 'public', status: 201,
-    summary: 'Create an account and a department with you as its admin; signs you in',
-    body: signUpBodySchema, response: meResponseSchema, before: signUpLimiters(config),
-  }, async ({ body, req, res }) => {
-    const { session, me } = await auth.signUp(body);
-    res.append('Set-Cookie', sessions.cookieFor(session, req.secure));
-    return me;
-  });
 
   defineRoute(router, registry, mount, {
     method: 'post', path: '/auth/sign-in', tag, access: 'public',

@@ -1,5 +1,5 @@
-import type { MeResponse, SignInBody, SignUpBody } from '../../../shared/contracts/auth.ts';
-import type { Db } from '../../db/client.ts';
+import type { MeResponse, SignInBody } from '../../../shared/contracts/auth.ts';
+import type { Db, Tx } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { recordAudit } from '../audit/audit.service.ts';
 import { insertDepartment, insertMembership } from '../departments/departments.repository.ts';
@@ -7,7 +7,7 @@ import type { RequestAuth } from '../../lib/request-auth.ts';
 import { notAMember, wrongCredentials } from './auth.errors.ts';
 import { findUserByEmail, insertUser, setActiveDepartment } from './auth.repository.ts';
 import { loadCaller } from './caller.ts';
-import { dummyPasswordHash, hashPassword, verifyPassword } from './password.ts';
+import { dummyPasswordHash, verifyPassword } from './password.ts';
 import type { SessionStore } from './session.ts';
 
 export function toMe(auth: Pick<RequestAuth, 'user' | 'department' | 'role' | 'memberships'>): MeResponse {
@@ -15,14 +15,21 @@ export function toMe(auth: Pick<RequestAuth, 'user' | 'department' | 'role' | 'm
 }
 
 export function createAuthService(db: Db, sessions: SessionStore) {
-  /** Creates a user; with `department` set, also a department with the user as its admin. */
-  async function createAccount(input: { email: string; password: string; name: string; department?: string }) {
-    const passwordHash = await hashPassword(input.password);
+  /**
+   * Creates a user; with `department` set, also a department with the user as its admin.
+   * `first` runs in the same transaction before the user is inserted (a sign-up link is consumed
+   * there, so that a link creates at most one account).
+   */
+  async function createAccount(
+    input: { email: string; passwordHash: string; name: string; department?: string },
+    first?: (tx: Tx) => Promise<void>,
+  ) {
     const userId = newId();
     const departmentId = input.department ? newId() : null;
     const now = new Date();
     await db.transaction(async (tx) => {
-      await insertUser(tx, { id: userId, email: input.email, name: input.name, passwordHash, createdAt: now });
+      await first?.(tx);
+      await insertUser(tx, { id: userId, email: input.email, name: input.name, passwordHash: input.passwordHash, createdAt: now });
       if (departmentId && input.department) {
         await insertDepartment(tx, { id: departmentId, name: input.department, createdAt: now });
         await insertMembership(tx, { userId, departmentId, role: 'admin', createdAt: now });
@@ -40,10 +47,11 @@ export function createAuthService(db: Db, sessions: SessionStore) {
   return {
     createAccount,
 
-    async signUp(body: SignUpBody) {
-      const { userId, departmentId } = await createAccount(body);
+    /** Creates the account of a confirmed sign-up and opens its first session. */
+    async createAccountAndSignIn(input: { email: string; passwordHash: string; name: string; department: string }, first?: (tx: Tx) => Promise<void>) {
+      const { userId, departmentId } = await createAccount(input, first);
       const session = await sessions.create(userId, departmentId);
-      return { session, me: await describe({ id: userId, email: body.email, name: body.name }, departmentId) };
+      return { session, me: await describe({ id: userId, email: input.email, name: input.name }, departmentId) };
     },
 
     /** Checks the password (with the same work whether or not the address exists) and opens a session. */

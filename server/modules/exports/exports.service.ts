@@ -1,4 +1,4 @@
-import { parseScenario, type Scenario } from '../../../shared/contracts/scenario.ts';
+import type { Scenario } from '../../../shared/contracts/scenario.ts';
 import { EXPORT_FORMATS, type ExportListing, type ExportQuery } from '../../../shared/contracts/exports.ts';
 import { publicBaseUrl, type Config } from '../../config.ts';
 import type { Db } from '../../db/client.ts';
@@ -68,7 +68,7 @@ export function createExportsService(deps: { db: Db; config: Config; runs: RunsS
   async function sweepSource(departmentId: string, id: string) {
     const detail = await sweeps.detailIn(departmentId, id);
     const first = (await runsOfSweep(db, id)).find((r) => r.sweepPointIndex === 0);
-    const scenario: Scenario | null = first ? parseScenario(first.snapshot) : null;
+    const scenario: Scenario | null = first ? first.snapshot : null;
     const provenance: ExportProvenance = {
       kind: 'sweep', id,
       engineVersion: first?.engineVersion ?? 'unknown',

@@ -220,3 +220,35 @@ export function emailChangeEmail(input: { name: string; oldEmail: string; link: 
     }),
   };
 }
+
+/** To a new address that was used to sign up: the link that creates the account. */
+export function signUpConfirmEmail(input: { name: string; departmentName: string; link: string; expiresAt: Date }): Content {
+  return {
+    subject: 'Confirm your Tidefield account',
+    ...render({
+      heading: 'Confirm your e-mail address',
+      paragraphs: [
+        `Hello ${input.name}, someone (we hope you) asked for a Tidefield account with this address, with a new department called ${input.departmentName}.`,
+        `Your account and the department are created when you open the link. It works once and until ${formatUtc(input.expiresAt)}.`,
+      ],
+      action: { label: 'Create my account', url: input.link },
+      footer: 'If you did not ask for this, ignore this e-mail: no account is created unless the link is opened.',
+    }),
+  };
+}
+
+/** To an address that already has an account, when it was used to sign up again. */
+export function signUpExistingEmail(input: { name: string; signInLink: string; resetLink: string }): Content {
+  return {
+    subject: 'You already have a Tidefield account',
+    ...render({
+      heading: 'This address already has an account',
+      paragraphs: [
+        `Hello ${input.name}, someone (perhaps you) tried to create a Tidefield account with this address, which already has one, so nothing was created or changed.`,
+        `To use your account, sign in at ${input.signInLink}. If you have forgotten your password, ask for a new one with the button below.`,
+      ],
+      action: { label: 'Choose a new password', url: input.resetLink },
+      footer: 'If this was not you, ignore this e-mail: your account and password stay as they are.',
+    }),
+  };
+}

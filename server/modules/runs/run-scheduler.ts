@@ -1,7 +1,7 @@
 import type { Logger } from 'pino';
 import type { RunProgressEvent, RunStatus } from '../../../shared/contracts/runs.ts';
 import { scenarioAtPoint } from '../../../shared/contracts/point-scenario.ts';
-import { parseScenario, type Scenario } from '../../../shared/contracts/scenario.ts';
+import type { Scenario } from '../../../shared/contracts/scenario.ts';
 import { scenarioHash } from '../../../shared/engine/kernel/scenario-hash.ts';
 import { addTallyInto, emptyTallyFor, type ChunkTally } from '../../../shared/engine/kernel/tally.ts';
 import { buildResult } from '../../../shared/engine/result/build-result.ts';
@@ -149,7 +149,7 @@ export function createRunScheduler(deps: {
   async function execute(runId: string, entry: ActiveRun): Promise<void> {
     const run = await loadRun(db, runId);
     if (!run) return;
-    const scenario = parseScenario(run.snapshot);
+    const scenario = run.snapshot;
     const checkpoint = await loadCheckpoint(db, runId);
     const done = new ChunkSet(checkpoint?.doneChunks ?? []);
     // A multi-point job computes every point from the same draws; the run itself is its first point.

@@ -162,7 +162,7 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
         scenarioId: source.scenarioId,
         scenarioVersion: source.scenarioVersion,
         scenarioName: source.scenarioName,
-        snapshot: snapshot as unknown as Record<string, unknown>,
+        snapshot,
         scenarioHash: scenarioHash(snapshot),
         seed: snapshot.seed,
         systems: snapshot.systems,
@@ -259,7 +259,7 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       }
       const checkpoint = await loadCheckpoint(db, id);
       if (!checkpoint) throw conflict('The run kept no computed chunks to continue from; start it again instead.');
-      const snapshot = parseScenario(found.run.snapshot);
+      const snapshot = found.run.snapshot;
       const source = { scenarioId: found.run.scenarioId, scenarioVersion: found.run.scenarioVersion, scenarioName: found.run.scenarioName };
       const resumedId = await db.transaction(async (tx) => {
         const newRunId = await enqueue(auth, source, snapshot, { tx });
@@ -292,8 +292,7 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       const department = departmentOf(auth);
       const { run, result } = await finishedResult(department.id, id);
       const sample = await samples.visible(department.id, sampleId);
-      const scenario = parseScenario(run.snapshot);
-      return compareRunWithSample(result, sample, scenario.field.thresholdMG);
+      return compareRunWithSample(result, sample, run.snapshot.field.thresholdMG);
     },
 
     async impliedOccurrence(auth: RequestAuth, id: string, sampleId: string) {
@@ -360,7 +359,7 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
      */
     async methods(auth: RequestAuth, id: string) {
       const { run, result } = await finishedResult(departmentOf(auth).id, id);
-      const paragraph = methodsParagraph(parseScenario(run.snapshot), result, id);
+      const paragraph = methodsParagraph(run.snapshot, result, id);
       const point = await sweepPointOf(run);
       if (!point) return paragraph;
       return `This run is grid point ${point.number} of ${point.pointCount} of the parameter sweep "${point.sweepName}", with ${sweepPointText(point.values)}; everything below describes the scenario at these values. ${paragraph}`;
@@ -376,7 +375,7 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       const found = await findRun(db, department.id, id);
       if (!found) throw runNotFound();
       const { run } = found;
-      const snapshot = await snapshotOf(department.id, parseScenario(run.snapshot), overrides);
+      const snapshot = await snapshotOf(department.id, run.snapshot, overrides);
       const point = await sweepPointOf(run);
       const scenarioName = (point ? `${run.scenarioName} · ${sweepPointText(point.values)}` : run.scenarioName).slice(0, 160);
       const newId = await enqueue(auth, { scenarioId: run.scenarioId, scenarioVersion: run.scenarioVersion, scenarioName }, snapshot);

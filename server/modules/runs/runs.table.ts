@@ -1,7 +1,18 @@
-import { bigint, char, double, index, int, json, longtext, mysqlEnum, mysqlTable, primaryKey, text, varchar } from 'drizzle-orm/mysql-core';
+import { bigint, char, customType, double, index, int, json, longtext, mysqlEnum, mysqlTable, primaryKey, text, varchar } from 'drizzle-orm/mysql-core';
+import { parseScenario, type Scenario } from '../../../shared/contracts/scenario.ts';
 import { RUN_STATUSES } from '../../../shared/contracts/runs.ts';
 import { idColumn, timestamp } from '../../db/columns.ts';
 
+/**
+ * A run's scenario as a JSON column that reads back as a typed `Scenario`: the stored document
+ * (perhaps written by an older version) is parsed once, when the row is loaded, so that code
+ * using a run never parses it again.
+ */
+const scenarioJson = customType<{ data: Scenario; driverData: string }>({
+  dataType: () => 'json',
+  toDriver: (scenario) => JSON.stringify(scenario),
+  fromDriver: (stored) => parseScenario(typeof stored === 'string' ? JSON.parse(stored) : stored),
+});
 
 /** One seeded Monte Carlo run of a scenario snapshot. */
 export const runs = mysqlTable(
@@ -14,7 +25,7 @@ export const runs = mysqlTable(
     scenarioVersion: int('scenario_version').notNull(),
     scenarioName: varchar('scenario_name', { length: 160 }).notNull(),
     /** The parsed scenario exactly as run (stored table rows inlined, seed and systems set). */
-    snapshot: json('snapshot').$type<Record<string, unknown>>().notNull(),
+    snapshot: scenarioJson('snapshot').notNull(),
     scenarioHash: char('scenario_hash', { length: 64 }).notNull(),
     seed: varchar('seed', { length: 200 }).notNull(),
     systems: bigint('systems', { mode: 'number' }).notNull(),

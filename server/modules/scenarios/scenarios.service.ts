@@ -1,8 +1,9 @@
 import type {
-  CreateScenarioBody,
+  CreateScenarioRequest,
   ScenarioDetail,
+  ScenarioDocument,
   ScenarioSummary,
-  UpdateScenarioBody,
+  UpdateScenarioRequest,
 } from '../../../shared/contracts/scenarios-api.ts';
 import { parseScenario, ScenarioValidationError, type Scenario } from '../../../shared/contracts/scenario.ts';
 import { listPriceCredits } from '../../../shared/contracts/pricing.ts';
@@ -28,8 +29,8 @@ import { requireUniqueName, uniqueName } from './scenario-names.ts';
 /** Checks that a stored occurrence table a document names belongs to the department. */
 export type TableExists = (departmentId: string, tableId: string) => Promise<boolean>;
 
-/** Validates a document; errors name the field as document.<path>. */
-export function validateDocument(document: unknown): Scenario {
+/** Parses a stored document (perhaps written by an older version) once, when it is loaded. */
+function storedScenario(document: unknown): Scenario {
   try {
     return parseScenario(document);
   } catch (error) {
@@ -54,8 +55,8 @@ function summary(row: { scenario: ScenarioRow; version: ScenarioVersionRow; owne
 }
 
 export function createScenariosService(db: Db, tableExists: TableExists) {
-  async function checkedDocument(departmentId: string, document: Record<string, unknown>) {
-    const parsed = validateDocument(document);
+  /** The one check the edge cannot make: a stored occurrence table the document names belongs to the department. */
+  async function checkedDocument(departmentId: string, { scenario: parsed }: ScenarioDocument) {
     const tableId = parsed.companions.tableId;
     if (tableId && !(await tableExists(departmentId, tableId))) {
       throw invalidDocument([{ field: 'companions.tableId', message: `companions.tableId names no occurrence table of this department (got "${tableId}")` }]);
@@ -63,10 +64,17 @@ export function createScenariosService(db: Db, tableExists: TableExists) {
     return parsed;
   }
 
-  async function detail(departmentId: string, id: string, version?: number): Promise<ScenarioDetail> {
+  async function load(departmentId: string, id: string, version?: number) {
     const row = await findScenario(db, departmentId, id, version);
     if (!row) throw version ? versionNotFound() : scenarioNotFound();
-    const resolved = parseScenario(row.version.document);
+    return { row, resolved: storedScenario(row.version.document) };
+  }
+
+  async function detail(departmentId: string, id: string, version?: number): Promise<ScenarioDetail> {
+    return toDetail(await load(departmentId, id, version));
+  }
+
+  function toDetail({ row, resolved }: Awaited<ReturnType<typeof load>>): ScenarioDetail {
     return {
       ...summary(row),
       document: row.version.document,
@@ -76,7 +84,7 @@ export function createScenariosService(db: Db, tableExists: TableExists) {
     };
   }
 
-  async function create(auth: RequestAuth, body: CreateScenarioBody): Promise<{ id: string }> {
+  async function create(auth: RequestAuth, body: CreateScenarioRequest): Promise<{ id: string }> {
     const department = departmentOf(auth);
     const parsed = await checkedDocument(department.id, body.document);
     await requireUniqueName(db, department.id, body.name);
@@ -86,7 +94,7 @@ export function createScenariosService(db: Db, tableExists: TableExists) {
       await insertScenario(
         tx,
         { id, departmentId: department.id, ownerUserId: auth.user.id, name: body.name, currentVersion: 1, createdAt: now, updatedAt: now },
-        { scenarioId: id, version: 1, document: body.document, documentHash: scenarioHash(parsed), note: body.note ?? null, createdByUserId: auth.user.id, createdAt: now },
+        { scenarioId: id, version: 1, document: body.document.written, documentHash: scenarioHash(parsed), note: body.note ?? null, createdByUserId: auth.user.id, createdAt: now },
       );
       await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'scenario.created', target: id });
     });
@@ -98,9 +106,8 @@ export function createScenariosService(db: Db, tableExists: TableExists) {
     detail: (auth: RequestAuth, id: string, version?: number) => detail(departmentOf(auth).id, id, version),
     /** For the run service: the department's scenario at a version, parsed. */
     async resolve(departmentId: string, id: string, version?: number) {
-      const row = await findScenario(db, departmentId, id, version);
-      if (!row) throw scenarioNotFound();
-      return { scenario: parseScenario(row.version.document), name: row.scenario.name, version: row.version.version };
+      const { row, resolved } = await load(departmentId, id, version);
+      return { scenario: resolved, name: row.scenario.name, version: row.version.version };
     },
 
     async list(auth: RequestAuth): Promise<ScenarioSummary[]> {
@@ -121,7 +128,7 @@ export function createScenariosService(db: Db, tableExists: TableExists) {
     },
 
     /** Renames and/or saves a new version; an unchanged document makes no new version. */
-    async update(auth: RequestAuth, id: string, body: UpdateScenarioBody): Promise<ScenarioDetail> {
+    async update(auth: RequestAuth, id: string, body: UpdateScenarioRequest): Promise<ScenarioDetail> {
       const department = departmentOf(auth);
       const parsed = body.document ? await checkedDocument(department.id, body.document) : undefined;
       if (body.name) await requireUniqueName(db, department.id, body.name, id);
@@ -133,10 +140,10 @@ export function createScenariosService(db: Db, tableExists: TableExists) {
         let version = locked.currentVersion;
         if (body.document && parsed) {
           const hash = scenarioHash(parsed);
-          const unchanged = current && hash === current.version.documentHash && JSON.stringify(current.version.document) === JSON.stringify(body.document);
+          const unchanged = current && hash === current.version.documentHash && JSON.stringify(current.version.document) === JSON.stringify(body.document.written);
           if (!unchanged) {
             version += 1;
-            await insertVersion(tx, { scenarioId: id, version, document: body.document, documentHash: hash, note: body.note ?? null, createdByUserId: auth.user.id, createdAt: now });
+            await insertVersion(tx, { scenarioId: id, version, document: body.document.written, documentHash: hash, note: body.note ?? null, createdByUserId: auth.user.id, createdAt: now });
           }
         }
         await updateScenarioRow(tx, id, { currentVersion: version, updatedAt: now, ...(body.name ? { name: body.name } : {}) });
@@ -147,8 +154,13 @@ export function createScenariosService(db: Db, tableExists: TableExists) {
 
     async clone(auth: RequestAuth, id: string, name?: string): Promise<{ id: string }> {
       const departmentId = departmentOf(auth).id;
-      const source = await detail(departmentId, id);
-      return create(auth, { name: name ?? (await uniqueName(db, departmentId, `Copy of ${source.name}`.slice(0, 160))), document: source.document, note: `Cloned from "${source.name}" version ${source.currentVersion}` });
+      const { row, resolved } = await load(departmentId, id);
+      const sourceName = row.scenario.name;
+      return create(auth, {
+        name: name ?? (await uniqueName(db, departmentId, `Copy of ${sourceName}`.slice(0, 160))),
+        document: { written: row.version.document, scenario: resolved },
+        note: `Cloned from "${sourceName}" version ${row.scenario.currentVersion}`,
+      });
     },
 
     async remove(auth: RequestAuth, id: string): Promise<void> {

@@ -1,6 +1,5 @@
 import { createHash, randomBytes } from 'node:crypto';
 import { and, desc, eq, isNull } from 'drizzle-orm';
-import { parseScenario } from '../../../shared/contracts/scenario.ts';
 import type { ShareKind, ShareLinkSummary, SharedObject } from '../../../shared/contracts/shares.ts';
 import { publicBaseUrl, type Config } from '../../config.ts';
 import type { Db } from '../../db/client.ts';
@@ -122,7 +121,7 @@ export function createSharesService(deps: { db: Db; config: Config; runs: RunsSe
             createdAt: run.createdAt.toISOString(), finishedAt: run.finishedAt?.toISOString() ?? null,
           },
           result,
-          methods: methodsParagraph(parseScenario(run.snapshot), result, run.id),
+          methods: methodsParagraph(run.snapshot, result, run.id),
           exports: await this.exportOf(secret, {}, link).then((a) => ('listing' in a ? a.listing : { formats: [], tables: [] })),
         };
       }

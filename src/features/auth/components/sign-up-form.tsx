@@ -5,12 +5,31 @@ import { TextField } from '../../../components/ui/text-field.tsx';
 import { useSchemaForm } from '../../../hooks/use-schema-form.ts';
 import { useSignUp } from '../api/sign-up.ts';
 
-export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
+/** Asks for an account; afterwards it shows the server's "check your mail" answer in its place. */
+export function SignUpForm() {
   const signUp = useSignUp();
   const form = useSchemaForm(signUpBodySchema, async (values) => {
     await signUp.mutateAsync(values);
-    onSignedUp();
   });
+
+  if (signUp.isSuccess) {
+    return (
+      <div className="flex flex-col gap-3" role="status" aria-label="Check your mail">
+        <Alert tone="success" message={signUp.data.message} />
+        {signUp.data.localMailbox ? (
+          <p className="text-sm text-foam-300">
+            This Tidefield keeps its e-mail on this machine (the local mail stand-in): the message is in{' '}
+            <a href={signUp.data.localMailbox} target="_blank" rel="noreferrer">
+              {signUp.data.localMailbox}
+            </a>
+            .
+          </p>
+        ) : (
+          <p className="text-sm text-foam-300">No mail after a few minutes? Look in the spam folder, or ask again with the same address.</p>
+        )}
+      </div>
+    );
+  }
 
   return (
     <form {...form.formProps} className="flex flex-col gap-5" aria-label="Create an account">
