@@ -1,5 +1,5 @@
 import type { Scenario } from '../../contracts/scenario.ts';
-import { formatNumber } from '../../contracts/schema-issues.ts';
+import { formatNumber } from '../../contracts/field-issues.ts';
 import { finalMassMsun, MAX_WHITE_DWARF_MSUN } from '../physics/ifmr-piecewise.ts';
 import { ifmrSegments, lightestWhiteDwarfProgenitorMsun, preparedLifetime } from '../kernel/scenario-physics.ts';
 import { BINS } from '../kernel/bins.ts';

@@ -1,5 +1,5 @@
 import { useState, type ReactNode } from 'react';
-import { formatNumber } from '../../../../shared/contracts/schema-issues.ts';
+import { formatNumber } from '../../../../shared/contracts/field-issues.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, controlClasses } from '../../../components/ui/field.tsx';
 import { Select } from '../../../components/ui/select.tsx';
