@@ -1,4 +1,8 @@
-import { shortCitations, type CitationKey } from './citations.ts';
+import { shortCitations } from './citations.ts';
+import { PUBLISHED_IFMRS } from './ifmr-relations.ts';
+import type { MethodOption, Options } from './method-option.ts';
+
+export type { MethodOption } from './method-option.ts';
 
 /**
  * Every choice the scenario document offers between published methods (each discriminated union),
@@ -8,24 +12,6 @@ import { shortCitations, type CitationKey } from './citations.ts';
  * methods list read these, so they can never cite different sources for the same choice;
  * method-choices.test.ts checks every option's value and template against the schema.
  */
-export interface MethodOption {
-  /** The discriminator's value in the scenario document. */
-  value: string;
-  label: string;
-  /** One line on what the option does. */
-  summary: string;
-  /** Published sources, cited by the builder and the methods paragraph alike. */
-  cites: readonly CitationKey[];
-  /** The object placed in the document when the option is chosen. */
-  template: Record<string, unknown>;
-  /** The methods paragraph's words for the option, from its parsed values (no citation; see `clause`). */
-  words: (o: Options) => string;
-}
-
-// The parsed option object; each `words` reads only the fields of its own variant.
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
-type Options = Record<string, any>;
-
 export interface MethodChoice {
   /** Where the union sits in the document. */
   path: readonly (string | number)[];
@@ -91,15 +77,8 @@ export const IFMR_CHOICE: MethodChoice = {
   path: ['primaries', 'ifmr'],
   discriminator: 'relation',
   options: [
-    {
-      value: 'cummings2018',
-      label: 'Cummings et al.',
-      cites: ['cummings'],
-      summary: 'Piecewise linear, calibrated on MIST or PARSEC isochrones.',
-      template: { relation: 'cummings2018', calibration: 'mist' },
-      words: (o) => `the ${String(o.calibration).toUpperCase()}-based piecewise-linear initial–final mass relation`,
-    },
-    { value: 'kalirai2008', label: 'Kalirai et al.', cites: ['kalirai'], summary: 'Mf = 0.109 Mi + 0.394 Msun (fitted over about 1.16–6.5 Msun).', template: { relation: 'kalirai2008' }, words: () => 'the initial–final mass relation Mf = 0.109 Mi + 0.394 Msun' },
+    // The published relations are declared, with their schema variants and coefficients, in ifmr-relations.ts.
+    ...PUBLISHED_IFMRS,
     {
       value: 'table',
       label: 'Your table',

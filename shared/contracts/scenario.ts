@@ -3,6 +3,7 @@ import { giantTrackSchema } from './giant-track.ts';
 import { companionRowSchema, emptyRangeMessage, rangeSchema } from './occurrence-table.ts';
 import { formatNumber, integer, number, parseFields, type FieldIssue } from './field-issues.ts';
 import { boundsAt } from './schema-bounds.ts';
+import { PUBLISHED_IFMR_SCHEMAS } from './ifmr-relations.ts';
 
 /**
  * The scenario document: one seeded Monte Carlo population of white-dwarf progenitors and
@@ -62,10 +63,8 @@ const lifetimeSchema = z.discriminatedUnion('kind', [
 ]);
 
 const ifmrSchema = z.discriminatedUnion('relation', [
-  /** Kalirai et al. (2008): Mf = 0.109 Mi + 0.394. */
-  z.strictObject({ relation: z.literal('kalirai2008') }),
-  /** Cummings et al. (2018): piecewise linear, MIST- or PARSEC-based. */
-  z.strictObject({ relation: z.literal('cummings2018'), calibration: z.enum(['mist', 'parsec']).default('mist') }),
+  /** The published relations (Kalirai et al. 2008, Cummings et al. 2018, …), declared in ifmr-relations.ts. */
+  ...PUBLISHED_IFMR_SCHEMAS,
   /** A user table of (initial, final) masses, interpolated linearly. */
   z.strictObject({
     relation: z.literal('table'),
