@@ -1,6 +1,6 @@
 /**
  * Typed application errors. Every module declares its own factories on top of these; the
- * error middleware turns them into `{ error: { code, message, field? } }` with `status`.
+ * error middleware turns them into `{ error: { code, message, field?, details?, issues? } }` with `status`.
  * `expose` is false for errors whose message must not reach the client (they become a
  * generic 500 and are logged); 4xx, 502 and 503 are exposed unless said otherwise.
  */
@@ -13,6 +13,8 @@ export class AppError extends Error {
   readonly headers: Record<string, string> | undefined;
   /** Row-level problems (uploads): listed in the error body as `details`. */
   readonly details: { line: number; column?: string; message: string }[] | undefined;
+  /** Every problem of a document at once, each naming its field (the first is also `field` and `message`). */
+  readonly issues: { field: string; message: string }[] | undefined;
 
   constructor(options: {
     code: string;
@@ -23,6 +25,7 @@ export class AppError extends Error {
     cause?: unknown;
     headers?: Record<string, string>;
     details?: { line: number; column?: string; message: string }[];
+    issues?: { field: string; message: string }[];
   }) {
     super(options.message, { cause: options.cause });
     this.code = options.code;
@@ -32,6 +35,7 @@ export class AppError extends Error {
     this.expose = options.expose ?? (options.status < 500 || options.status === 502 || options.status === 503);
     this.headers = options.headers;
     this.details = options.details;
+    this.issues = options.issues;
   }
 }
 

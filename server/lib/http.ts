@@ -2,10 +2,8 @@ import type { NextFunction, Request, RequestHandler, Response, Router } from 'ex
 import type { z } from 'zod';
 import { roleAtLeast, type Role } from '../../shared/contracts/roles.ts';
 import type { TokenScope } from '../../shared/contracts/tokens.ts';
-import { describeIssues } from '../../shared/contracts/schema-issues.ts';
+import { projectWords } from '../../shared/contracts/field-issues.ts';
 import { AppError, badRequest, forbidden, unauthenticated } from './errors.ts';
-
-const ZOD_DEFAULT_MESSAGE = /^(Too (big|small)|Invalid (input|option|element|key|value|union)|Expected)/;
 import type { RequestAuth } from './request-auth.ts';
 
 /**
@@ -95,25 +93,17 @@ function refuseHostileValues(value: unknown, path: string[] = [], depth = 0): vo
   }
 }
 
-/** Parses one part of the request with its shared schema; a ZodError reaches the error middleware as a 400. */
+/**
+ * Parses one part of the request with its shared schema, in the project's words (field-issues.ts);
+ * a ZodError reaches the error middleware, which answers 400 with every problem.
+ */
 function parsePart(schema: z.ZodType | undefined, value: unknown, where: 'body' | 'query' | 'params'): unknown {
   // A missing body is validated as undefined ("body is required"); missing params/query as {}.
   if (!schema) return undefined;
   refuseHostileValues(value);
   const input = value ?? (where === 'body' ? undefined : {});
-  const result = schema.safeParse(input, { reportInput: true });
+  const result = schema.safeParse(input, { error: projectWords });
   if (result.success) return result.data;
-  const first = result.error.issues[0];
-  // zod's own wording ("Too big: expected number to be <=1") does not say which field or range:
-  // rephrase it from the schema's bounds; messages written in the contracts pass through as they are.
-  if (first && first.code !== 'unrecognized_keys' && ZOD_DEFAULT_MESSAGE.test(first.message)) {
-    const [described] = describeIssues(schema, input, [first]);
-    const field = first.path.map(String).join('.');
-    if (described && field) {
-      const message = described.message.startsWith(described.field) ? field + described.message.slice(described.field.length) : described.message;
-      throw badRequest(message, field);
-    }
-  }
   throw result.error;
 }
 

@@ -1,22 +1,8 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Logger } from 'pino';
-import { ZodError, type z } from 'zod';
+import { ZodError } from 'zod';
+import { dottedPath, fieldIssues } from '../../shared/contracts/field-issues.ts';
 import { AppError, databaseUnavailable, isDatabaseUnavailable } from '../lib/errors.ts';
-
-/** Turns one zod issue into a message that names the field (its dotted path). */
-export function describeIssue(issue: z.core.$ZodIssue): { field: string | undefined; message: string } {
-  const path = issue.path.map(String).join('.');
-  if (issue.code === 'unrecognized_keys') {
-    const key = issue.keys[0] ?? '';
-    const field = path ? `${path}.${key}` : key;
-    return { field, message: `${field} is not a field this request accepts` };
-  }
-  if (issue.code === 'invalid_type' && issue.input === undefined) {
-    return { field: path || undefined, message: issue.message.includes('required') ? issue.message : `${path || 'body'} is required` };
-  }
-  const startsWithField = path && issue.message.startsWith(path.split('.').pop()!);
-  return { field: path || undefined, message: startsWithField || !path ? issue.message : `${path}: ${issue.message}` };
-}
 
 /** Answers unknown /api paths with the JSON error shape instead of the client app. */
 export const apiNotFound: RequestHandler = (req, _res, next) =>
@@ -34,9 +20,11 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     res.removeHeader('Content-Disposition');
     res.type('application/json');
     if (error instanceof ZodError) {
-      const first = error.issues[0];
-      const { field, message } = first ? describeIssue(first) : { field: undefined, message: 'Invalid input' };
-      res.status(400).json({ error: { code: 'invalid_input', message, ...(field ? { field } : {}) } });
+      // The first problem as message and field (what a form shows first), and every problem in `issues`.
+      const issues = fieldIssues(error.issues, dottedPath);
+      const first = issues[0];
+      const field = first && first.field !== 'body' ? first.field : undefined;
+      res.status(400).json({ error: { code: 'invalid_input', message: first?.message ?? 'Invalid input', ...(field ? { field } : {}), issues } });
       return;
     }
     if (!(error instanceof AppError) && isDatabaseUnavailable(error)) {
@@ -47,7 +35,13 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     if (error instanceof AppError && error.expose) {
       for (const [k, v] of Object.entries(error.headers ?? {})) res.setHeader(k, v);
       res.status(error.status).json({
-        error: { code: error.code, message: error.message, ...(error.field ? { field: error.field } : {}), ...(error.details ? { details: error.details } : {}) },
+        error: {
+          code: error.code,
+          message: error.message,
+          ...(error.field ? { field: error.field } : {}),
+          ...(error.details ? { details: error.details } : {}),
+          ...(error.issues ? { issues: error.issues } : {}),
+        },
       });
       return;
     }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { number } from './field-issues.ts';
 
 /**
  * Options of the analytic giant-branch + AGB track (`giant.kind = "track"`).
@@ -13,13 +14,13 @@ export const giantTrackSchema = z.object({
    * red giant branch and the AGB; McDonald & Zijlstra (2015) find 0.477 ± 0.070 from globular
    * clusters.
    */
-  reimersEta: z.number().min(0.05).max(3).default(0.477),
+  reimersEta: number(0.05, 3).default(0.477),
   /**
    * Zero point Mc0 of Paczyński's (1970, Acta Astron. 20, 47) AGB core-mass–luminosity relation
    * L = 59250 (Mc − Mc0) Lsun: 0.522 Msun as the relation is usually quoted, 0.495 Msun in a later
    * recalibration (both values from memory). The AGB starts where the relation gives ≈ 300 Lsun.
    */
-  agbZeroPointMsun: z.number().min(0.45).max(0.55).default(0.522),
+  agbZeroPointMsun: number(0.45, 0.55).default(0.522),
   /**
    * Late-AGB superwind that strips what is left of the envelope. On the AGB the wind is the
    * larger of Reimers and Blöcker; with `none` the envelope left when the core reaches the
@@ -31,7 +32,7 @@ export const giantTrackSchema = z.object({
   superwind: z
     .discriminatedUnion('kind', [
       /** Blöcker (1995, A&A 297, 727) rate η_B · 4.83×10⁻⁹ M_ZAMS^−2.1 L^2.7 × (Reimers with η = 1), efficiency η_B. */
-      z.object({ kind: z.literal('bloecker1995'), eta: z.number().min(0.001).max(1).default(0.05) }),
+      z.object({ kind: z.literal('bloecker1995'), eta: number(0.001, 1).default(0.05) }),
       z.object({ kind: z.literal('none') }),
     ])
     .default({ kind: 'bloecker1995', eta: 0.05 }),

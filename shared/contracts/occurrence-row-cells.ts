@@ -1,6 +1,6 @@
 import { OCCURRENCE_CSV_COLUMNS } from './occurrence-tables-api.ts';
 import { companionRowSchema, type CompanionRow } from './occurrence-table.ts';
-import { describeIssues, formatNumber } from './schema-issues.ts';
+import { formatNumber, parseFields } from './field-issues.ts';
 
 /**
  * One companion row as the text cells of the occurrence-table CSV (OCCURRENCE_CSV_COLUMNS), and
@@ -114,12 +114,12 @@ export function readRowCells(cells: Partial<RowCells>, parseNumber: (text: strin
     shape: Object.fromEntries(Object.entries(shape).filter(([, v]) => v !== undefined)),
   };
   for (const column of ['label', 'source', 'assumed'] as const) if (cell(column) !== '') candidate[column] = cell(column);
-  const parsed = companionRowSchema.safeParse(candidate, { reportInput: true });
+  const parsed = parseFields(companionRowSchema, candidate);
   if (parsed.success) return { ok: true, row: parsed.data };
   return {
     ok: false,
-    // describeIssues names a whole-row problem 'scenario'; it belongs to the mass columns' unit.
-    problems: describeIssues(companionRowSchema, candidate, parsed.error.issues).map((issue) => ({
+    // A whole-row problem is named 'scenario'; it belongs to the mass columns' unit.
+    problems: parsed.issues.map((issue) => ({
       column: columnOfPath(pathOfField(issue.field === 'scenario' ? '' : issue.field)),
       field: issue.field,
       message: issue.message,

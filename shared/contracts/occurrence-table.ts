@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { number } from './field-issues.ts';
 
 /**
  * A companion occurrence row and a table of rows. A row is one class of companion with a mass
@@ -7,8 +8,6 @@ import { z } from 'zod';
  * inside the row. `source` and `assumed` carry the row's provenance so that stored and
  * uploaded tables can say where their numbers come from.
  */
-
-const number = (lo: number, hi: number) => z.number().min(lo).max(hi);
 
 /** A closed range [lo, hi] whose ends lie in [min, max]; lo < hi is checked by the row. */
 export const rangeSchema = (min: number, max: number) => z.tuple([number(min, max), number(min, max)]);

@@ -74,7 +74,7 @@ describe('scenario documents of engine 1', () => {
     const b = run(old);
     expect(b.counts).toEqual(a.counts);
     expect(b.bins).toEqual(a.bins);
-    expect(b.assumptions.some((x) => x.includes('engine-1 keys') && x.includes('ignores them'))).toBe(true);
-    expect(a.assumptions.some((x) => x.includes('engine-1 keys'))).toBe(false);
+    expect(b.assumptions.some((x) => x.includes('engine-1 settings') && x.includes('ignores them'))).toBe(true);
+    expect(a.assumptions.some((x) => x.includes('engine-1 settings'))).toBe(false);
   });
 });

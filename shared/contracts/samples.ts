@@ -1,26 +1,22 @@
 import { z } from 'zod';
 import { nameSchema } from './common.ts';
+import { integer, number } from './field-issues.ts';
 
-const count = (field: string) =>
-  z
-    .number({ error: `${field} must be a whole number` })
-    .int({ error: `${field} must be a whole number` })
-    .min(0, { error: `${field} must be between 0 and 100000000` })
-    .max(1e8, { error: `${field} must be between 0 and 100000000` });
+const count = () => integer(0, 1e8);
 
 export const SAMPLE_SETTINGS = ['all', 'single', 'detachedCompanion'] as const;
 export const BIN_SETTINGS = ['single', 'wide', 'postCE', 'detachedCompanion'] as const;
 
 export const sampleBinSchema = z.discriminatedUnion('kind', [
   /** Counts among white dwarfs of one setting (e.g. 0 magnetic among 40 with a detached companion). */
-  z.strictObject({ kind: z.literal('setting'), setting: z.enum(BIN_SETTINGS), magnetic: count('magnetic'), total: count('total') }),
+  z.strictObject({ kind: z.literal('setting'), setting: z.enum(BIN_SETTINGS), magnetic: count(), total: count() }),
   /** Counts among white dwarfs with a mass in [massMinMsun, massMaxMsun). */
   z.strictObject({
     kind: z.literal('massBin'),
-    massMinMsun: z.number().min(0.1, { error: 'massMinMsun must be between 0.1 and 1.44' }).max(1.44, { error: 'massMinMsun must be between 0.1 and 1.44' }),
-    massMaxMsun: z.number().min(0.1, { error: 'massMaxMsun must be between 0.1 and 1.44' }).max(1.44, { error: 'massMaxMsun must be between 0.1 and 1.44' }),
-    magnetic: count('magnetic'),
-    total: count('total'),
+    massMinMsun: number(0.1, 1.44),
+    massMaxMsun: number(0.1, 1.44),
+    magnetic: count(),
+    total: count(),
   }),
 ]);
 export type SampleBin = z.infer<typeof sampleBinSchema>;
@@ -38,10 +34,10 @@ function checkCounts(value: { magnetic: number; total: number; bins?: SampleBin[
 
 const sampleFields = {
   name: nameSchema,
-  magnetic: count('magnetic'),
-  total: count('total'),
+  magnetic: count(),
+  total: count(),
   setting: z.enum(SAMPLE_SETTINGS).default('all'),
-  fieldThresholdMG: z.number().min(0.001, { error: 'fieldThresholdMG must be between 0.001 and 1000' }).max(1000, { error: 'fieldThresholdMG must be between 0.001 and 1000' }).optional(),
+  fieldThresholdMG: number(0.001, 1000).optional(),
   provenance: z.string().max(4000).optional(),
   bins: z.array(sampleBinSchema).max(50).optional(),
 };

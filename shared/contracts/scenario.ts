@@ -1,16 +1,17 @@
 import { z } from 'zod';
 import { giantTrackSchema } from './giant-track.ts';
 import { companionRowSchema, emptyRangeMessage, rangeSchema } from './occurrence-table.ts';
-import { describeIssues, formatNumber, numberBounds, schemaAt, type FieldIssue } from './schema-issues.ts';
+import { formatNumber, integer, number, parseFields, type FieldIssue } from './field-issues.ts';
+import { boundsAt } from './schema-bounds.ts';
+import { PUBLISHED_IFMR_SCHEMAS } from './ifmr-relations.ts';
 
 /**
  * The scenario document: one seeded Monte Carlo population of white-dwarf progenitors and
  * their companions. Units are in the names (Msun unless a name says MJup; days; Gyr; AU; MG).
- * Every numeric field has a lower and an upper bound; `parseScenario` turns zod's issues into
- * messages that name the field, the value and the allowed range.
+ * Every numeric field has a lower and an upper bound, and its checks word their own messages
+ * (`number` in field-issues.ts); `parseScenario` reports every problem, each naming its field.
+ * Defaults are written once, on the field; `.prefault` runs a parent's default through them.
  */
-
-const number = (lo: number, hi: number) => z.number().min(lo).max(hi);
 
 const LIMITS = {
   /** Upper end of the primaries' mass range: heavier stars do not end as white dwarfs. */
@@ -62,10 +63,8 @@ const lifetimeSchema = z.discriminatedUnion('kind', [
 ]);
 
 const ifmrSchema = z.discriminatedUnion('relation', [
-  /** Kalirai et al. (2008): Mf = 0.109 Mi + 0.394. */
-  z.strictObject({ relation: z.literal('kalirai2008') }),
-  /** Cummings et al. (2018): piecewise linear, MIST- or PARSEC-based. */
-  z.strictObject({ relation: z.literal('cummings2018'), calibration: z.enum(['mist', 'parsec']).default('mist') }),
+  /** The published relations (Kalirai et al. 2008, Cummings et al. 2018, …), declared in ifmr-relations.ts. */
+  ...PUBLISHED_IFMR_SCHEMAS,
   /** A user table of (initial, final) masses, interpolated linearly. */
   z.strictObject({
     relation: z.literal('table'),
@@ -77,12 +76,12 @@ const ifmrSchema = z.discriminatedUnion('relation', [
 ]);
 
 const primariesSchema = z.strictObject({
-  imf: imfSchema.default({ law: 'kroupa2001' }),
+  imf: imfSchema.prefault({ law: 'kroupa2001' }),
   /** Initial masses of the drawn primaries. */
   massRangeMsun: rangeSchema(...LIMITS.primaryMassMsun).default([0.8, 8]),
-  history: historySchema.default({ kind: 'constant', ageGyr: 10 }),
-  lifetime: lifetimeSchema.default({ kind: 'scaling', t0Gyr: 10, exponent: 2.5 }),
-  ifmr: ifmrSchema.default({ relation: 'cummings2018', calibration: 'mist' }),
+  history: historySchema.prefault({ kind: 'constant' }),
+  lifetime: lifetimeSchema.prefault({ kind: 'scaling' }),
+  ifmr: ifmrSchema.prefault({ relation: 'cummings2018' }),
 });
 
 // ---- companions and their fates ---------------------------------------------------------
@@ -123,7 +122,7 @@ const dissolutionSchema = z.discriminatedUnion('kind', [
 const disruptionSchema = z.strictObject({
   /** η in the tidal radius r_t = η R2 (M_core/M2)^(1/3); 2.44 is the fluid Roche limit. Sets the debris disc's radius of the accretion field. */
   eta: number(0.1, 5).default(2.44),
-  dissolution: dissolutionSchema.default({ kind: 'none' }),
+  dissolution: dissolutionSchema.prefault({ kind: 'none' }),
 });
 
 const lognormalFieldSchema = z.strictObject({
@@ -170,14 +169,11 @@ const closeSurvivorFieldSchema = z.strictObject({
 /** Keys of engine 1 that engine 2 accepts and ignores (the result's assumptions say so). */
 const ignoredEngine1Key = z.unknown().optional();
 
-const DEFAULT_DISRUPTION_FIELD = { kind: 'companionScaled', referenceMG: 100, referenceMassMJup: 100, slope: 0.6, widthDex: 0.5 } as const;
-const DEFAULT_CLOSE_SURVIVOR_FIELD = { kind: 'lognormal', medianMG: 30, widthDex: 0.5, maxPeriodDays: 0.5 } as const;
-
 const fieldSchema = z.strictObject({
   disruption: z
     .discriminatedUnion('kind', [lognormalFieldSchema, companionScaledFieldSchema, accretionFieldSchema])
-    .default(DEFAULT_DISRUPTION_FIELD),
-  closeSurvivor: closeSurvivorFieldSchema.default(DEFAULT_CLOSE_SURVIVOR_FIELD),
+    .prefault({ kind: 'companionScaled' }),
+  closeSurvivor: closeSurvivorFieldSchema.prefault({ kind: 'lognormal' }),
   /**
    * A field made by a companion (disruption, close survivor) counts only once the white dwarf's
    * cooling age exceeds this (a late-emerging field); 0 = at once. Fossil fields are unaffected.
@@ -197,7 +193,7 @@ const fossilSchema = z.strictObject({
   /** Log-normal main-sequence surface field: median in kG, width in dex. */
   msField: z
     .strictObject({ medianKG: number(1e-3, 1e3).default(1), widthDex: number(0, 3).default(0.5) })
-    .default({ medianKG: 1, widthDex: 0.5 }),
+    .prefault({}),
 });
 
 const channelsSchema = z.strictObject({
@@ -206,7 +202,7 @@ const channelsSchema = z.strictObject({
   closeSurvivor: z.boolean().default(false),
   /** Engine 1's core-merger channel: accepted and ignored. */
   coreMerger: ignoredEngine1Key,
-  fossil: fossilSchema.default({ enabled: false, fraction: 0.05, massRangeMsun: [1.5, 4], msField: { medianKG: 1, widthDex: 0.5 } }),
+  fossil: fossilSchema.prefault({}),
 });
 
 const selectionSchema = z.discriminatedUnion('kind', [
@@ -225,8 +221,8 @@ const selectionSchema = z.discriminatedUnion('kind', [
 ]);
 
 const observedSchema = z.strictObject({
-  magnetic: z.number().int().min(0).max(1e9),
-  total: z.number().int().min(1).max(1e9),
+  magnetic: integer(0, 1e9),
+  total: integer(1, 1e9),
   label: z.string().max(200).optional(),
 });
 
@@ -236,29 +232,14 @@ export const scenarioSchema = z
     description: z.string().max(4000).optional(),
     seed: z.string().min(1).max(200),
     /** Number of primaries drawn. */
-    systems: z.number().int().min(1e3).max(1e10).default(1e6),
-    primaries: primariesSchema.default({
-      imf: { law: 'kroupa2001' },
-      massRangeMsun: [0.8, 8],
-      history: { kind: 'constant', ageGyr: 10 },
-      lifetime: { kind: 'scaling', t0Gyr: 10, exponent: 2.5 },
-      ifmr: { relation: 'cummings2018', calibration: 'mist' },
-    }),
-    companions: companionsSchema.default({ multiplier: 1, rows: [] }),
-    giant: giantSchema.default({ kind: 'fixedReach', reachAU: 2 }),
-    envelope: envelopeSchema.default({ alpha: 1, lambda: 0.5 }),
-    disruption: disruptionSchema.default({ eta: 2.44, dissolution: { kind: 'none' } }),
-    field: fieldSchema.default({
-      disruption: DEFAULT_DISRUPTION_FIELD,
-      closeSurvivor: DEFAULT_CLOSE_SURVIVOR_FIELD,
-      emergenceDelayGyr: 0,
-      thresholdMG: 1,
-    }),
-    channels: channelsSchema.default({
-      disruption: true,
-      closeSurvivor: false,
-      fossil: { enabled: false, fraction: 0.05, massRangeMsun: [1.5, 4], msField: { medianKG: 1, widthDex: 0.5 } },
-    }),
+    systems: integer(1e3, 1e10).default(1e6),
+    primaries: primariesSchema.prefault({}),
+    companions: companionsSchema.prefault({ rows: [] }),
+    giant: giantSchema.prefault({ kind: 'fixedReach' }),
+    envelope: envelopeSchema.prefault({}),
+    disruption: disruptionSchema.prefault({}),
+    field: fieldSchema.prefault({}),
+    channels: channelsSchema.prefault({}),
     selection: selectionSchema.default({ kind: 'volume' }),
     /** An observed sample to test the prediction against. */
     observed: observedSchema.optional(),
@@ -344,9 +325,9 @@ export class ScenarioValidationError extends Error {
 
 /** Validates a scenario document and fills in the defaults; throws ScenarioValidationError. */
 export function parseScenario(input: unknown): Scenario {
-  const parsed = scenarioSchema.safeParse(input, { reportInput: true });
+  const parsed = parseFields(scenarioSchema, input);
   if (parsed.success) return parsed.data;
-  throw new ScenarioValidationError(describeIssues(scenarioSchema, input, parsed.error.issues));
+  throw new ScenarioValidationError(parsed.issues);
 }
 
 // ---- sweeps -----------------------------------------------------------------------------
@@ -382,8 +363,7 @@ const SWEEP_SAMPLE_INPUT: Record<string, unknown> = {
  * of the first six keeps common random numbers (the kernel's draws do not depend on them).
  */
 export const SWEEPABLE_PARAMETERS: readonly SweepableParameter[] = SWEEP_DEFINITIONS.map((d) => {
-  const node = schemaAt(scenarioSchema, d.path.split('.'), SWEEP_SAMPLE_INPUT[d.path] ?? {});
-  const bounds = node ? numberBounds(node) : null;
+  const bounds = boundsAt(scenarioSchema, d.path.split('.'), SWEEP_SAMPLE_INPUT[d.path] ?? {});
   if (!bounds || bounds.min === null || bounds.max === null) throw new Error(`sweep parameter ${d.path} has no numeric bounds in the schema`);
   return { ...d, min: bounds.min, max: bounds.max };
 });

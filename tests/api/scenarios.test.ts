@@ -57,6 +57,30 @@ describe('scenarios', () => {
     expect(list.body.scenarios.some((s: { name: string }) => s.name === 'Bad')).toBe(false);
   });
 
+  it('answers every problem of a document at once, the first also as field and message', async () => {
+    // α_CE = 50 is outside Webbink's energy formalism's range the schema allows (0.01–10); λ = 0 and
+    // a mass range with its ends swapped are two more problems in the same document.
+    const document = checkScenario({ envelope: { alpha: 50, lambda: 0 }, primaries: { massRangeMsun: [4, 1] } });
+    const res = await owner.agent.post('/api/scenarios').send({ name: 'Three problems', document }).expect(400);
+    expect(res.body.error).toMatchObject({
+      code: 'invalid_scenario',
+      field: 'document.envelope.alpha',
+      message: 'document.envelope.alpha must be between 0.01 and 10 (got 50)',
+    });
+    expect(res.body.error.issues).toEqual([
+      { field: 'document.envelope.alpha', message: 'document.envelope.alpha must be between 0.01 and 10 (got 50)' },
+      { field: 'document.envelope.lambda', message: 'document.envelope.lambda must be between 0.05 and 5 (got 0)' },
+      { field: 'document.primaries.massRangeMsun', message: 'document.primaries.massRangeMsun must be a range [low, high] with low below high (got [4, 1])' },
+    ]);
+  });
+
+  it('lists every problem of a request body at once', async () => {
+    const res = await owner.agent.post('/api/scenarios').send({ name: '', document: 'x', extra: 1 }).expect(400);
+    expect(res.body.error.issues.map((i: { field: string }) => i.field)).toEqual(['name', 'document', 'extra']);
+    expect(res.body.error.field).toBe('name');
+    expect(res.body.error.message).toBe(res.body.error.issues[0].message);
+  });
+
   it('refuses a document naming another department\'s occurrence table', async () => {
     const other = await signUp(ctx.app);
     const table = await other.agent

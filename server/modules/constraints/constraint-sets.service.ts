@@ -11,7 +11,7 @@ import {
   type TwoSampleBody,
   type TwoSampleResponse,
 } from '../../../shared/contracts/constraints.ts';
-import { describeIssues } from '../../../shared/contracts/schema-issues.ts';
+import { fieldIssues, projectWords } from '../../../shared/contracts/field-issues.ts';
 import { clopperPearson } from '../../../shared/engine/stats/clopper-pearson.ts';
 import { formatPercent, formatPValue, formatSigma } from '../../../shared/engine/stats/format.ts';
 import { sameFractionTest } from '../../../shared/engine/stats/two-sample.ts';
@@ -55,12 +55,11 @@ export function checkConstraints(raw: Record<string, unknown>[]): Constraint[] {
       }
     }
     const schema = constraintSchemaFor(candidate);
-    const result = schema.safeParse(candidate, { reportInput: true });
+    const result = schema.safeParse(candidate, { error: projectWords });
     if (!result.success) {
       const first = result.error.issues[0];
       const path = first.path.map(String).join('.');
-      // Messages written in the contract pass through as they are; zod's own are rephrased from the schema's bounds.
-      const described = describeIssues(schema, candidate, [first])[0];
+      const described = fieldIssues([first])[0];
       const text = first.code === 'custom' ? first.message : described.message;
       const field = `constraints.${i}${path ? `.${path}` : ''}`;
       const named = [path, described.field].find((f) => f && text.startsWith(f));

@@ -1,5 +1,5 @@
 import type { CsvProblem } from '../../../shared/contracts/occurrence-tables-api.ts';
-import type { FieldIssue } from '../../../shared/contracts/schema-issues.ts';
+import type { FieldIssue } from '../../../shared/contracts/field-issues.ts';
 import { AppError, notFound } from '../../lib/errors.ts';
 
 export const constraintSetNotFound = () => notFound('That constraint set');

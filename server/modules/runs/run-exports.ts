@@ -1,7 +1,6 @@
-import type { MethodEntry, ScenarioResult } from '../../../shared/contracts/result.ts';
+import type { ScenarioResult } from '../../../shared/contracts/result.ts';
 import type { Scenario } from '../../../shared/contracts/scenario.ts';
-import { formatPercentWithError } from '../../../shared/engine/stats/format.ts';
-import { methodsUsed } from '../../../shared/engine/result/methods.ts';
+import { methodsText } from '../../../shared/engine/result/methods-paragraph.ts';
 import { toCsv } from '../../lib/csv.ts';
 
 /** A CSV with one section per table of the result: headline counts, then every histogram. */
@@ -38,28 +37,9 @@ export function resultCsv(result: ScenarioResult): string {
 }
 
 /**
- * A plain-text methods paragraph a paper can quote: every published method the scenario uses
- * with its reference, and what it takes to reproduce the run exactly.
+ * The methods export of a run: the paragraph a paper can quote (shared/engine/result/methods-paragraph.ts),
+ * then its assumptions and its references, each a section of its own. The run id names it.
  */
 export function methodsParagraph(scenario: Scenario, result: ScenarioResult, runId: string): string {
-  const methods: MethodEntry[] = methodsUsed(scenario);
-  const value = result.fraction.value;
-  const headline =
-    value !== null && result.fraction.se !== null
-      ? `The predicted fraction of strongly magnetic white dwarfs (B ≥ ${scenario.field.thresholdMG} MG) is ${formatPercentWithError(value, result.fraction.se)} (${result.counts.magnetic} of ${result.counts.whiteDwarfs} model white dwarfs; the uncertainty is the binomial Monte Carlo standard error).`
-      : 'The run produced no white dwarfs, so no magnetic fraction is defined.';
-  const body = methods.map((m) => `${m.topic}: ${m.method} (${m.reference}).`).join(' ');
-  const references = [...new Set(methods.map((m) => m.reference))].filter((r) => r !== 'definition' && r !== 'user supplied');
-  return [
-    `We modelled the population with Tidefield (engine ${result.engineVersion}), drawing ${result.systems.toLocaleString('en-US')} primaries in ${result.chunkCount} independently seeded chunks from seed "${result.seed}". ${body}`,
-    headline,
-    `The run (Tidefield run ${runId}) is reproduced exactly by the scenario document with SHA-256 ${result.scenarioHash}, the same seed and engine version.`,
-    '',
-    'Assumptions:',
-    ...result.assumptions.map((a) => `- ${a}`),
-    '',
-    'References:',
-    ...references.map((r) => `- ${r}`),
-    '',
-  ].join('\n');
+  return methodsText(scenario, result, runId);
 }

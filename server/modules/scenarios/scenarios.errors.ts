@@ -1,17 +1,24 @@
 import { AppError, notFound } from '../../lib/errors.ts';
-import type { FieldIssue } from '../../../shared/contracts/schema-issues.ts';
+import type { FieldIssue } from '../../../shared/contracts/field-issues.ts';
 
 export const scenarioNotFound = () => notFound('That scenario');
 export const versionNotFound = () => notFound('That scenario version');
 
-/** A scenario document failed validation: answer with the first issue, its field prefixed by `document.`. */
+/**
+ * A scenario document failed validation: every issue with its field prefixed by `document.`;
+ * the first is also the answer's `field` and `message`.
+ */
 export function invalidDocument(issues: FieldIssue[], prefix = 'document') {
-  const first = issues[0];
-  const field = first?.field ? `${prefix}.${first.field}` : prefix;
+  const named = issues.map((issue) => ({
+    field: issue.field ? `${prefix}.${issue.field}` : prefix,
+    message: issue.message.startsWith(issue.field) ? `${prefix}.${issue.message}` : issue.message,
+  }));
+  const first = named[0];
   return new AppError({
     code: 'invalid_scenario',
     status: 400,
-    field,
-    message: first ? (first.message.startsWith(first.field) ? `${prefix}.${first.message}` : first.message) : 'The scenario document is not valid.',
+    field: first?.field ?? prefix,
+    message: first?.message ?? 'The scenario document is not valid.',
+    issues: named,
   });
 }

@@ -186,7 +186,7 @@ describe('scenario hash, methods and assumptions', () => {
     const result = buildResult(checkOne({ systems: 1000 }), sum(checkOne({ systems: 1000 }), tallies(checkOne({ systems: 1000 }))));
     const references = result.methods.map((m) => m.reference).join(' | ');
     for (const author of ['Kalirai', 'Webbink', 'Eggleton', 'Nauenberg', 'Cumming', 'Tout', 'Demircan', 'Jeans']) expect(references).toContain(author);
-    expect(result.assumptions.some((a) => a.startsWith('fixedReach'))).toBe(true);
+    expect(result.assumptions.some((a) => a.startsWith('Fixed engulfment reach'))).toBe(true);
     expect(result.assumptions.some((a) => a.includes('extended linearly'))).toBe(true); // Kalirai's fit ends at 6.5 Msun, the range at 8
   });
 });

@@ -1,8 +1,7 @@
 import type { CompanionRow } from '../../contracts/occurrence-table.ts';
 import type { Scenario } from '../../contracts/scenario.ts';
 import { EngineError } from '../errors.ts';
-import { CUMMINGS_2018 } from '../physics/ifmr-cummings2018.ts';
-import { KALIRAI_2008 } from '../physics/ifmr-kalirai2008.ts';
+import { publishedIfmrPieces } from '../../contracts/ifmr-relations.ts';
 import { finalMassMsun, type IfmrSegments } from '../physics/ifmr-piecewise.ts';
 import { ifmrFromTable } from '../physics/ifmr-table.ts';
 import { scalingLifetimeAtLog10MassGyr, scalingLifetimeGyr } from '../physics/lifetime-scaling.ts';
@@ -26,14 +25,8 @@ export function resolvedRows(scenario: Scenario): CompanionRow[] {
 /** The scenario's IFMR as piecewise-linear segments. */
 export function ifmrSegments(scenario: Scenario): IfmrSegments {
   const ifmr = scenario.primaries.ifmr;
-  switch (ifmr.relation) {
-    case 'kalirai2008':
-      return KALIRAI_2008;
-    case 'cummings2018':
-      return CUMMINGS_2018[ifmr.calibration];
-    case 'table':
-      return ifmrFromTable(ifmr.points);
-  }
+  // A user table, or a published relation's coefficients from its declaration (shared/contracts/ifmr-relations.ts).
+  return ifmr.relation === 'table' ? ifmrFromTable(ifmr.points) : publishedIfmrPieces(ifmr);
 }
 
 export function preparedLifetime(scenario: Scenario): PreparedLifetime {

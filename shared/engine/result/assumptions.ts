@@ -1,5 +1,5 @@
 import type { Scenario } from '../../contracts/scenario.ts';
-import { formatNumber } from '../../contracts/schema-issues.ts';
+import { formatNumber } from '../../contracts/field-issues.ts';
 import { finalMassMsun, MAX_WHITE_DWARF_MSUN } from '../physics/ifmr-piecewise.ts';
 import { ifmrSegments, lightestWhiteDwarfProgenitorMsun, preparedLifetime } from '../kernel/scenario-physics.ts';
 import { BINS } from '../kernel/bins.ts';
@@ -30,7 +30,7 @@ export function assumptionsFor(scenario: Scenario): string[] {
   }
 
   out.push(
-    'Companions are on circular orbits and each one\'s fate is decided as if it were alone; a white dwarf\'s field is the largest among those of its destroyed companions (and its fossil field). Occurrence rows apply whatever the host\'s mass unless a row sets hostMassSlope (occurrence × (M1/Msun)^slope, capped at 1 per star).',
+    'Companions are on circular orbits and each one\'s fate is decided as if it were alone; a white dwarf\'s field is the largest among those of its destroyed companions (and its fossil field). Occurrence rows apply whatever the host\'s mass unless a row sets a host-mass slope (occurrence × (M1/Msun)^slope, capped at 1 per star).',
   );
   const rows = scenario.companions.rows ?? [];
   if (rows.some((r) => r.shape.kind === 'lognormalPeriod')) out.push('Rows with a log-normal period distribution are flat in the row\'s mass coordinate (mass ratio or mass).');
@@ -38,11 +38,11 @@ export function assumptionsFor(scenario: Scenario): string[] {
 
   if (scenario.giant.kind === 'fixedReach') {
     out.push(
-      `fixedReach: a companion is engulfed iff its initial semi-major axis (Kepler's law with the initial total mass) is below ${scenario.giant.reachAU} AU. At the onset of the common envelope the giant's radius and the separation are set equal to that initial separation, its core to the final white-dwarf mass and its envelope to M1 − M_WD (all of it must be ejected): an assumption, not a stellar track. A post-common-envelope white dwarf has the IFMR mass.`,
+      `Fixed engulfment reach: a companion is engulfed iff its initial semi-major axis (Kepler's law with the initial total mass) is below ${scenario.giant.reachAU} AU. At the onset of the common envelope the giant's radius and the separation are set equal to that initial separation, its core to the final white-dwarf mass and its envelope to M1 − M_WD (all of it must be ejected): an assumption, not a stellar track. A post-common-envelope white dwarf has the IFMR mass.`,
     );
   } else {
     out.push(
-      'track: the common envelope starts when the giant fills its Roche lobe towards the companion (Eggleton 1983) on the orbit widened by the wind and shrunk by the tide. The critical separation a_crit(M1, M2) and the giant\'s state at the onset (core mass, total mass, radius, separation) as a function of ln(a0/a_crit) are integrated on a grid of 24 primary × 16 companion masses × 64 separations (a_crit/400 to a_crit) and interpolated; masses outside the grid take its edge values. Where an orbit escaping the red-giant tip is caught on the AGB the onset state jumps; interpolation smears that jump over one separation sample (10% in a0).',
+      'Analytic giant track: the common envelope starts when the giant fills its Roche lobe towards the companion (Eggleton 1983) on the orbit widened by the wind and shrunk by the tide. The critical separation a_crit(M1, M2) and the giant\'s state at the onset (core mass, total mass, radius, separation) as a function of ln(a0/a_crit) are integrated on a grid of 24 primary × 16 companion masses × 64 separations (a_crit/400 to a_crit) and interpolated; masses outside the grid take its edge values. Where an orbit escaping the red-giant tip is caught on the AGB the onset state jumps; interpolation smears that jump over one separation sample (10% in a0).',
     );
     out.push(
       'A post-common-envelope white dwarf has the core mass at the onset: a helium white dwarf when the envelope is ejected on the red giant branch. A white dwarf whose companion was destroyed, or that has none, reaches its IFMR mass. With several companions, each one\'s fate is decided alone and the white dwarf takes the smallest onset core among its post-common-envelope companions.',
@@ -80,7 +80,7 @@ export function assumptionsFor(scenario: Scenario): string[] {
     out.push(`Fields made by companions count only once the cooling age exceeds ${scenario.field.emergenceDelayGyr} Gyr (a late-emerging field); fossil fields are there from the start. The giant phases are not counted in the cooling age.`);
   }
   if (scenario.field.coreMerger !== undefined || scenario.channels.coreMerger !== undefined) {
-    out.push('The scenario document carries engine-1 keys (field.coreMerger and/or channels.coreMerger); engine 2 has no core-merger channel and ignores them.');
+    out.push('The scenario document carries engine-1 settings for a core-merger field or channel; engine 2 has no core-merger channel and ignores them.');
   }
   if (scenario.channels.fossil.enabled) {
     const fossil = scenario.channels.fossil;

@@ -1,49 +1,10 @@
 import type { MethodEntry } from '../../contracts/result.ts';
 import type { Scenario } from '../../contracts/scenario.ts';
+import { CITATIONS, type CitationKey } from '../../contracts/citations.ts';
 
-const REF = {
-  salpeter: 'Salpeter, E. E. 1955, ApJ, 121, 161',
-  kroupa: 'Kroupa, P. 2001, MNRAS, 322, 231',
-  chabrier: 'Chabrier, G. 2003, PASP, 115, 763',
-  press: 'Press, W. H., Teukolsky, S. A., Vetterling, W. T. & Flannery, B. P. 1992, Numerical Recipes, 2nd ed. (Cambridge University Press), §7.2',
-  kippenhahn: 'Kippenhahn, R., Weigert, A. & Weiss, A. 2012, Stellar Structure and Evolution, 2nd ed. (Springer)',
-  kalirai: 'Kalirai, J. S., Hansen, B. M. S., Kelson, D. D., et al. 2008, ApJ, 676, 594',
-  cummings: 'Cummings, J. D., Kalirai, J. S., Tremblay, P.-E., Ramirez-Ruiz, E. & Choi, J. 2018, ApJ, 866, 21',
-  cumming: 'Cumming, A., Butler, R. P., Marcy, G. W., et al. 2008, PASP, 120, 531',
-  raghavan: 'Raghavan, D., McAlister, H. A., Henry, T. J., et al. 2010, ApJS, 190, 1',
-  duquennoy: 'Duquennoy, A. & Mayor, M. 1991, A&A, 248, 485',
-  wichura: 'Wichura, M. J. 1988, Applied Statistics, 37, 477 (algorithm AS 241)',
-  brent: 'Brent, R. P. 2007, ANZIAM Journal, 48, C188 (xorgens); seedrandom xor4096 implementation',
-  kepler: "Kepler's third law with the IAU 1976 Gaussian gravitational constant",
-  jeans: 'Jeans, J. H. 1924, MNRAS, 85, 2',
-  hurley: 'Hurley, J. R., Pols, O. R. & Tout, C. A. 2000, MNRAS, 315, 543',
-  reimers: 'Reimers, D. 1975, Mém. Soc. R. Sci. Liège, 8, 369',
-  mcdonald: 'McDonald, I. & Zijlstra, A. A. 2015, MNRAS, 448, 502',
-  bloecker: 'Blöcker, T. 1995, A&A, 297, 727',
-  paczynski: 'Paczyński, B. 1970, Acta Astronomica, 20, 47',
-  zahn: 'Zahn, J.-P. 1977, A&A, 57, 383',
-  villaver: 'Villaver, E. & Livio, M. 2009, ApJ, 705, L81',
-  mustill: 'Mustill, A. J. & Villaver, E. 2012, ApJ, 761, 121',
-  webbink: 'Webbink, R. F. 1984, ApJ, 277, 355',
-  dekool: 'de Kool, M. 1990, ApJ, 358, 189',
-  eggleton: 'Eggleton, P. P. 1983, ApJ, 268, 368',
-  rees: 'Rees, M. J. 1988, Nature, 333, 523',
-  ryu: 'Ryu, T., Krolik, J., Piran, T. & Noble, S. C. 2020, ApJ, 904, 98',
-  nauenberg: 'Nauenberg, M. 1972, ApJ, 175, 417',
-  chabrierBaraffe: 'Chabrier, G. & Baraffe, I. 2000, ARA&A, 38, 337',
-  demircan: 'Demircan, O. & Kahraman, G. 1991, Ap&SS, 181, 313',
-  ferrario: 'Ferrario, L., de Martino, D. & Gänsicke, B. T. 2015, Space Sci. Rev., 191, 111',
-  fkr: 'Frank, J., King, A. & Raine, D. 2002, Accretion Power in Astrophysics, 3rd ed. (Cambridge University Press), chs. 5 and 6',
-  shakura: 'Shakura, N. I. & Sunyaev, R. A. 1973, A&A, 24, 337',
-  wickramasinghe: 'Wickramasinghe, D. T. & Ferrario, L. 2005, MNRAS, 356, 1576',
-  mestel: 'Mestel, L. 1952, MNRAS, 112, 583',
-  schmidt: 'Schmidt, M. 1968, ApJ, 151, 393',
-  clopper: 'Clopper, C. J. & Pearson, E. S. 1934, Biometrika, 26, 404',
-  tout: 'Tout, C. A., Wickramasinghe, D. T., Liebert, J., Ferrario, L. & Pringle, J. E. 2008, MNRAS, 387, 897',
-  briggs: 'Briggs, G. P., Ferrario, L., Tout, C. A., Wickramasinghe, D. T. & Hurley, J. R. 2015, MNRAS, 447, 1713',
-  nordhaus: 'Nordhaus, J., Wellons, S., Spiegel, D. S., Metzger, B. D. & Blackman, E. G. 2011, PNAS, 108, 3135',
-  johnson: 'Johnson, J. A., Aller, K. M., Howard, A. W. & Crepp, J. R. 2010, PASP, 122, 905',
-} as const;
+const REF = Object.fromEntries(Object.entries(CITATIONS).map(([k, c]) => [k, c.full])) as Record<CitationKey, string>;
+const CLASS_WORDS = { planet: 'planets', brownDwarf: 'brown dwarfs', star: 'low-mass stars' } as const;
+const KEPLER = "Kepler's third law with the IAU 1976 Gaussian gravitational constant";
 
 /** Every published method the scenario uses, with its full reference (for a methods paragraph). */
 export function methodsUsed(scenario: Scenario): MethodEntry[] {
@@ -59,7 +20,7 @@ export function methodsUsed(scenario: Scenario): MethodEntry[] {
   else add('Initial mass function', `broken power law (slopes ${imf.slopes.join(', ')}; breaks ${imf.breaksMsun.join(', ')} Msun), exact inverse-CDF sampling`, REF.press);
 
   add('Star formation', p.history.kind === 'burst' ? `single burst ${p.history.ageGyr} Gyr ago` : `constant star formation over ${p.history.ageGyr} Gyr`, 'definition');
-  if (p.lifetime.kind === 'scaling') add('Main-sequence lifetime', `t_MS = ${p.lifetime.t0Gyr} Gyr (M/Msun)^-${p.lifetime.exponent}`, REF.kippenhahn);
+  if (p.lifetime.kind === 'scaling') add('Main-sequence lifetime', `t_MS = ${p.lifetime.t0Gyr} Gyr (M/Msun)^-${p.lifetime.exponent}`, REF.hansen);
   else add('Main-sequence lifetime', `user table of ${p.lifetime.points.length} points, log-log interpolation`, 'user supplied');
   const ifmr = p.ifmr;
   if (ifmr.relation === 'kalirai2008') add('Initial–final mass relation', 'Mf = 0.109 Mi + 0.394 Msun', REF.kalirai);
@@ -70,14 +31,14 @@ export function methodsUsed(scenario: Scenario): MethodEntry[] {
   if (rows.some((r) => r.shape.kind === 'powerlaw')) add('Companion distribution', 'power law in ln M and ln P (dN ∝ M^a P^b dlnM dlnP), exact inverse-CDF sampling', REF.cumming);
   if (rows.some((r) => r.shape.kind === 'lognormalPeriod')) add('Companion distribution', 'log-normal period distribution truncated to the row, flat in mass', `${REF.raghavan}; ${REF.duquennoy}`);
   rows.forEach((r, i) => {
-    if (r.source) add(`Occurrence row ${i + 1}${r.label ? ` (${r.label})` : ''}`, `${r.class}, occurrence ${r.occurrence}`, r.source);
+    if (r.source) add(`Occurrence row ${i + 1}${r.label ? ` (${r.label})` : ''}`, `${CLASS_WORDS[r.class]}, occurrence ${r.occurrence}`, r.source);
   });
-  if (rows.some((r) => (r.hostMassSlope ?? 0) !== 0)) add('Companion occurrence', 'occurrence × (M1/Msun)^hostMassSlope, capped at 1 per star', REF.johnson);
+  if (rows.some((r) => (r.hostMassSlope ?? 0) !== 0)) add('Companion occurrence', 'occurrence × (M1/Msun)^(host-mass slope), capped at 1 per star', REF.johnson);
   if (rows.some((r) => r.shape.kind === 'lognormalPeriod') || scenario.field.disruption.widthDex > 0 || scenario.channels.closeSurvivor || scenario.channels.fossil.enabled) {
     add('Random numbers', 'normal deviates by inversion (one uniform each)', REF.wichura);
   }
   add('Random numbers', 'seedrandom xor4096 generator seeded per chunk from (seed, chunk index)', REF.brent);
-  add('Orbits', 'semi-major axis from the initial period and total mass', REF.kepler);
+  add('Orbits', 'semi-major axis from the initial period and total mass', KEPLER);
   add('Orbits', 'adiabatic widening under isotropic mass loss, a·M_total conserved', REF.jeans);
 
   if (scenario.giant.kind === 'fixedReach') {

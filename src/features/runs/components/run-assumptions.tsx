@@ -1,5 +1,6 @@
 import type { ScenarioResult } from '../../../../shared/contracts/result.ts';
 import { Card } from '../../../components/ui/card.tsx';
+import { ReferenceLinks } from '../../../components/ui/citation-links.tsx';
 
 /** What the run took for granted: the caveats every number on the page carries. */
 export function RunAssumptions({ result }: { result: ScenarioResult }) {
@@ -17,7 +18,9 @@ export function RunAssumptions({ result }: { result: ScenarioResult }) {
             <div key={i} className="border-l-2 border-ink-600 pl-4">
               <dt className="font-bold text-foam-50">{m.topic}</dt>
               <dd className="text-foam-300">{m.method}</dd>
-              <dd className="text-sm text-foam-400">{m.reference}</dd>
+              <dd className="text-sm text-foam-400">
+                <ReferenceLinks text={m.reference} />
+              </dd>
             </div>
           ))}
         </dl>

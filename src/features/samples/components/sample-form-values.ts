@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { createSampleBodySchema, type CreateSampleBody, type Sample } from '../../../../shared/contracts/samples.ts';
-import { describeIssues } from '../../../../shared/contracts/schema-issues.ts';
+import { fieldIssues, projectWords } from '../../../../shared/contracts/field-issues.ts';
 import { parseNumberText } from '../../../lib/number-input.ts';
 
 /**
@@ -60,19 +60,19 @@ export function formWords(message: string): string {
 
 /**
  * The form's schema: the inputs read into a body and checked with the server's own schema.
- * Messages come from describeIssues, so that a range message names both ends ("must be
- * between 0.1 and 1.44 (got 2)") as the server's do.
+ * Messages are the server's own (the contract's checks word them, field-issues.ts names the
+ * field), so a range message names both ends ("must be between 0.1 and 1.44 (got 2)").
  */
 export const sampleFormSchema = z.unknown().transform((entries, ctx): CreateSampleBody => {
   const body = sampleBodyFromEntries((entries ?? {}) as SampleFormEntries);
-  const parsed = createSampleBodySchema.safeParse(body, { reportInput: true });
+  const parsed = createSampleBodySchema.safeParse(body, { error: projectWords });
   if (parsed.success) return parsed.data;
-  for (const issue of parsed.error.issues) {
-    // The schema's own words for names and refinements; describeIssues for numbers and missing values.
-    const numeric = issue.code === 'invalid_type' || ((issue.code === 'too_small' || issue.code === 'too_big') && issue.origin === 'number');
-    const [described] = numeric ? describeIssues(createSampleBodySchema, body, [issue]) : [];
-    ctx.addIssue({ code: 'custom', path: issue.path, message: formWords(described?.message ?? issue.message) });
-  }
+  const described = fieldIssues(parsed.error.issues);
+  parsed.error.issues.forEach((issue, i) => {
+    // Refinements name their field in their own words ("bins[0].magnetic must not exceed …").
+    const message = issue.code === 'custom' ? issue.message : (described[i]?.message ?? issue.message);
+    ctx.addIssue({ code: 'custom', path: issue.path, message: formWords(message) });
+  });
   return z.NEVER;
 });
 

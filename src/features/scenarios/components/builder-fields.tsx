@@ -1,5 +1,5 @@
 import { useState, type ReactNode } from 'react';
-import { formatNumber } from '../../../../shared/contracts/schema-issues.ts';
+import { formatNumber } from '../../../../shared/contracts/field-issues.ts';
 import { Button } from '../../../components/ui/button.tsx';
 import { Field, controlClasses } from '../../../components/ui/field.tsx';
 import { Select } from '../../../components/ui/select.tsx';
@@ -9,6 +9,7 @@ import { parseNumberList, parseNumberText } from '../../../lib/number-input.ts';
 import { useBuilder } from './builder-context.tsx';
 import { allowedRange, allowedText, getAt, inputId, type DraftPath } from './scenario-draft.ts';
 import { optionOf, type KindChoice } from './scenario-options.ts';
+import { CitationLinks } from '../../../components/ui/citation-links.tsx';
 
 /** Units that are not appended to an allowed range ("0.01 to 10", not "0.01 to 10 dimensionless"). */
 const UNITLESS = new Set(['dimensionless', 'fraction', '×']);
@@ -266,7 +267,11 @@ export function DraftKind({ choice, label, hint }: DraftKindProps) {
       {option && (
         <p className="text-sm text-foam-300">
           {option.summary}
-          {option.reference && <Reference>{option.reference}</Reference>}
+          {option.cites.length > 0 && (
+            <Reference>
+              <CitationLinks cites={option.cites} />
+            </Reference>
+          )}
         </p>
       )}
     </div>

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { Card } from '../../../components/ui/card.tsx';
-import type { FieldIssue } from '../../../../shared/contracts/schema-issues.ts';
+import type { FieldIssue } from '../../../../shared/contracts/field-issues.ts';
 
 /** The builder's sections, in order: where each sits on the page and which document keys it holds. */
 export const BUILDER_SECTIONS = [

@@ -1,9 +1,9 @@
+import { CitationLinks } from '../../../components/ui/citation-links.tsx';
 import { useBuilder } from './builder-context.tsx';
 import { CheckboxField, DraftCheckbox, DraftKind, DraftNumber, DraftNumberList, DraftPoints, DraftRange, DraftSelect, DraftText, Reference } from './builder-fields.tsx';
 import { BuilderSection, FieldGrid, SubGroup } from './builder-section.tsx';
 import { getAt } from './scenario-draft.ts';
 import {
-  CALIBRATION_OPTIONS,
   DISRUPTION_FIELD_CHOICE,
   DISSOLUTION_CHOICE,
   GIANT_CHOICE,
@@ -14,7 +14,8 @@ import {
   SELECTION_CHOICE,
   SUPERWIND_CHOICE,
   TIDE_CHOICE,
-} from './scenario-options.ts';
+} from '../../../../shared/contracts/method-choices.ts';
+import { CALIBRATION_OPTIONS } from './scenario-options.ts';
 
 /** Each section of the builder apart from the run and the companions: one published method per option, its source beside it. */
 
@@ -149,7 +150,7 @@ export function EnvelopeSection() {
       <p className="text-sm text-foam-300">
         The budget uses the giant at the onset of the common envelope: for the track, when it fills its Roche lobe towards the companion; for the fixed reach, the final core and the
         full envelope at R = a0. A survivor must fit inside its Roche lobe after the envelope is gone, or it is destroyed in the envelope.
-        <Reference>Roche-lobe radius from Eggleton 1983, ApJ 268, 368</Reference>
+        <Reference>Roche-lobe radius from <CitationLinks cites={['eggleton']} /></Reference>
       </p>
     </BuilderSection>
   );
@@ -185,7 +186,7 @@ export function DisruptionSection() {
       </FieldGrid>
       <p className="text-sm text-foam-300">
         Companion radii: one Jupiter radius below 0.08 Msun, a main-sequence power law above; the white dwarf’s radius from its mass.
-        <Reference>Chabrier & Baraffe 2000; Demircan & Kahraman 1991; Nauenberg 1972</Reference>
+        <Reference><CitationLinks cites={['chabrierBaraffe', 'demircan', 'nauenberg']} /></Reference>
       </p>
     </BuilderSection>
   );
@@ -230,7 +231,7 @@ export function FieldSection() {
         title="Close post-common-envelope survivors"
         description={
           closeOn
-            ? <Reference>The near-merger case of Tout et al. 2008, MNRAS 387, 897</Reference>
+            ? <Reference>The near-merger case of <CitationLinks cites={['tout']} /></Reference>
             : 'Has no effect while the close-survivor channel is off (Channels).'
         }
       >
@@ -277,7 +278,7 @@ export function ChannelsSection() {
         />
       </div>
       {fossilOn && (
-        <SubGroup title="Fossil channel" description={<Reference>Wickramasinghe & Ferrario 2005, MNRAS 356, 1576</Reference>}>
+        <SubGroup title="Fossil channel" description={<Reference><CitationLinks cites={['wickramasinghe']} /></Reference>}>
           <FieldGrid>
             <DraftNumber path={['channels', 'fossil', 'fraction']} label="Share of progenitors with a field" unit="fraction" />
             <DraftRange path={['channels', 'fossil', 'massRangeMsun']} label="Progenitor masses" unit="Msun" hint="Ap/Bp stars lie around 1.5–4 Msun." />

@@ -1,7 +1,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState, type FormEvent, type ReactNode } from 'react';
 import { nameSchema } from '../../../../shared/contracts/common.ts';
 import { listPriceCredits } from '../../../../shared/contracts/pricing.ts';
-import type { FieldIssue } from '../../../../shared/contracts/schema-issues.ts';
+import type { FieldIssue } from '../../../../shared/contracts/field-issues.ts';
 import { Alert } from '../../../components/ui/alert.tsx';
 import { Badge } from '../../../components/ui/badge.tsx';
 import { Button } from '../../../components/ui/button.tsx';

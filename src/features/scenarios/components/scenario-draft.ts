@@ -1,11 +1,12 @@
 import canonicalize from 'canonicalize';
 import { parseScenario, scenarioSchema } from '../../../../shared/contracts/scenario.ts';
-import { describeIssues, formatNumber, formatPath, numberBounds, schemaAt, type FieldIssue } from '../../../../shared/contracts/schema-issues.ts';
+import { formatNumber, formatPath, parseFields, type FieldIssue } from '../../../../shared/contracts/field-issues.ts';
+import { boundsAt } from '../../../../shared/contracts/schema-bounds.ts';
 
 /**
  * The scenario builder edits one draft document: plain JSON, possibly invalid while the user
  * types. Every input is bound to a path in it ("envelope.alpha", "companions.rows[0].occurrence"),
- * the same dotted path that describeIssues and the server (as `document.<path>`) use to name a
+ * the same dotted path that fieldIssues (shared/contracts/field-issues.ts) and the server (as `document.<path>`) use to name a
  * field, so a message lands on the input that holds the value.
  */
 export type Draft = Record<string, unknown>;
@@ -52,8 +53,8 @@ export function setAt<T>(doc: T, path: DraftPath, value: unknown): T {
 
 /** Every problem of the draft, each naming its field and the allowed range ("must be between 0.01 and 10 (got 50)"). */
 export function draftIssues(doc: unknown): FieldIssue[] {
-  const parsed = scenarioSchema.safeParse(doc, { reportInput: true });
-  return parsed.success ? [] : describeIssues(scenarioSchema, doc, parsed.error.issues);
+  const parsed = parseFields(scenarioSchema, doc);
+  return parsed.success ? [] : parsed.issues;
 }
 
 /**
@@ -95,8 +96,7 @@ export interface AllowedRange {
 
 /** The bounds the schema puts on the number at `path`, for the union members the draft has chosen. */
 export function allowedRange(doc: unknown, path: DraftPath): AllowedRange | null {
-  const node = schemaAt(scenarioSchema, path, doc);
-  return node ? numberBounds(node) : null;
+  return boundsAt(scenarioSchema, path, doc);
 }
 
 /** "0.01 to 10", "a whole number from 1000 to 1e10", "at least 0". */

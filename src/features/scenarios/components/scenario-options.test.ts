@@ -8,12 +8,10 @@ import {
   IMF_CHOICE,
   LIFETIME_CHOICE,
   SELECTION_CHOICE,
-  SHAPE_OPTIONS,
   SUPERWIND_CHOICE,
   TIDE_CHOICE,
-  massKeyOf,
-  newCompanionRow,
-} from './scenario-options.ts';
+} from '../../../../shared/contracts/method-choices.ts';
+import { SHAPE_OPTIONS, massKeyOf, newCompanionRow } from './scenario-options.ts';
 
 describe('scenario options', () => {
   const base = defaultDraft('options-test');

@@ -1,4 +1,4 @@
-import { formatPath } from '../../../../shared/contracts/schema-issues.ts';
+import { formatPath } from '../../../../shared/contracts/field-issues.ts';
 
 /** One field that differs between two versions of a scenario document. */
 export interface FieldChange {

@@ -1,8 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { CUMMINGS_2018 } from './ifmr-cummings2018.ts';
-import { KALIRAI_2008 } from './ifmr-kalirai2008.ts';
-import { finalMassMsun, MAX_WHITE_DWARF_MSUN } from './ifmr-piecewise.ts';
-import { ifmrFromTable } from './ifmr-table.ts';
+import { publishedIfmrPieces } from './ifmr-relations.ts';
+import { finalMassMsun, MAX_WHITE_DWARF_MSUN } from '../engine/physics/ifmr-piecewise.ts';
+import { ifmrFromTable } from '../engine/physics/ifmr-table.ts';
+
+const KALIRAI_2008 = publishedIfmrPieces({ relation: 'kalirai2008' });
+const CUMMINGS_2018 = { mist: publishedIfmrPieces({ relation: 'cummings2018', calibration: 'mist' }), parsec: publishedIfmrPieces({ relation: 'cummings2018', calibration: 'parsec' }) };
 
 describe('initial–final mass relations', () => {
   it('Kalirai et al. 2008 linear fit (Mf = 0.109 Mi + 0.394) at the cluster masses', () => {
