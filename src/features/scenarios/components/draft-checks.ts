@@ -1,5 +1,5 @@
 import { emptyRangeMessage } from '../../../../shared/contracts/occurrence-table.ts';
-import type { FieldIssue } from '../../../../shared/contracts/schema-issues.ts';
+import type { FieldIssue } from '../../../../shared/contracts/field-issues.ts';
 import { isApiError } from '../../../lib/api-client.ts';
 import { getAt, serverErrorTarget, type DraftPath } from './scenario-draft.ts';
 
