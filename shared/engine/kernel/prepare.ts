@@ -120,10 +120,9 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
   const lifetime = preparedLifetime(scenario);
   const maxOccurrence = rows.reduce((m, r) => Math.max(m, r.occurrence), 0);
   const multiplierMax = multiplierMaxFor(rows);
+  // occurrence × multiplier ≤ 1 is the contract's rule (scenario.ts checks it when the document is
+  // parsed, the one place); prepareRow still caps presence at the draw threshold.
   const multiplier = scenario.companions.multiplier;
-  if (maxOccurrence > 0 && multiplier > multiplierMax * (1 + 1e-12)) {
-    throw new EngineError('companions.multiplier', multiplier, `[0, ${multiplierMax}] (1 / the largest row occurrence)`);
-  }
   const preparedRows = rows.map((row) => prepareRow(row, maxOccurrence, multiplierMax, multiplier));
   const fossil = scenario.channels.fossil;
   const imf = buildImfSampler(p.imf, p.massRangeMsun);
