@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { SHAPE_CHOICE } from '../../shared/contracts/method-choices.ts';
 import { OCCURRENCE_CSV_COLUMNS } from '../../shared/contracts/occurrence-tables-api.ts';
 import { MASS_UNIT_KEYS, readRowCells } from '../../shared/contracts/occurrence-row-cells.ts';
-import { MASS_UNITS, shapeParameters } from './companion-rows.tsx';
+import { MASS_UNITS, SHAPE_SHORT_OPTIONS, shapeParameters } from './companion-rows.tsx';
 
 describe('the companion-row vocabulary both row editors use', () => {
   it('offers, for each distribution shape, exactly the parameters its declared template carries', () => {
@@ -12,6 +12,7 @@ describe('the companion-row vocabulary both row editors use', () => {
       expect(shapeParameters(option.value).map((p) => p.key)).toEqual(fields);
       for (const p of shapeParameters(option.value)) expect(OCCURRENCE_CSV_COLUMNS).toContain(p.key);
     }
+    expect(SHAPE_SHORT_OPTIONS.map((o) => o.value)).toEqual(SHAPE_CHOICE.options.map((o) => o.value));
   });
 
   it('reads a missing or unknown shape as a power law, as the shared row reader does', () => {

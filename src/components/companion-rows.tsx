@@ -32,21 +32,36 @@ export interface ShapeParameter {
   hint?: string;
 }
 
-const SHAPE_PARAMETERS: Record<string, readonly ShapeParameter[]> = {
-  powerlaw: [
-    { key: 'massSlope', label: 'Mass slope a', symbol: 'a', unit: '', hint: 'dN ∝ M^a dlnM.' },
-    { key: 'periodSlope', label: 'Period slope b', symbol: 'b', unit: '', hint: 'dN ∝ P^b dlnP.' },
-  ],
-  lognormalPeriod: [
-    { key: 'meanLog10PeriodDays', label: 'Mean log10 period', symbol: 'μ', unit: 'log10 days' },
-    { key: 'sigmaLog10Period', label: 'Spread of log10 period', symbol: 'σ', unit: 'dex' },
-  ],
+/**
+ * Each distribution shape's parameters, and a short name for narrow cells (the full label,
+ * summary and sources are SHAPE_CHOICE's in shared/contracts/method-choices.ts).
+ */
+const SHAPES: Record<string, { shortLabel: string; parameters: readonly ShapeParameter[] }> = {
+  powerlaw: {
+    shortLabel: 'Power law',
+    parameters: [
+      { key: 'massSlope', label: 'Mass slope a', symbol: 'a', unit: '', hint: 'dN ∝ M^a dlnM.' },
+      { key: 'periodSlope', label: 'Period slope b', symbol: 'b', unit: '', hint: 'dN ∝ P^b dlnP.' },
+    ],
+  },
+  lognormalPeriod: {
+    shortLabel: 'Log-normal P',
+    parameters: [
+      { key: 'meanLog10PeriodDays', label: 'Mean log10 period', symbol: 'μ', unit: 'log10 days' },
+      { key: 'sigmaLog10Period', label: 'Spread of log10 period', symbol: 'σ', unit: 'dex' },
+    ],
+  },
 };
+
+const shapeOf = (shape: unknown) => SHAPES[typeof shape === 'string' && shape in SHAPES ? shape : 'powerlaw'];
 
 /** The parameters of a shape kind (the others are ignored); an unknown or missing kind reads as a power law, as the row reader does. */
 export function shapeParameters(shape: unknown): readonly ShapeParameter[] {
-  return SHAPE_PARAMETERS[typeof shape === 'string' && shape in SHAPE_PARAMETERS ? shape : 'powerlaw'];
+  return shapeOf(shape).parameters;
 }
+
+/** The shapes for a narrow select: value and short name. */
+export const SHAPE_SHORT_OPTIONS = Object.entries(SHAPES).map(([value, { shortLabel }]) => ({ value, label: shortLabel }));
 
 export interface RowActionsProps {
   /** 1-based, read out with each button ("Duplicate row 3"). */

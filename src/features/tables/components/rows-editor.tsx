@@ -10,8 +10,7 @@ import { cx } from '../../../lib/class-names.ts';
 import { useUpdateTable } from '../api/update-table.ts';
 import { blankCells, cellKey, cellOfServerField, checkCells, serverCellMessage, type CellProblem } from './row-cells.ts';
 import { cellsFromRow, type CellColumn, type RowCells } from '../../../../shared/contracts/occurrence-row-cells.ts';
-import { SHAPE_CHOICE } from '../../../../shared/contracts/method-choices.ts';
-import { COMPANION_CLASS_OPTIONS, MASS_UNITS, RowActions, shapeParameters, type ShapeParameter } from '../../../components/companion-rows.tsx';
+import { COMPANION_CLASS_OPTIONS, MASS_UNITS, RowActions, SHAPE_SHORT_OPTIONS, shapeParameters, type ShapeParameter } from '../../../components/companion-rows.tsx';
 
 const PAGE_SIZE = 25;
 
@@ -22,7 +21,6 @@ interface DraftRow {
 
 const CLASS_OPTIONS = COMPANION_CLASS_OPTIONS.map(({ value, label }) => ({ value, label }));
 const UNIT_OPTIONS = MASS_UNITS.map(({ value, label }) => ({ value, label }));
-const SHAPE_OPTIONS = SHAPE_CHOICE.options.map(({ value, label }) => ({ value, label }));
 const CLASS_TEXT: Record<string, string> = Object.fromEntries(CLASS_OPTIONS.map((o) => [o.value, o.label]));
 /** A shape parameter's label in the grid, with its formula when it has one: "Mass slope a (dN ∝ M^a dlnM)". */
 const parameterLabel = (p: ShapeParameter) => (p.hint ? `${p.label} (${p.hint.replace(/\.$/, '')})` : p.label);
@@ -282,7 +280,7 @@ function RowLines({ index, cells, errors, rowProblem, readOnly, onChange, onRemo
   );
   const massUnit = UNIT_OPTIONS.some((u) => u.value === cells.massUnit) ? cells.massUnit : 'MJup';
   const hasProblem = Boolean(rowProblem) || [...errors.keys()].some((k) => k.startsWith(`${index}:`));
-  const shapeText = `${SHAPE_OPTIONS.find((o) => o.value === cells.shape)?.label ?? cells.shape}: ${shapeParameters(cells.shape)
+  const shapeText = `${SHAPE_SHORT_OPTIONS.find((o) => o.value === cells.shape)?.label ?? cells.shape}: ${shapeParameters(cells.shape)
     .map((p) => `${p.symbol} = ${cells[p.key] || 'default'}${p.unit ? ` ${p.unit}` : ''}`)
     .join(', ')}`;
   return (
@@ -301,7 +299,7 @@ function RowLines({ index, cells, errors, rowProblem, readOnly, onChange, onRemo
             </>
           ) : (
             <div className="flex flex-col gap-2">
-              {control('class', 'Class', { options: CLASS_OPTIONS, width: 'w-36' })}
+              {control('class', 'Class', { options: CLASS_OPTIONS, width: 'w-40' })}
               {control('occurrence', 'Occurrence', { width: 'w-24', prefix: 'p =' })}
             </div>
           )}
@@ -336,7 +334,7 @@ function RowLines({ index, cells, errors, rowProblem, readOnly, onChange, onRemo
             <ReadValue label="Shape" value={shapeText} />
           ) : (
             <div className="flex flex-col gap-2">
-              {control('shape', 'Shape', { options: SHAPE_OPTIONS, width: 'w-56' })}
+              {control('shape', 'Shape', { options: SHAPE_SHORT_OPTIONS, width: 'w-36' })}
               <div className="flex flex-wrap items-start gap-2">
                 {shapeParameters(cells.shape).map((p) => (
                   <div key={p.key}>{control(p.key, parameterLabel(p), { unit: p.unit || undefined, width: 'w-20', prefix: `${p.symbol} =` })}</div>
