@@ -11,7 +11,8 @@ import { useBuilder } from './builder-context.tsx';
 import { DraftKind, DraftNumber, DraftRange, DraftSelect, DraftText } from './builder-fields.tsx';
 import { BuilderSection, FieldGrid } from './builder-section.tsx';
 import { getAt, inputId, type DraftPath } from './scenario-draft.ts';
-import { COMPANION_CLASS_OPTIONS, MASS_UNITS, SHAPE_OPTIONS, massKeyOf, newCompanionRow, type KindChoice } from './scenario-options.ts';
+import { SHAPE_OPTIONS, massKeyOf, newCompanionRow, type KindChoice } from './scenario-options.ts';
+import { COMPANION_CLASS_OPTIONS, MASS_UNITS, RowActions, shapeParameters } from '../../../components/companion-rows.tsx';
 
 /** A scenario holds at most this many inline rows (the schema's limit); longer tables are stored and named by id. */
 const MAX_ROWS = 32;
@@ -169,14 +170,13 @@ function CompanionRowEditor({ index, row, count }: { index: number; row: Record<
             {title}
           </h3>
           {!readOnly && (
-            <div className="flex flex-wrap gap-2">
-              <Button variant="ghost" size="sm" disabled={count >= MAX_ROWS} onClick={() => update(ROWS, [...rows.slice(0, index + 1), structuredClone(row), ...rows.slice(index + 1)])}>
-                Duplicate<span className="sr-only"> row {index + 1}</span>
-              </Button>
-              <Button variant="ghost" size="sm" className="text-coral-300" onClick={() => update(ROWS, rows.filter((_, j) => j !== index))}>
-                Remove<span className="sr-only"> row {index + 1}</span>
-              </Button>
-            </div>
+            <RowActions
+              row={index + 1}
+              duplicateDisabled={count >= MAX_ROWS}
+              onDuplicate={() => update(ROWS, [...rows.slice(0, index + 1), structuredClone(row), ...rows.slice(index + 1)])}
+              onRemove={() => update(ROWS, rows.filter((_, j) => j !== index))}
+              className="flex flex-wrap gap-2"
+            />
           )}
         </div>
         {messageAt(path) && <p className="text-sm font-bold text-coral-300">{messageAt(path)}</p>}
@@ -218,16 +218,11 @@ function CompanionRowEditor({ index, row, count }: { index: number; row: Record<
             hint="Occurrence × (M1 / 1 Msun)^slope, capped at 1 per star; empty or 0 = the same for every host. Giant planets grow more common with host mass (Johnson et al. 2010, from memory)."
           />
         </FieldGrid>
-        {shapeKind === 'powerlaw' && (
+        {(shapeKind === 'powerlaw' || shapeKind === 'lognormalPeriod') && (
           <FieldGrid>
-            <DraftNumber path={[...path, 'shape', 'massSlope']} label={<>Mass slope a{sr}</>} unit="dimensionless" hint="dN ∝ M^a dlnM." />
-            <DraftNumber path={[...path, 'shape', 'periodSlope']} label={<>Period slope b{sr}</>} unit="dimensionless" hint="dN ∝ P^b dlnP." />
-          </FieldGrid>
-        )}
-        {shapeKind === 'lognormalPeriod' && (
-          <FieldGrid>
-            <DraftNumber path={[...path, 'shape', 'meanLog10PeriodDays']} label={<>Mean log10 period{sr}</>} unit="log10 days" />
-            <DraftNumber path={[...path, 'shape', 'sigmaLog10Period']} label={<>Spread of log10 period{sr}</>} unit="dex" />
+            {shapeParameters(shapeKind).map((p) => (
+              <DraftNumber key={p.key} path={[...path, 'shape', p.key]} label={<>{p.label}{sr}</>} unit={p.unit || 'dimensionless'} hint={p.hint} />
+            ))}
           </FieldGrid>
         )}
         <FieldGrid>

@@ -1,6 +1,7 @@
 import type { DraftPath } from './scenario-draft.ts';
 import type { MethodChoice, MethodOption } from '../../../../shared/contracts/method-choices.ts';
 import { SHAPE_CHOICE } from '../../../../shared/contracts/method-choices.ts';
+import { MASS_UNITS, type MassKey } from '../../../components/companion-rows.tsx';
 
 /**
  * The builder's view of the scenario's choices between published methods. Each choice (label,
@@ -18,19 +19,6 @@ export const CALIBRATION_OPTIONS = [
 /** A row's distribution shapes (the options of SHAPE_CHOICE). */
 export const SHAPE_OPTIONS: readonly KindOption[] = SHAPE_CHOICE.options;
 
-export const COMPANION_CLASS_OPTIONS = [
-  { value: 'planet', label: 'Planet' },
-  { value: 'brownDwarf', label: 'Brown dwarf' },
-  { value: 'star', label: 'Low-mass star' },
-] as const;
-
-/** The three ways a row may give its mass range; exactly one is used. */
-export const MASS_UNITS = [
-  { key: 'massMJup', value: 'MJup', label: 'Jupiter masses', unit: 'MJup' },
-  { key: 'massMsun', value: 'Msun', label: 'Solar masses', unit: 'Msun' },
-  { key: 'massRatio', value: 'q', label: 'Mass ratio q = M2/M1', unit: 'q' },
-] as const;
-export type MassKey = (typeof MASS_UNITS)[number]['key'];
 
 /** The mass key a row uses (the first present; a new row starts in Jupiter masses). */
 export function massKeyOf(row: Record<string, unknown>): MassKey {

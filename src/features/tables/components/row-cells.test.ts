@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { CompanionRow } from '../../../../shared/contracts/occurrence-table.ts';
 import { cellsFromRow, columnOfPath } from '../../../../shared/contracts/occurrence-row-cells.ts';
-import { blankCells, cellOfServerField, checkCells, serverCellMessage, shapeColumns } from './row-cells.ts';
+import { blankCells, cellOfServerField, checkCells, serverCellMessage } from './row-cells.ts';
 
 // The first row of the baseline table (shared/scenarios/baseline-occurrence.json).
 const cumming: CompanionRow = {
@@ -53,10 +53,5 @@ describe('row cells', () => {
     expect(cellOfServerField('rows.2')).toEqual({ index: 2, column: null });
     expect(cellOfServerField('name')).toBeNull();
     expect(serverCellMessage('rows.0.occurrence', 'rows.0.occurrence: Too big: expected number to be <=1')).toBe('Too big: expected number to be <=1');
-  });
-
-  it('knows which shape parameters apply', () => {
-    expect(shapeColumns('lognormalPeriod')).toEqual(['meanLog10PeriodDays', 'sigmaLog10Period']);
-    expect(shapeColumns('powerlaw')).toEqual(['massSlope', 'periodSlope']);
   });
 });

@@ -31,11 +31,6 @@ export function blankCells(): RowCells {
   };
 }
 
-/** The shape parameters that apply to a shape kind (the others are ignored). */
-export function shapeColumns(shape: string): readonly CellColumn[] {
-  return shape === 'lognormalPeriod' ? ['meanLog10PeriodDays', 'sigmaLog10Period'] : ['massSlope', 'periodSlope'];
-}
-
 /** The message without the field name it starts with, as a sentence. */
 function cellMessage(field: string, message: string): string {
   let body = message;

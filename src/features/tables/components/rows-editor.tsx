@@ -8,16 +8,9 @@ import { useUnsavedChanges } from '../../../hooks/use-unsaved-changes.tsx';
 import { isApiError } from '../../../lib/api-client.ts';
 import { cx } from '../../../lib/class-names.ts';
 import { useUpdateTable } from '../api/update-table.ts';
-import {
-  blankCells,
-  cellKey,
-  cellOfServerField,
-  checkCells,
-  serverCellMessage,
-  shapeColumns,
-  type CellProblem,
-} from './row-cells.ts';
+import { blankCells, cellKey, cellOfServerField, checkCells, serverCellMessage, type CellProblem } from './row-cells.ts';
 import { cellsFromRow, type CellColumn, type RowCells } from '../../../../shared/contracts/occurrence-row-cells.ts';
+import { COMPANION_CLASS_OPTIONS, MASS_UNITS, RowActions, SHAPE_SHORT_OPTIONS, shapeParameters, type ShapeParameter } from '../../../components/companion-rows.tsx';
 
 const PAGE_SIZE = 25;
 
@@ -26,28 +19,11 @@ interface DraftRow {
   cells: RowCells;
 }
 
-const CLASS_OPTIONS = [
-  { value: 'planet', label: 'Planet' },
-  { value: 'brownDwarf', label: 'Brown dwarf' },
-  { value: 'star', label: 'Star' },
-];
-const UNIT_OPTIONS = [
-  { value: 'MJup', label: 'MJup' },
-  { value: 'Msun', label: 'Msun' },
-  { value: 'q', label: 'q = M2/M1' },
-];
-const SHAPE_OPTIONS = [
-  { value: 'powerlaw', label: 'Power law' },
-  { value: 'lognormalPeriod', label: 'Log-normal P' },
-];
-/** The shape parameters: label, the symbol shown before the input, and the unit after it (none for slopes). */
-const SHAPE_PARAMETERS: Record<string, { label: string; symbol: string; unit: string }> = {
-  massSlope: { label: 'Mass slope a (dN ∝ M^a dlnM)', symbol: 'a', unit: '' },
-  periodSlope: { label: 'Period slope b (dN ∝ P^b dlnP)', symbol: 'b', unit: '' },
-  meanLog10PeriodDays: { label: 'Mean log10 P', symbol: 'μ', unit: 'log10 d' },
-  sigmaLog10Period: { label: 'Spread of log10 P', symbol: 'σ', unit: 'dex' },
-};
-const CLASS_TEXT: Record<string, string> = { planet: 'Planet', brownDwarf: 'Brown dwarf', star: 'Star' };
+const CLASS_OPTIONS = COMPANION_CLASS_OPTIONS.map(({ value, label }) => ({ value, label }));
+const UNIT_OPTIONS = MASS_UNITS.map(({ value, label }) => ({ value, label }));
+const CLASS_TEXT: Record<string, string> = Object.fromEntries(CLASS_OPTIONS.map((o) => [o.value, o.label]));
+/** A shape parameter's label in the grid, with its formula when it has one: "Mass slope a (dN ∝ M^a dlnM)". */
+const parameterLabel = (p: ShapeParameter) => (p.hint ? `${p.label} (${p.hint.replace(/\.$/, '')})` : p.label);
 
 const cellId = (index: number, column: CellColumn) => `table-row-${index}-${column}`;
 const toDrafts = (table: TableDetail): DraftRow[] => table.rows.map((row, key) => ({ key, cells: cellsFromRow(row) }));
@@ -304,8 +280,8 @@ function RowLines({ index, cells, errors, rowProblem, readOnly, onChange, onRemo
   );
   const massUnit = UNIT_OPTIONS.some((u) => u.value === cells.massUnit) ? cells.massUnit : 'MJup';
   const hasProblem = Boolean(rowProblem) || [...errors.keys()].some((k) => k.startsWith(`${index}:`));
-  const shapeText = `${SHAPE_OPTIONS.find((o) => o.value === cells.shape)?.label ?? cells.shape}: ${shapeColumns(cells.shape)
-    .map((c) => `${SHAPE_PARAMETERS[c].symbol} = ${cells[c] || 'default'}${SHAPE_PARAMETERS[c].unit ? ` ${SHAPE_PARAMETERS[c].unit}` : ''}`)
+  const shapeText = `${SHAPE_SHORT_OPTIONS.find((o) => o.value === cells.shape)?.label ?? cells.shape}: ${shapeParameters(cells.shape)
+    .map((p) => `${p.symbol} = ${cells[p.key] || 'default'}${p.unit ? ` ${p.unit}` : ''}`)
     .join(', ')}`;
   return (
     <>
@@ -323,7 +299,7 @@ function RowLines({ index, cells, errors, rowProblem, readOnly, onChange, onRemo
             </>
           ) : (
             <div className="flex flex-col gap-2">
-              {control('class', 'Class', { options: CLASS_OPTIONS, width: 'w-36' })}
+              {control('class', 'Class', { options: CLASS_OPTIONS, width: 'w-40' })}
               {control('occurrence', 'Occurrence', { width: 'w-24', prefix: 'p =' })}
             </div>
           )}
@@ -333,7 +309,7 @@ function RowLines({ index, cells, errors, rowProblem, readOnly, onChange, onRemo
             <ReadValue label="Mass" value={`${cells.massMin}–${cells.massMax} ${cells.massUnit}`} />
           ) : (
             <div className="flex flex-col gap-2">
-              {control('massUnit', 'Mass unit', { options: UNIT_OPTIONS, width: 'w-36' })}
+              {control('massUnit', 'Mass unit', { options: UNIT_OPTIONS, width: 'w-44' })}
               <div className="flex items-start gap-1">
                 {control('massMin', 'Mass from', { width: 'w-16' })}
                 <span aria-hidden="true" className="pt-2 text-foam-400 max-md:pt-8">–</span>
@@ -358,10 +334,10 @@ function RowLines({ index, cells, errors, rowProblem, readOnly, onChange, onRemo
             <ReadValue label="Shape" value={shapeText} />
           ) : (
             <div className="flex flex-col gap-2">
-              {control('shape', 'Shape', { options: SHAPE_OPTIONS, width: 'w-36' })}
+              {control('shape', 'Shape', { options: SHAPE_SHORT_OPTIONS, width: 'w-36' })}
               <div className="flex flex-wrap items-start gap-2">
-                {shapeColumns(cells.shape).map((c) => (
-                  <div key={c}>{control(c, SHAPE_PARAMETERS[c].label, { unit: SHAPE_PARAMETERS[c].unit || undefined, width: 'w-20', prefix: `${SHAPE_PARAMETERS[c].symbol} =` })}</div>
+                {shapeParameters(cells.shape).map((p) => (
+                  <div key={p.key}>{control(p.key, parameterLabel(p), { unit: p.unit || undefined, width: 'w-20', prefix: `${p.symbol} =` })}</div>
                 ))}
               </div>
             </div>
@@ -378,14 +354,7 @@ function RowLines({ index, cells, errors, rowProblem, readOnly, onChange, onRemo
               {control('label', 'Label', { width: 'w-full', labelVisible: true })}
               {control('source', 'Source', { width: 'w-full', multiline: true, labelVisible: true })}
               {control('assumed', 'Assumed', { width: 'w-full', multiline: true, labelVisible: true })}
-              <div className="flex gap-1 md:flex-col md:pt-6">
-                <Button variant="ghost" size="sm" onClick={() => onDuplicate(index)}>
-                  Duplicate<span className="sr-only"> row {n}</span>
-                </Button>
-                <Button variant="ghost" size="sm" className="text-coral-300" onClick={() => onRemove(index)}>
-                  Remove<span className="sr-only"> row {n}</span>
-                </Button>
-              </div>
+              <RowActions row={n} onDuplicate={() => onDuplicate(index)} onRemove={() => onRemove(index)} className="flex gap-1 md:flex-col md:pt-6" />
             </div>
           )}
         </td>
