@@ -63,7 +63,7 @@ describe('scenarios', () => {
     const document = checkScenario({ envelope: { alpha: 50, lambda: 0 }, primaries: { massRangeMsun: [4, 1] } });
     const res = await owner.agent.post('/api/scenarios').send({ name: 'Three problems', document }).expect(400);
     expect(res.body.error).toMatchObject({
-      code: 'invalid_scenario',
+      code: 'invalid_input',
       field: 'document.envelope.alpha',
       message: 'document.envelope.alpha must be between 0.01 and 10 (got 50)',
     });
