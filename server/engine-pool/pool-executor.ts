@@ -2,7 +2,8 @@ import { hostname } from 'node:os';
 import type { Piscina } from 'piscina';
 import type { Scenario } from '../../shared/contracts/scenario.ts';
 import type { EngulfmentGrid } from '../../shared/engine/kernel/engulfment.ts';
-import { prepareScenario } from '../../shared/engine/kernel/prepare.ts';
+import { prepareScenario, type PreparedScenario } from '../../shared/engine/kernel/prepare.ts';
+import { scenarioHash } from '../../shared/engine/kernel/scenario-hash.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
 import { BATCH_RETRIES, BatchFailedError, pendingBatches, RunAbortedError, type BatchDone, type ChunkExecutor, type ExecuteRequest } from './chunk-executor.ts';
 import type { ChunkBatchTask } from './chunk-task.ts';
@@ -58,7 +59,13 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
   async function* execute(request: ExecuteRequest): AsyncGenerator<BatchDone> {
     const { signal } = request;
     if (signal.aborted) throw new RunAbortedError(signal.reason);
-    const prepare = async (scenario: Scenario) => prepareScenario(scenario, { engulfmentGrid: await options.resolveGrid?.(scenario) });
+    // The job's own scenario is usually also its first pass: prepare each scenario once.
+    const preparedByHash = new Map<string, Promise<PreparedScenario>>();
+    const prepare = (scenario: Scenario) => {
+      const key = scenarioHash(scenario);
+      if (!preparedByHash.has(key)) preparedByHash.set(key, (async () => prepareScenario(scenario, { engulfmentGrid: await options.resolveGrid?.(scenario) }))());
+      return preparedByHash.get(key)!;
+    };
     const prepared = await prepare(request.scenario);
     const passes = request.points ? await preparePointPasses(request.scenario, request.points, prepare) : undefined;
     const threads = poolThreads(pool);
