@@ -61,19 +61,30 @@ export const CITATIONS = {
 
 export type CitationKey = keyof typeof CITATIONS;
 
-/** The citations of a list of keys. */
-export const citationsOf = (keys: readonly CitationKey[]): Citation[] => keys.map((k) => CITATIONS[k]);
+/**
+ * How a declaration cites a source: a key into CITATIONS, or the citation itself written inline
+ * (so that a method from a new paper is declared in one file; the same fields, DOI only when certain).
+ */
+export type Cite = CitationKey | Citation;
+
+export const citationOf = (cite: Cite): Citation => (typeof cite === 'string' ? CITATIONS[cite] : cite);
+
+/** The citations of a list of keys or inline citations. */
+export const citationsOf = (cites: readonly Cite[]): Citation[] => cites.map(citationOf);
 
 /** "Kroupa 2001; Press et al. 1992" */
-export const shortCitations = (keys: readonly CitationKey[]): string => keys.map((k) => CITATIONS[k].short).join('; ');
+export const shortCitations = (cites: readonly Cite[]): string => cites.map((c) => citationOf(c).short).join('; ');
 
 /** "Kroupa, P. 2001, MNRAS, 322, 231; …" (the free-text form stored in a result's methods list). */
-export const fullCitations = (keys: readonly CitationKey[]): string => keys.map((k) => CITATIONS[k].full).join('; ');
+export const fullCitations = (cites: readonly Cite[]): string => cites.map((c) => citationOf(c).full).join('; ');
 
-/** The DOI of a citation given in its full or short form, when it is known. */
-export function doiOf(reference: string): string | undefined {
+/**
+ * The DOI of a citation given in its full or short form, when it is known: among CITATIONS and
+ * the `known` citations (method-choices.ts passes the ones its declarations write inline).
+ */
+export function doiAmong(reference: string, known: readonly Citation[]): string | undefined {
   const text = reference.trim();
-  return Object.values(CITATIONS as Record<string, Citation>).find((c) => text.startsWith(c.full) || text === c.short)?.doi;
+  return [...Object.values(CITATIONS as Record<string, Citation>), ...known].find((c) => text.startsWith(c.full) || text === c.short)?.doi;
 }
 
 /** https://doi.org/<doi>: a plain link, never fetched by the app. */

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { number } from './field-issues.ts';
+import { SHAPE_CHOICE, unionOf } from './method-choices.ts';
 
 /**
  * A companion occurrence row and a table of rows. A row is one class of companion with a mass
@@ -14,20 +15,8 @@ export const rangeSchema = (min: number, max: number) => z.tuple([number(min, ma
 
 export const COMPANION_CLASSES = ['planet', 'brownDwarf', 'star'] as const;
 
-export const companionShapeSchema = z.discriminatedUnion('kind', [
-  /** dN ∝ M^massSlope P^periodSlope dlnM dlnP (0 = log-uniform), the form of Cumming et al. 2008. */
-  z.strictObject({
-    kind: z.literal('powerlaw'),
-    massSlope: number(-3, 3).default(0),
-    periodSlope: number(-3, 3).default(0),
-  }),
-  /** log10 P normal (Raghavan et al. 2010; Duquennoy & Mayor 1991), truncated to the row; mass flat. */
-  z.strictObject({
-    kind: z.literal('lognormalPeriod'),
-    meanLog10PeriodDays: number(-2, 12).default(5.03),
-    sigmaLog10Period: number(0.01, 10).default(2.28),
-  }),
-]);
+/** A row's distribution shape: the options of SHAPE_CHOICE (method-choices.ts). */
+export const companionShapeSchema = unionOf(SHAPE_CHOICE);
 
 export const companionRowSchema = z
   .strictObject({
@@ -49,7 +38,7 @@ export const companionRowSchema = z
      * from memory: a pointer, not a fit). Absent means 0.
      */
     hostMassSlope: number(-3, 3).optional(),
-    shape: companionShapeSchema.default({ kind: 'powerlaw', massSlope: 0, periodSlope: 0 }),
+    shape: companionShapeSchema.prefault({ kind: 'powerlaw' }),
     label: z.string().max(200).optional(),
     /** Where the row's numbers come from (paper, table). */
     source: z.string().max(2000).optional(),

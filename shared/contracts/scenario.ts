@@ -1,9 +1,19 @@
 import { z } from 'zod';
-import { giantTrackSchema } from './giant-track.ts';
 import { companionRowSchema, emptyRangeMessage, rangeSchema } from './occurrence-table.ts';
 import { formatNumber, integer, number, parseFields, type FieldIssue } from './field-issues.ts';
 import { boundsAt } from './schema-bounds.ts';
-import { PUBLISHED_IFMR_SCHEMAS } from './ifmr-relations.ts';
+import {
+  DISRUPTION_FIELD_CHOICE,
+  DISSOLUTION_CHOICE,
+  GIANT_CHOICE,
+  HISTORY_CHOICE,
+  IFMR_CHOICE,
+  IMF_CHOICE,
+  LIFETIME_CHOICE,
+  PRIMARY_MASS_MSUN,
+  SELECTION_CHOICE,
+  unionOf,
+} from './method-choices.ts';
 
 /**
  * The scenario document: one seeded Monte Carlo population of white-dwarf progenitors and
@@ -11,77 +21,20 @@ import { PUBLISHED_IFMR_SCHEMAS } from './ifmr-relations.ts';
  * Every numeric field has a lower and an upper bound, and its checks word their own messages
  * (`number` in field-issues.ts); `parseScenario` reports every problem, each naming its field.
  * Defaults are written once, on the field; `.prefault` runs a parent's default through them.
+ * Each choice between published methods (IMF, history, lifetime, IFMR, giant model, dissolution,
+ * disruption field, selection, and inside them the superwind, tide and a row's shape) is the union
+ * of the variants its options declare in method-choices.ts.
  */
-
-const LIMITS = {
-  /** Upper end of the primaries' mass range: heavier stars do not end as white dwarfs. */
-  primaryMassMsun: [0.01, 8] as const,
-  ageGyr: [0.01, 13.8] as const,
-};
 
 // ---- primaries -------------------------------------------------------------------------
 
-const imfSchema = z.discriminatedUnion('law', [
-  /** Single power law dN/dM ∝ M^-slope (Salpeter's slope is 2.35). */
-  z.strictObject({ law: z.literal('powerlaw'), slope: number(-3, 6).default(2.35) }),
-  /** Broken power law: slopes[i] applies between breaksMsun[i-1] and breaksMsun[i]. */
-  z.strictObject({
-    law: z.literal('brokenPowerlaw'),
-    breaksMsun: z.array(number(0.01, 8)).min(1).max(8),
-    slopes: z.array(number(-3, 6)).min(2).max(9),
-  }),
-  /** Salpeter (1955): dN/dM ∝ M^-2.35. */
-  z.strictObject({ law: z.literal('salpeter1955') }),
-  /** Kroupa (2001): slopes 0.3 / 1.3 / 2.3 with breaks at 0.08 and 0.5 Msun. */
-  z.strictObject({ law: z.literal('kroupa2001') }),
-  /** Chabrier (2003) single-star IMF: log-normal below 1 Msun, power law above. */
-  z.strictObject({ law: z.literal('chabrier2003') }),
-]);
-
-const historySchema = z.discriminatedUnion('kind', [
-  /** Every star has the age ageGyr. */
-  z.strictObject({ kind: z.literal('burst'), ageGyr: number(...LIMITS.ageGyr).default(10) }),
-  /** Birth times uniform over [0, ageGyr]. */
-  z.strictObject({ kind: z.literal('constant'), ageGyr: number(...LIMITS.ageGyr).default(10) }),
-]);
-
-const lifetimeSchema = z.discriminatedUnion('kind', [
-  /** t_MS = t0Gyr · (M/Msun)^-exponent. */
-  z.strictObject({
-    kind: z.literal('scaling'),
-    t0Gyr: number(0.1, 100).default(10),
-    exponent: number(0.5, 5).default(2.5),
-  }),
-  /** Tabulated t_MS(M), interpolated linearly in log M – log t. */
-  z.strictObject({
-    kind: z.literal('table'),
-    points: z
-      .array(z.strictObject({ massMsun: number(0.01, 150), lifetimeGyr: number(1e-4, 1e5) }))
-      .min(2)
-      .max(200),
-  }),
-]);
-
-const ifmrSchema = z.discriminatedUnion('relation', [
-  /** The published relations (Kalirai et al. 2008, Cummings et al. 2018, …), declared in ifmr-relations.ts. */
-  ...PUBLISHED_IFMR_SCHEMAS,
-  /** A user table of (initial, final) masses, interpolated linearly. */
-  z.strictObject({
-    relation: z.literal('table'),
-    points: z
-      .array(z.strictObject({ initialMsun: number(0.01, 150), finalMsun: number(0.1, 1.4) }))
-      .min(2)
-      .max(200),
-  }),
-]);
-
 const primariesSchema = z.strictObject({
-  imf: imfSchema.prefault({ law: 'kroupa2001' }),
+  imf: unionOf(IMF_CHOICE).prefault({ law: 'kroupa2001' }),
   /** Initial masses of the drawn primaries. */
-  massRangeMsun: rangeSchema(...LIMITS.primaryMassMsun).default([0.8, 8]),
-  history: historySchema.prefault({ kind: 'constant' }),
-  lifetime: lifetimeSchema.prefault({ kind: 'scaling' }),
-  ifmr: ifmrSchema.prefault({ relation: 'cummings2018' }),
+  massRangeMsun: rangeSchema(...PRIMARY_MASS_MSUN).default([0.8, 8]),
+  history: unionOf(HISTORY_CHOICE).prefault({ kind: 'constant' }),
+  lifetime: unionOf(LIFETIME_CHOICE).prefault({ kind: 'scaling' }),
+  ifmr: unionOf(IFMR_CHOICE).prefault({ relation: 'cummings2018' }),
 });
 
 // ---- companions and their fates ---------------------------------------------------------
@@ -94,14 +47,6 @@ const companionsSchema = z.strictObject({
   tableId: z.string().min(1).max(100).optional(),
 });
 
-const fixedReachSchema = z.strictObject({
-  kind: z.literal('fixedReach'),
-  /** Engulfed iff the initial semi-major axis is below this. */
-  reachAU: number(0.01, 100).default(2),
-});
-
-const giantSchema = z.discriminatedUnion('kind', [fixedReachSchema, giantTrackSchema.strict()]);
-
 const envelopeSchema = z.strictObject({
   /** Common-envelope efficiency α_CE (Webbink 1984). */
   alpha: number(0.01, 10).default(1),
@@ -109,52 +54,10 @@ const envelopeSchema = z.strictObject({
   lambda: number(0.05, 5).default(0.5),
 });
 
-const dissolutionSchema = z.discriminatedUnion('kind', [
-  /** Every companion that cannot eject the envelope reaches the core and is shredded (default). */
-  z.strictObject({ kind: z.literal('none') }),
-  /**
-   * Companions lighter than massMJup dissolve in the envelope before they reach the core: no
-   * debris disc, no field (an assumption; the mass is the user's choice).
-   */
-  z.strictObject({ kind: z.literal('belowMass'), massMJup: number(0.01, 100).default(1) }),
-]);
-
 const disruptionSchema = z.strictObject({
   /** η in the tidal radius r_t = η R2 (M_core/M2)^(1/3); 2.44 is the fluid Roche limit. Sets the debris disc's radius of the accretion field. */
   eta: number(0.1, 5).default(2.44),
-  dissolution: dissolutionSchema.prefault({ kind: 'none' }),
-});
-
-const lognormalFieldSchema = z.strictObject({
-  kind: z.literal('lognormal'),
-  medianMG: number(1e-3, 1e5),
-  widthDex: number(0, 3).default(0.5),
-});
-
-/**
- * B = referenceMG · (M2 / referenceMassMJup)^slope with log-normal scatter widthDex: the field
- * grows with the shredded mass, the trend of the disc-dynamo estimates (Nordhaus et al. 2011,
- * PNAS 108, 3135). The defaults (100 MG at 100 MJup, slope 0.6: ≈ 6 MG for 1 MJup, ≈ 260 MG for
- * 0.5 Msun) are an illustrative reading of that trend, not a fit.
- */
-const companionScaledFieldSchema = z.strictObject({
-  kind: z.literal('companionScaled'),
-  referenceMG: number(1e-3, 1e5).default(100),
-  referenceMassMJup: number(0.01, 1000).default(100),
-  slope: number(-2, 3).default(0.6),
-  widthDex: number(0, 3).default(0.5),
-});
-
-const accretionFieldSchema = z.strictObject({
-  kind: z.literal('accretion'),
-  /** Shakura & Sunyaev (1973) viscosity parameter of the debris disc. */
-  alpha: number(1e-4, 1).default(0.1),
-  /** Disc aspect ratio H/R. */
-  aspectRatio: number(1e-3, 0.5).default(0.1),
-  /** Fraction of the companion's mass that ends in the disc. */
-  discMassFraction: number(1e-4, 1).default(1),
-  /** Log-normal scatter (dex) around the computed field; 0 = none. */
-  widthDex: number(0, 3).default(0),
+  dissolution: unionOf(DISSOLUTION_CHOICE).prefault({ kind: 'none' }),
 });
 
 /** Field of a close post-common-envelope survivor (Tout et al. 2008's near-merger case). */
@@ -170,9 +73,7 @@ const closeSurvivorFieldSchema = z.strictObject({
 const ignoredEngine1Key = z.unknown().optional();
 
 const fieldSchema = z.strictObject({
-  disruption: z
-    .discriminatedUnion('kind', [lognormalFieldSchema, companionScaledFieldSchema, accretionFieldSchema])
-    .prefault({ kind: 'companionScaled' }),
+  disruption: unionOf(DISRUPTION_FIELD_CHOICE).prefault({ kind: 'companionScaled' }),
   closeSurvivor: closeSurvivorFieldSchema.prefault({ kind: 'lognormal' }),
   /**
    * A field made by a companion (disruption, close survivor) counts only once the white dwarf's
@@ -189,7 +90,7 @@ const fossilSchema = z.strictObject({
   enabled: z.boolean().default(false),
   /** Fraction of progenitors inside massRangeMsun that carry a main-sequence field. */
   fraction: number(0, 1).default(0.05),
-  massRangeMsun: rangeSchema(...LIMITS.primaryMassMsun).default([1.5, 4]),
+  massRangeMsun: rangeSchema(...PRIMARY_MASS_MSUN).default([1.5, 4]),
   /** Log-normal main-sequence surface field: median in kG, width in dex. */
   msField: z
     .strictObject({ medianKG: number(1e-3, 1e3).default(1), widthDex: number(0, 3).default(0.5) })
@@ -204,21 +105,6 @@ const channelsSchema = z.strictObject({
   coreMerger: ignoredEngine1Key,
   fossil: fossilSchema.prefault({}),
 });
-
-const selectionSchema = z.discriminatedUnion('kind', [
-  z.strictObject({ kind: z.literal('volume') }),
-  /**
-   * Accept each white dwarf with probability ∝ F^(3/2), F its optical flux: a blackbody at
-   * wavelengthNm from its radius (Nauenberg 1972) and effective temperature (Mestel cooling).
-   */
-  z.strictObject({
-    kind: z.literal('magnitudeLimited'),
-    /** Cooling ages below this are raised to it (Mestel's law fails for hot young white dwarfs). */
-    coolingAgeFloorGyr: number(1e-3, 2).default(0.1),
-    /** Wavelength of the survey's band, nm (V band ≈ 550 nm). */
-    wavelengthNm: number(300, 2500).default(550),
-  }),
-]);
 
 const observedSchema = z.strictObject({
   magnetic: integer(0, 1e9),
@@ -235,12 +121,12 @@ export const scenarioSchema = z
     systems: integer(1e3, 1e10).default(1e6),
     primaries: primariesSchema.prefault({}),
     companions: companionsSchema.prefault({ rows: [] }),
-    giant: giantSchema.prefault({ kind: 'fixedReach' }),
+    giant: unionOf(GIANT_CHOICE).prefault({ kind: 'fixedReach' }),
     envelope: envelopeSchema.prefault({}),
     disruption: disruptionSchema.prefault({}),
     field: fieldSchema.prefault({}),
     channels: channelsSchema.prefault({}),
-    selection: selectionSchema.default({ kind: 'volume' }),
+    selection: unionOf(SELECTION_CHOICE).prefault({ kind: 'volume' }),
     /** An observed sample to test the prediction against. */
     observed: observedSchema.optional(),
   })
@@ -300,10 +186,12 @@ export type HistoryOptions = Scenario['primaries']['history'];
 export type LifetimeOptions = Scenario['primaries']['lifetime'];
 export type IfmrOptions = Scenario['primaries']['ifmr'];
 export type GiantOptions = Scenario['giant'];
+export type GiantTrackOptions = Extract<GiantOptions, { kind: 'track' }>;
 export type FieldOptions = Scenario['field'];
-export type LognormalFieldOptions = z.output<typeof lognormalFieldSchema>;
-export type AccretionFieldOptions = z.output<typeof accretionFieldSchema>;
-export type CompanionScaledFieldOptions = z.output<typeof companionScaledFieldSchema>;
+export type DisruptionFieldOptions = FieldOptions['disruption'];
+export type LognormalFieldOptions = Extract<DisruptionFieldOptions, { kind: 'lognormal' }>;
+export type AccretionFieldOptions = Extract<DisruptionFieldOptions, { kind: 'accretion' }>;
+export type CompanionScaledFieldOptions = Extract<DisruptionFieldOptions, { kind: 'companionScaled' }>;
 export type CloseSurvivorFieldOptions = z.output<typeof closeSurvivorFieldSchema>;
 export type DissolutionOptions = Scenario['disruption']['dissolution'];
 export type FossilOptions = Scenario['channels']['fossil'];

@@ -1,4 +1,4 @@
-import { doiOf } from '../../../shared/contracts/citations.ts';
+import { doiOf } from '../../../shared/contracts/method-choices.ts';
 
 /**
  * BibTeX entries from the free-text references of a methods list ("Surname, I. Year, Journal,

@@ -1,4 +1,4 @@
-import type { GiantTrackOptions } from '../../contracts/giant-track.ts';
+import type { GiantTrackOptions } from '../../contracts/scenario.ts';
 import { EngineError, requireInRange } from '../errors.ts';
 import type { GiantTrack } from './giant-track.ts';
 import { evolveOrbitAlongTrack } from './orbit-evolution.ts';

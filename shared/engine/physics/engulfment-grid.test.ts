@@ -1,5 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { giantTrackSchema } from '../../contracts/giant-track.ts';
+import { giantTrackSchema } from '../../contracts/method-choices.ts';
 import { EngineError } from '../errors.ts';
 import { criticalSeparationOnTrackAU } from './critical-separation.ts';
 import {

@@ -1,7 +1,7 @@
 import canonicalize from 'canonicalize';
 import { sha256 } from '@noble/hashes/sha2.js';
 import { bytesToHex, utf8ToBytes } from '@noble/hashes/utils.js';
-import type { GiantTrackOptions } from '../../contracts/giant-track.ts';
+import type { GiantTrackOptions } from '../../contracts/scenario.ts';
 import { EngineError, requireInRange } from '../errors.ts';
 import { criticalSeparationOnTrackAU } from './critical-separation.ts';
 import { buildGiantTrack } from './giant-track.ts';

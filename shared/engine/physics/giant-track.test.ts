@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { giantTrackSchema } from '../../contracts/giant-track.ts';
+import { giantTrackSchema } from '../../contracts/method-choices.ts';
 import { RSUN_PER_AU } from '../constants.ts';
 import { EngineError } from '../errors.ts';
 import { agbLuminosityLsun } from './agb-luminosity.ts';

@@ -1,4 +1,4 @@
-import type { GiantTrackOptions } from '../../contracts/giant-track.ts';
+import type { GiantTrackOptions } from '../../contracts/scenario.ts';
 import { RSUN_PER_AU } from '../constants.ts';
 import { EngineError, requireInRange } from '../errors.ts';
 import { agbLuminosityLsun, PACZYNSKI_ZERO_POINT_MSUN } from './agb-luminosity.ts';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { giantTrackSchema } from '../../contracts/giant-track.ts';
+import { giantTrackSchema } from '../../contracts/method-choices.ts';
 import { MJUP_MSUN } from '../constants.ts';
 import { EngineError } from '../errors.ts';
 import { buildGiantTrack } from './giant-track.ts';

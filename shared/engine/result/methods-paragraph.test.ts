@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { CITATIONS } from '../../contracts/citations.ts';
+import { citationOf } from '../../contracts/citations.ts';
 import { METHOD_CHOICES, optionOf } from '../../contracts/method-choices.ts';
 import { parseScenario, type Scenario } from '../../contracts/scenario.ts';
 import { assumptionsFor } from './assumptions.ts';
@@ -93,7 +93,7 @@ describe('methods paragraph', () => {
       const text = methodsParagraph(scenario, result);
       const chosen = optionOf(choice, (option.template as Record<string, unknown>)[choice.discriminator]);
       expect(chosen).toBe(option);
-      for (const key of option.cites) expect(text, `${choice.path.join('.')} = ${option.value}`).toContain(CITATIONS[key].short);
+      for (const key of option.cites) expect(text, `${choice.path.join('.')} = ${option.value}`).toContain(citationOf(key).short);
       expect(text).not.toMatch(CAMEL_CASE);
     }
   });

@@ -1,4 +1,4 @@
-import { CITATIONS, shortCitations, type Citation, type CitationKey } from '../../contracts/citations.ts';
+import { citationOf, shortCitations, type Citation, type Cite, type CitationKey } from '../../contracts/citations.ts';
 import {
   clause,
   DISRUPTION_FIELD_CHOICE,
@@ -79,8 +79,8 @@ export function methodsParagraph(scenario: Scenario, result: ParagraphResult, ru
 
 /** Every published source the paragraph cites for this scenario, in first-cited order. */
 export function paragraphCitations(scenario: Scenario): Citation[] {
-  const keys: CitationKey[] = [];
-  const add = (ks: readonly CitationKey[]) => ks.forEach((k) => keys.includes(k) || keys.push(k));
+  const cited: Citation[] = [];
+  const add = (cites: readonly Cite[]) => cites.map(citationOf).forEach((c) => cited.includes(c) || cited.push(c));
   const chosen = (choice: (typeof METHOD_CHOICES)[number], value: Record<string, unknown>) => add(optionOf(choice, value[choice.discriminator])?.cites ?? []);
   const p = scenario.primaries;
   chosen(IMF_CHOICE, p.imf);
@@ -100,7 +100,7 @@ export function paragraphCitations(scenario: Scenario): Citation[] {
   add(['nauenberg']);
   chosen(SELECTION_CHOICE, scenario.selection);
   if (scenario.observed) add(['clopper']);
-  return keys.map((k) => CITATIONS[k]);
+  return cited;
 }
 
 /**

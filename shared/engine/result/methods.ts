@@ -1,6 +1,7 @@
 import type { MethodEntry } from '../../contracts/result.ts';
 import type { Scenario } from '../../contracts/scenario.ts';
-import { CITATIONS, type CitationKey } from '../../contracts/citations.ts';
+import { CITATIONS, fullCitations, type CitationKey } from '../../contracts/citations.ts';
+import { IFMR_CHOICE, optionOf } from '../../contracts/method-choices.ts';
 
 const REF = Object.fromEntries(Object.entries(CITATIONS).map(([k, c]) => [k, c.full])) as Record<CitationKey, string>;
 const CLASS_WORDS = { planet: 'planets', brownDwarf: 'brown dwarfs', star: 'low-mass stars' } as const;
@@ -23,9 +24,12 @@ export function methodsUsed(scenario: Scenario): MethodEntry[] {
   if (p.lifetime.kind === 'scaling') add('Main-sequence lifetime', `t_MS = ${p.lifetime.t0Gyr} Gyr (M/Msun)^-${p.lifetime.exponent}`, REF.hansen);
   else add('Main-sequence lifetime', `user table of ${p.lifetime.points.length} points, log-log interpolation`, 'user supplied');
   const ifmr = p.ifmr;
-  if (ifmr.relation === 'kalirai2008') add('Initial–final mass relation', 'Mf = 0.109 Mi + 0.394 Msun', REF.kalirai);
-  else if (ifmr.relation === 'cummings2018') add('Initial–final mass relation', `piecewise-linear, ${ifmr.calibration.toUpperCase()}-based`, REF.cummings);
-  else add('Initial–final mass relation', `user table of ${ifmr.points.length} points, linear interpolation`, 'user supplied');
+  if (ifmr.relation === 'table') add('Initial–final mass relation', `user table of ${ifmr.points.length} points, linear interpolation`, 'user supplied');
+  else {
+    // A published relation: its words and sources as declared (shared/contracts/ifmr-relations.ts).
+    const published = optionOf(IFMR_CHOICE, ifmr.relation)!;
+    add('Initial–final mass relation', published.words(ifmr), fullCitations(published.cites));
+  }
 
   const rows = scenario.companions.rows ?? [];
   if (rows.some((r) => r.shape.kind === 'powerlaw')) add('Companion distribution', 'power law in ln M and ln P (dN ∝ M^a P^b dlnM dlnP), exact inverse-CDF sampling', REF.cumming);

@@ -1,5 +1,6 @@
 import { Fragment } from 'react';
-import { CITATIONS, doiOf, doiUrl, type Citation, type CitationKey } from '../../../shared/contracts/citations.ts';
+import { citationOf, doiUrl, type Citation, type Cite } from '../../../shared/contracts/citations.ts';
+import { doiOf } from '../../../shared/contracts/method-choices.ts';
 
 const linkClass = 'underline decoration-dotted underline-offset-2 hover:text-foam-50';
 
@@ -15,14 +16,14 @@ function CitationLink({ citation, text }: { citation: Citation | undefined; text
   );
 }
 
-/** Short citations by key ("Kroupa 2001; Press et al. 1992"), each linked to its DOI when it has one. */
-export function CitationLinks({ cites, full = false }: { cites: readonly CitationKey[]; full?: boolean }) {
+/** Short citations by key or inline ("Kroupa 2001; Press et al. 1992"), each linked to its DOI when it has one. */
+export function CitationLinks({ cites, full = false }: { cites: readonly Cite[]; full?: boolean }) {
   return (
     <>
-      {cites.map((key, i) => (
-        <Fragment key={key}>
+      {cites.map(citationOf).map((citation, i) => (
+        <Fragment key={citation.short}>
           {i > 0 && '; '}
-          <CitationLink citation={CITATIONS[key]} text={full ? CITATIONS[key].full : CITATIONS[key].short} />
+          <CitationLink citation={citation} text={full ? citation.full : citation.short} />
         </Fragment>
       ))}
     </>
