@@ -4,7 +4,7 @@ import { number } from './field-issues.ts';
 import { PUBLISHED_IFMRS } from './ifmr-relations.ts';
 import { citationsOfChoices, defineChoice, option, type MethodChoice, unionOf } from './method-option.ts';
 
-export { clause, optionOf, unionOf, type MethodChoice, type MethodOption } from './method-option.ts';
+export { clause, optionOf, unionOf, type MethodChoice, type MethodOption, type ValueOf } from './method-option.ts';
 
 /**
  * Every choice the scenario document offers between published methods (each discriminated union),

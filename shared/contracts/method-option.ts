@@ -48,7 +48,13 @@ export interface MethodChoice<D extends string = string, O extends readonly Meth
 /** Declares an option; the schema comes first so that `words` reads its parsed fields with their types. */
 export const option = <S extends VariantSchema>(declaration: OptionDeclaration<S>): OptionDeclaration<S> => declaration;
 
-type Completed<O extends readonly OptionDeclaration[]> = { readonly [K in keyof O]: O[K] extends OptionDeclaration<infer S> ? MethodOption<S> : never };
+/** Each declared option completed, its value typed as its schema's literal. */
+type Completed<D extends string, O extends readonly OptionDeclaration[]> = {
+  readonly [K in keyof O]: O[K] extends OptionDeclaration<infer S> ? MethodOption<S> & { readonly value: z.output<S>[D] & string } : never;
+};
+
+/** The discriminator values of a choice ("kroupa2001" | "salpeter1955" | …). */
+export type ValueOf<C extends MethodChoice> = C['options'][number]['value'];
 
 /**
  * A choice from its options: each option's value is read from its schema's discriminator literal
@@ -59,7 +65,7 @@ export function defineChoice<const D extends string, const O extends readonly [O
   path: readonly (string | number)[],
   discriminator: D,
   options: O,
-): MethodChoice<D, Completed<O>> {
+): MethodChoice<D, Completed<D, O>> {
   const completed = options.map((declared) => {
     const literal = declared.schema.shape[discriminator];
     if (!(literal instanceof z.ZodLiteral)) throw new Error(`${path.join('.')}: every option needs a literal ${discriminator}`);
@@ -67,7 +73,7 @@ export function defineChoice<const D extends string, const O extends readonly [O
     const template = declared.schema.parse({ [discriminator]: value, ...declared.start }) as Record<string, unknown>;
     return { ...declared, value, template };
   });
-  return { path, discriminator, options: completed as unknown as Completed<O> };
+  return { path, discriminator, options: completed as unknown as Completed<D, O> };
 }
 
 type SchemasOf<O extends readonly MethodOption[]> = { -readonly [K in keyof O]: O[K]['schema'] };
@@ -92,3 +98,14 @@ export function clause(choice: MethodChoice, chosen: Record<string, unknown>): s
 
 /** Every citation the options of these choices carry, each once. */
 export const citationsOfChoices = (choices: readonly MethodChoice[]) => [...new Set(choices.flatMap((c) => c.options.flatMap((o) => o.cites.map(citationOf))))];
+
+/**
+ * A dispatch table on a parsed union `U`: one entry per discriminator value, each reading its own
+ * variant (and any further arguments `A`). A variant added to a choice without its entry is a type error.
+ */
+export type ByOption<U extends Record<D, string>, D extends keyof U, R, A extends unknown[] = []> = { [K in U[D]]: (o: Extract<U, Record<D, K>>, ...rest: A) => R };
+
+/** A function of the union that calls the table's entry for the variant it is given (see ByOption). */
+export function byOption<U extends Record<D, string>, D extends keyof U, R, A extends unknown[] = []>(discriminator: D, table: ByOption<U, D, R, A>): (o: U, ...rest: A) => R {
+  return (o, ...rest) => (table[o[discriminator]] as (o: U, ...rest: A) => R)(o, ...rest);
+}

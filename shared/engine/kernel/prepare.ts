@@ -1,5 +1,6 @@
-import type { CompanionRow } from '../../contracts/occurrence-table.ts';
-import type { Scenario } from '../../contracts/scenario.ts';
+import { byOption } from '../../contracts/method-option.ts';
+import type { CompanionRow, CompanionShape } from '../../contracts/occurrence-table.ts';
+import type { DissolutionOptions, GiantOptions, HistoryOptions, Scenario, SelectionOptions } from '../../contracts/scenario.ts';
 import { MJUP_MSUN } from '../constants.ts';
 import { EngineError } from '../errors.ts';
 import { standardNormalCdf } from '../numerics/normal-cdf.ts';
@@ -134,7 +135,7 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
     chunkCount,
     imf,
     massRangeMsun: [p.massRangeMsun[0], p.massRangeMsun[1]],
-    constantHistory: p.history.kind === 'constant',
+    constantHistory: isConstantHistory(p.history),
     ageGyr: p.history.ageGyr,
     lifetime,
     formationScreen: buildFormationScreen(imf, lifetime),
@@ -142,11 +143,11 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
     rows: preparedRows,
     multiplier,
     multiplierMax,
-    giant: scenario.giant.kind === 'fixedReach' ? { kind: 'fixedReach', reachAU: scenario.giant.reachAU } : buildTrackGiant(scenario, options.engulfmentGrid),
+    giant: preparedGiant(scenario.giant, scenario, options.engulfmentGrid),
     envelope: { alpha: scenario.envelope.alpha, lambda: scenario.envelope.lambda },
     disruption: {
       eta: scenario.disruption.eta,
-      dissolutionBelowMsun: scenario.disruption.dissolution.kind === 'belowMass' ? scenario.disruption.dissolution.massMJup * MJUP_MSUN : 0,
+      dissolutionBelowMsun: dissolutionBelowMsun(scenario.disruption.dissolution),
     },
     field: scenario.field,
     channels: {
@@ -159,9 +160,22 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
         msField: { medianKG: fossil.msField.medianKG, widthDex: fossil.msField.widthDex },
       },
     },
-    selection: preparedSelection(scenario, lifetime, ifmr),
+    selection: preparedSelection(scenario.selection, scenario, lifetime, ifmr),
   };
 }
+
+// One entry per option of each choice the preparation reads (a new variant without one is a type error).
+const isConstantHistory = byOption<HistoryOptions, 'kind', boolean>('kind', { constant: () => true, burst: () => false });
+
+const preparedGiant = byOption<GiantOptions, 'kind', PreparedGiant, [Scenario, EngulfmentGrid | undefined]>('kind', {
+  fixedReach: (giant) => ({ kind: 'fixedReach', reachAU: giant.reachAU }),
+  track: (_giant, scenario, grid) => buildTrackGiant(scenario, grid),
+});
+
+const dissolutionBelowMsun = byOption<DissolutionOptions, 'kind', number>('kind', {
+  none: () => 0,
+  belowMass: (dissolution) => dissolution.massMJup * MJUP_MSUN,
+});
 
 function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: number, multiplier: number): PreparedRow {
   // The most frequent row is always drawn; rounding must never let "present" exceed "drawn".
@@ -169,7 +183,6 @@ function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: num
   const presentThreshold = Math.min(drawThreshold, row.occurrence * multiplier);
   const [massLo, massHi] = row.massRatio ?? (row.massMsun ? row.massMsun : [row.massMJup![0] * MJUP_MSUN, row.massMJup![1] * MJUP_MSUN]);
   const [periodLoDays, periodHiDays] = row.periodDays;
-  const shape = row.shape;
   const base = {
     occurrence: row.occurrence,
     hostMassSlope: row.hostMassSlope ?? 0,
@@ -181,11 +194,18 @@ function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: num
     periodLoDays,
     periodHiDays,
   };
-  if (shape.kind === 'powerlaw') {
+  return { ...base, ...preparedShape(row.shape, row, massLo, massHi) };
+}
+
+/** The hot loop's numbers for a row's distribution shape. */
+type ShapeNumbers = Omit<PreparedRow, 'occurrence' | 'hostMassSlope' | 'drawThreshold' | 'presentThreshold' | 'massIsRatio' | 'massLo' | 'massHi' | 'periodLoDays' | 'periodHiDays'>;
+
+const preparedShape = byOption<CompanionShape, 'kind', ShapeNumbers, [CompanionRow, number, number]>('kind', {
+  powerlaw: (shape, row, massLo, massHi) => {
+    const [periodLoDays, periodHiDays] = row.periodDays;
     const massQuantile = powerLawQuantileTable(massLo, massHi, shape.massSlope);
     const periodQuantile = powerLawQuantileTable(periodLoDays, periodHiDays, shape.periodSlope);
     return {
-      ...base,
       massQuantile,
       periodQuantile,
       log10MassTable: tabulateQuantile((u) => powerLawLog10Quantile(massQuantile, u)),
@@ -195,46 +215,49 @@ function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: num
       cdfLo: 0,
       cdfSpan: 1,
     };
-  }
-  const mean = shape.meanLog10PeriodDays;
-  const sigma = shape.sigmaLog10Period;
-  const cdfLo = standardNormalCdf((Math.log10(periodLoDays) - mean) / sigma);
-  const cdfHi = standardNormalCdf((Math.log10(periodHiDays) - mean) / sigma);
-  if (!(cdfHi - cdfLo > 1e-12)) {
-    throw new EngineError('companions.rows[].periodDays', row.periodDays, `a range holding more than 1e-12 of the log-normal (mean ${mean}, sigma ${sigma})`);
-  }
-  return {
-    ...base,
-    massQuantile: null,
-    periodQuantile: null,
-    log10MassTable: null,
-    log10PeriodTable: tabulateQuantile((u) => mean + sigma * normalQuantile(cdfLo + u * (cdfHi - cdfLo))),
-    meanLog10PeriodDays: mean,
-    sigmaLog10Period: sigma,
-    cdfLo,
-    cdfSpan: cdfHi - cdfLo,
-  };
-}
+  },
+  lognormalPeriod: (shape, row) => {
+    const [periodLoDays, periodHiDays] = row.periodDays;
+    const mean = shape.meanLog10PeriodDays;
+    const sigma = shape.sigmaLog10Period;
+    const cdfLo = standardNormalCdf((Math.log10(periodLoDays) - mean) / sigma);
+    const cdfHi = standardNormalCdf((Math.log10(periodHiDays) - mean) / sigma);
+    if (!(cdfHi - cdfLo > 1e-12)) {
+      throw new EngineError('companions.rows[].periodDays', row.periodDays, `a range holding more than 1e-12 of the log-normal (mean ${mean}, sigma ${sigma})`);
+    }
+    return {
+      massQuantile: null,
+      periodQuantile: null,
+      log10MassTable: null,
+      log10PeriodTable: tabulateQuantile((u) => mean + sigma * normalQuantile(cdfLo + u * (cdfHi - cdfLo))),
+      meanLog10PeriodDays: mean,
+      sigmaLog10Period: sigma,
+      cdfLo,
+      cdfSpan: cdfHi - cdfLo,
+    };
+  },
+});
 
-function preparedSelection(scenario: Scenario, lifetime: PreparedLifetime, ifmr: IfmrSegments): PreparedSelection {
-  const selection = scenario.selection;
-  if (selection.kind === 'volume') return { kind: 'volume' };
-  const p = scenario.primaries;
-  const [lo, hi] = p.massRangeMsun;
-  const age = p.history.ageGyr;
-  const lightest = lightestWhiteDwarfProgenitorMsun(lifetime, p.massRangeMsun, age) ?? lo;
-  const heaviest = heaviestWhiteDwarfMsun(ifmr, lightest, hi);
-  // The youngest cooling age any white dwarf can have: zero for constant star formation, and
-  // age − t_MS(heaviest primary) for a burst, raised to the floor. The flux falls with cooling
-  // age, so the brightest white dwarf of the run is among those; its mass is found by a scan
-  // from the lightest helium white dwarf (0.1 Msun) to the heaviest, and normalising to it keeps
-  // the acceptance ≤ 1.
-  const youngest = Math.max(selection.coolingAgeFloorGyr, p.history.kind === 'burst' ? Math.max(0, age - lifetimeGyr(lifetime, hi)) : 0);
-  let referenceFlux = 0;
-  const scan = 256;
-  for (let k = 0; k <= scan; k++) {
-    const mass = REFERENCE_SCAN_LO_MSUN + ((heaviest - REFERENCE_SCAN_LO_MSUN) * k) / scan;
-    referenceFlux = Math.max(referenceFlux, opticalFlux(mass, youngest, selection.wavelengthNm));
-  }
-  return { kind: 'magnitudeLimited', coolingAgeFloorGyr: selection.coolingAgeFloorGyr, wavelengthNm: selection.wavelengthNm, referenceFlux: referenceFlux * (1 + 1e-6) };
-}
+const preparedSelection = byOption<SelectionOptions, 'kind', PreparedSelection, [Scenario, PreparedLifetime, IfmrSegments]>('kind', {
+  volume: () => ({ kind: 'volume' }),
+  magnitudeLimited: (selection, scenario, lifetime, ifmr) => {
+    const p = scenario.primaries;
+    const [lo, hi] = p.massRangeMsun;
+    const age = p.history.ageGyr;
+    const lightest = lightestWhiteDwarfProgenitorMsun(lifetime, p.massRangeMsun, age) ?? lo;
+    const heaviest = heaviestWhiteDwarfMsun(ifmr, lightest, hi);
+    // The youngest cooling age any white dwarf can have: zero for constant star formation, and
+    // age − t_MS(heaviest primary) for a burst, raised to the floor. The flux falls with cooling
+    // age, so the brightest white dwarf of the run is among those; its mass is found by a scan
+    // from the lightest helium white dwarf (0.1 Msun) to the heaviest, and normalising to it keeps
+    // the acceptance ≤ 1.
+    const youngest = Math.max(selection.coolingAgeFloorGyr, isConstantHistory(p.history) ? 0 : Math.max(0, age - lifetimeGyr(lifetime, hi)));
+    let referenceFlux = 0;
+    const scan = 256;
+    for (let k = 0; k <= scan; k++) {
+      const mass = REFERENCE_SCAN_LO_MSUN + ((heaviest - REFERENCE_SCAN_LO_MSUN) * k) / scan;
+      referenceFlux = Math.max(referenceFlux, opticalFlux(mass, youngest, selection.wavelengthNm));
+    }
+    return { kind: 'magnitudeLimited', coolingAgeFloorGyr: selection.coolingAgeFloorGyr, wavelengthNm: selection.wavelengthNm, referenceFlux: referenceFlux * (1 + 1e-6) };
+  },
+});

@@ -1,3 +1,5 @@
+import { byOption } from '../../contracts/method-option.ts';
+import type { DisruptionFieldOptions } from '../../contracts/scenario.ts';
 import { RSUN_PER_AU } from '../constants.ts';
 import { normalQuantile } from '../numerics/normal-quantile.ts';
 import { postCommonEnvelopeSeparationAU } from '../physics/common-envelope-webbink1984.ts';
@@ -577,14 +579,19 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: numb
   fateOut[1] = rowDisruptionField[r];
 }
 
-/** Field (MG) of a white dwarf whose companion of mass m2 (radius r2) was shredded near the core. */
+/** Field (MG) of a white dwarf whose companion of mass m2 (radius r2) was shredded near the core, per option of DISRUPTION_FIELD_CHOICE. */
+const disruptionFieldOf = byOption<DisruptionFieldOptions, 'kind', number, [PreparedPoint, number, number, number, number, number]>('kind', {
+  lognormal: (f, _point, _coreMass, _coreRadius, _m2, _r2, z) => lognormalFieldMG(f.medianMG, f.widthDex, z),
+  companionScaled: (f, _point, _coreMass, _coreRadius, m2, _r2, z) => lognormalFieldMG(companionScaledMedianMG(m2, f.referenceMG, f.referenceMassMJup, f.slope), f.widthDex, z),
+  accretion: (f, point, coreMass, coreRadius, m2, r2, z) => {
+    // The debris disc forms at the companion's tidal radius around the core (η sets it).
+    const tidalRadius = tidalRadiusRsun(point.disruption.eta, r2, coreMass, m2);
+    return lognormalFieldMG(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio), f.widthDex, z);
+  },
+});
+
 function disruptionFieldMG(point: PreparedPoint, coreMass: number, coreRadius: number, m2: number, r2: number, z: number): number {
-  const f = point.field.disruption;
-  if (f.kind === 'lognormal') return lognormalFieldMG(f.medianMG, f.widthDex, z);
-  if (f.kind === 'companionScaled') return lognormalFieldMG(companionScaledMedianMG(m2, f.referenceMG, f.referenceMassMJup, f.slope), f.widthDex, z);
-  // The debris disc forms at the companion's tidal radius around the core (η sets it).
-  const tidalRadius = tidalRadiusRsun(point.disruption.eta, r2, coreMass, m2);
-  return lognormalFieldMG(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio), f.widthDex, z);
+  return disruptionFieldOf(point.field.disruption, point, coreMass, coreRadius, m2, r2, z);
 }
 
 function survivor(fate: number, separationAU: number): void {

@@ -1,7 +1,8 @@
 import type { CompanionRow } from '../../contracts/occurrence-table.ts';
-import type { Scenario } from '../../contracts/scenario.ts';
+import type { IfmrOptions, LifetimeOptions, Scenario } from '../../contracts/scenario.ts';
+import { byOption, type ByOption } from '../../contracts/method-option.ts';
 import { EngineError } from '../errors.ts';
-import { publishedIfmrPieces } from '../../contracts/ifmr-relations.ts';
+import { PUBLISHED_IFMRS, publishedIfmrPieces, type PublishedIfmrOptions } from '../../contracts/ifmr-relations.ts';
 import { finalMassMsun, type IfmrSegments } from '../physics/ifmr-piecewise.ts';
 import { ifmrFromTable } from '../physics/ifmr-table.ts';
 import { scalingLifetimeAtLog10MassGyr, scalingLifetimeGyr } from '../physics/lifetime-scaling.ts';
@@ -22,22 +23,28 @@ export function resolvedRows(scenario: Scenario): CompanionRow[] {
   return rows;
 }
 
-/** The scenario's IFMR as piecewise-linear segments. */
-export function ifmrSegments(scenario: Scenario): IfmrSegments {
-  const ifmr = scenario.primaries.ifmr;
-  // A user table, or a published relation's coefficients from its declaration (shared/contracts/ifmr-relations.ts).
-  return ifmr.relation === 'table' ? ifmrFromTable(ifmr.points) : publishedIfmrPieces(ifmr);
-}
+/**
+ * The scenario's IFMR as piecewise-linear segments: a user table, or a published relation's
+ * coefficients from its declaration (shared/contracts/ifmr-relations.ts, where every published
+ * relation must declare its `pieces`).
+ */
+const ifmrSegmentsOf = byOption<IfmrOptions, 'relation', IfmrSegments>('relation', {
+  table: (ifmr) => ifmrFromTable(ifmr.points),
+  ...(Object.fromEntries(PUBLISHED_IFMRS.map((d) => [d.schema.shape.relation.value, publishedIfmrPieces])) as ByOption<PublishedIfmrOptions, 'relation', IfmrSegments>),
+});
 
-export function preparedLifetime(scenario: Scenario): PreparedLifetime {
-  const lifetime = scenario.primaries.lifetime;
-  if (lifetime.kind === 'scaling') return { kind: 'scaling', t0Gyr: lifetime.t0Gyr, exponent: lifetime.exponent };
-  return {
+export const ifmrSegments = (scenario: Scenario): IfmrSegments => ifmrSegmentsOf(scenario.primaries.ifmr);
+
+const preparedLifetimeOf = byOption<LifetimeOptions, 'kind', PreparedLifetime>('kind', {
+  scaling: (lifetime) => ({ kind: 'scaling', t0Gyr: lifetime.t0Gyr, exponent: lifetime.exponent }),
+  table: (lifetime) => ({
     kind: 'table',
     log10Mass: lifetime.points.map((pt) => Math.log10(pt.massMsun)),
     log10Gyr: lifetime.points.map((pt) => Math.log10(pt.lifetimeGyr)),
-  };
-}
+  }),
+});
+
+export const preparedLifetime = (scenario: Scenario): PreparedLifetime => preparedLifetimeOf(scenario.primaries.lifetime);
 
 /** Main-sequence lifetime (Gyr) under the prepared relation. */
 export function lifetimeGyr(lifetime: PreparedLifetime, massMsun: number): number {

@@ -1,7 +1,7 @@
 import type { GiantTrackOptions } from '../../contracts/scenario.ts';
 import { EngineError, requireInRange } from '../errors.ts';
 import type { GiantTrack } from './giant-track.ts';
-import { evolveOrbitAlongTrack } from './orbit-evolution.ts';
+import { evolveOrbitAlongTrack, tideActs } from './orbit-evolution.ts';
 import { rocheLobeFraction } from './roche-lobe-eggleton1983.ts';
 
 /** Bisection stops when the bracket [lo, hi] satisfies ln(hi/lo) below this (0.05 per cent). */
@@ -48,7 +48,7 @@ export function criticalSeparationOnTrackAU(
     const onsetSeparation = radiusAU[k] / rocheLobeFraction(massMsun[k] / companionMassMsun);
     windBoundary = Math.max(windBoundary, (onsetSeparation * (massMsun[k] + companionMassMsun)) / (massMsun[0] + companionMassMsun));
   }
-  if (tide.kind === 'none') return windBoundary;
+  if (!tideActs(tide)) return windBoundary;
   const engulfed = (a0: number) => evolveOrbitAlongTrack(track, companionMassMsun, a0, tide).engulfed;
 
   // A hint (e.g. a_crit of a lighter companion, which is engulfed here too) narrows the bracket

@@ -1,3 +1,4 @@
+import { byOption } from '../../contracts/method-option.ts';
 import type { GiantTrackOptions } from '../../contracts/scenario.ts';
 import { RSUN_PER_AU } from '../constants.ts';
 import { EngineError, requireInRange } from '../errors.ts';
@@ -60,6 +61,9 @@ interface Phase {
   luminosityLsun: (coreMassMsun: number) => number;
   massLossMsunPerYr: (luminosityLsun: number, radiusRsun: number, massMsun: number) => number;
 }
+
+/** Blöcker's efficiency η_B of the chosen superwind; 0 = none (one entry per option of SUPERWIND_CHOICE). */
+const superwindEta = byOption<GiantTrackOptions['superwind'], 'kind', number>('kind', { bloecker1995: (wind) => wind.eta, none: () => 0 });
 
 /**
  * The analytic giant track of one primary: red giant branch (Hurley, Pols & Tout 2000
@@ -134,7 +138,7 @@ export function buildGiantTrack(initialMassMsun: number, finalCoreMassMsun: numb
     return track;
   }
   track.agbStartIndex = track.timeYr.length;
-  const etaB = superwind.kind === 'bloecker1995' ? superwind.eta : 0;
+  const etaB = superwindEta(superwind);
   const agbPhase = (scale: number): Phase => ({
     luminosityLsun: (mc) => agbLuminosityLsun(mc, zeroPoint),
     massLossMsunPerYr: (l, r, m) =>

@@ -1,3 +1,4 @@
+import { byOption } from '../../contracts/method-option.ts';
 import type { ImfOptions } from '../../contracts/scenario.ts';
 import { EngineError } from '../errors.ts';
 import { CHABRIER_2003, chabrierLognormalPerLog } from './imf-chabrier2003.ts';
@@ -34,29 +35,7 @@ const INVERSE_NODES = 2049;
 export function buildImfSampler(imf: ImfOptions, massRangeMsun: readonly [number, number]): ImfSampler {
   const [lo, hi] = massRangeMsun;
   if (!(lo > 0 && hi > lo)) throw new EngineError('primaries.massRangeMsun', massRangeMsun, '0 < low < high');
-  const weighted: { piece: ImfPiece; weight: number }[] = [];
-  if (imf.law === 'chabrier2003') {
-    const split = CHABRIER_2003.lognormal.upperMsun;
-    if (lo < split) {
-      const top = Math.min(hi, split);
-      const { table, total } = tabulateLognormal(lo, top);
-      weighted.push({ piece: { kind: 'table', loMsun: lo, hiMsun: top, log10MassAtU: table }, weight: total });
-    }
-    if (hi > split) {
-      const bottom = Math.max(lo, split);
-      const slope = CHABRIER_2003.powerLaw.slopePerLog + 1; // per dM: ξ(log M)/(M ln 10)
-      const weight = (CHABRIER_2003.powerLaw.amplitude / Math.LN10) * powerLawPieceIntegral(bottom, hi, slope);
-      weighted.push({ piece: powerLawPiece(bottom, hi, slope), weight });
-    }
-  } else {
-    const law = brokenLaw(imf);
-    for (const p of brokenPowerLawPieces(law.breaksMsun, law.slopes, lo, hi)) {
-      weighted.push({
-        piece: powerLawPiece(p.loMsun, p.hiMsun, p.slope),
-        weight: p.coefficient * powerLawPieceIntegral(p.loMsun, p.hiMsun, p.slope),
-      });
-    }
-  }
+  const weighted = imfPieces(imf, lo, hi);
   const total = weighted.reduce((s, w) => s + w.weight, 0);
   let running = 0;
   const cumulative = weighted.map((w) => (running += w.weight) / total);
@@ -69,17 +48,40 @@ function powerLawPiece(loMsun: number, hiMsun: number, slope: number): ImfPiece 
   return { kind: 'powerlaw', loMsun, hiMsun, slope, quantile, log10MassTable: tabulateQuantile((u) => powerLawLog10Quantile(quantile, u)) };
 }
 
-function brokenLaw(imf: Exclude<ImfOptions, { law: 'chabrier2003' }>): { breaksMsun: readonly number[]; slopes: readonly number[] } {
-  switch (imf.law) {
-    case 'powerlaw':
-      return { breaksMsun: [], slopes: [imf.slope] };
-    case 'brokenPowerlaw':
-      return { breaksMsun: imf.breaksMsun, slopes: imf.slopes };
-    case 'salpeter1955':
-      return SALPETER_1955;
-    case 'kroupa2001':
-      return KROUPA_2001;
+type WeightedPiece = { piece: ImfPiece; weight: number };
+
+/** The weighted pieces of each law over [lo, hi]; every law of the contract has its entry (a new one without it does not type-check). */
+const imfPieces = byOption<ImfOptions, 'law', WeightedPiece[], [number, number]>('law', {
+  powerlaw: (imf, lo, hi) => powerLawPieces({ breaksMsun: [], slopes: [imf.slope] }, lo, hi),
+  brokenPowerlaw: (imf, lo, hi) => powerLawPieces(imf, lo, hi),
+  salpeter1955: (_imf, lo, hi) => powerLawPieces(SALPETER_1955, lo, hi),
+  kroupa2001: (_imf, lo, hi) => powerLawPieces(KROUPA_2001, lo, hi),
+  chabrier2003: (_imf, lo, hi) => chabrierPieces(lo, hi),
+});
+
+function powerLawPieces(law: { breaksMsun: readonly number[]; slopes: readonly number[] }, lo: number, hi: number): WeightedPiece[] {
+  return brokenPowerLawPieces(law.breaksMsun, law.slopes, lo, hi).map((p) => ({
+    piece: powerLawPiece(p.loMsun, p.hiMsun, p.slope),
+    weight: p.coefficient * powerLawPieceIntegral(p.loMsun, p.hiMsun, p.slope),
+  }));
+}
+
+/** Chabrier (2003): the tabulated log-normal below its upper mass, the power law above. */
+function chabrierPieces(lo: number, hi: number): WeightedPiece[] {
+  const weighted: WeightedPiece[] = [];
+  const split = CHABRIER_2003.lognormal.upperMsun;
+  if (lo < split) {
+    const top = Math.min(hi, split);
+    const { table, total } = tabulateLognormal(lo, top);
+    weighted.push({ piece: { kind: 'table', loMsun: lo, hiMsun: top, log10MassAtU: table }, weight: total });
   }
+  if (hi > split) {
+    const bottom = Math.max(lo, split);
+    const slope = CHABRIER_2003.powerLaw.slopePerLog + 1; // per dM: ξ(log M)/(M ln 10)
+    const weight = (CHABRIER_2003.powerLaw.amplitude / Math.LN10) * powerLawPieceIntegral(bottom, hi, slope);
+    weighted.push({ piece: powerLawPiece(bottom, hi, slope), weight });
+  }
+  return weighted;
 }
 
 function tabulateLognormal(lo: number, hi: number): { table: number[]; total: number } {

@@ -1,3 +1,4 @@
+import { byOption } from '../../contracts/method-option.ts';
 import type { GiantTrackOptions } from '../../contracts/scenario.ts';
 import { EngineError, requireInRange } from '../errors.ts';
 import { tideDecayRateUnchecked } from './equilibrium-tide.ts';
@@ -34,6 +35,9 @@ const MIN_DLN_A_RETRY = 1e-7;
 /** Guard against a runaway step count (it would mean the step control failed). */
 const MAX_SUBSTEPS = 2_000_000;
 
+/** Whether the chosen tide drags the orbit in (one entry per option of TIDE_CHOICE). */
+export const tideActs = byOption<GiantTrackOptions['tide'], 'kind', boolean>('kind', { zahn1977: () => true, none: () => false });
+
 /**
  * Follows a companion's circular orbit along a giant track: isotropic wind mass loss conserves
  * a · M_total (Jeans 1924; orbit-mass-loss.ts) and the equilibrium tide of Zahn 1977 shrinks it
@@ -58,6 +62,7 @@ export function evolveOrbitAlongTrack(
   initialSeparationAU: number,
   tide: GiantTrackOptions['tide'],
 ): OrbitOutcome {
+  const tidal = tideActs(tide);
   requireInRange('companionMassMsun', companionMassMsun, 1e-6, 10, 'Msun');
   requireInRange('initialSeparationAU', initialSeparationAU, 1e-4, 1e5, 'AU');
   if (tide.kind !== 'zahn1977' && tide.kind !== 'none') {
@@ -109,7 +114,7 @@ export function evolveOrbitAlongTrack(
     roche1 = rocheLobeFraction(massMsun[k + 1] / m2);
     if ((Math.exp(u) / (massMsun[k] + m2)) * roche0 <= radiusAU[k]) return outcome(true, k, 0, u);
     const dt = timeYr[k + 1] - timeYr[k];
-    if (tide.kind === 'none' || dt <= 0) {
+    if (!tidal || dt <= 0) {
       carried = -1;
       continue;
     }

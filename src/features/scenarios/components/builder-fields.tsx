@@ -8,7 +8,8 @@ import { cx } from '../../../lib/class-names.ts';
 import { parseNumberList, parseNumberText } from '../../../lib/number-input.ts';
 import { useBuilder } from './builder-context.tsx';
 import { allowedRange, allowedText, getAt, inputId, type DraftPath } from './scenario-draft.ts';
-import { optionOf, type KindChoice } from './scenario-options.ts';
+import type { KindChoice } from './scenario-options.ts';
+import { optionOf } from '../../../../shared/contracts/method-choices.ts';
 import { CitationLinks } from '../../../components/ui/citation-links.tsx';
 
 /** Units that are not appended to an allowed range ("0.01 to 10", not "0.01 to 10 dimensionless"). */
@@ -248,7 +249,7 @@ export interface DraftKindProps {
 export function DraftKind({ choice, label, hint }: DraftKindProps) {
   const { doc, update, messageAt, readOnly } = useBuilder();
   const current = getAt(doc, [...choice.path, choice.discriminator]);
-  const option = optionOf(choice.options, current);
+  const option = optionOf(choice, current);
   return (
     <div className="flex min-w-0 flex-col gap-1.5">
       <Select
@@ -260,7 +261,7 @@ export function DraftKind({ choice, label, hint }: DraftKindProps) {
         disabled={readOnly}
         options={[...(option ? [] : [{ value: '', label: 'Choose…', disabled: true }]), ...choice.options.map((o) => ({ value: o.value, label: o.label }))]}
         onChange={(event) => {
-          const next = optionOf(choice.options, event.target.value);
+          const next = optionOf(choice, event.target.value);
           if (next) update(choice.path, structuredClone(next.template));
         }}
       />

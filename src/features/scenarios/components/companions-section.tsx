@@ -11,7 +11,8 @@ import { useBuilder } from './builder-context.tsx';
 import { DraftKind, DraftNumber, DraftRange, DraftSelect, DraftText } from './builder-fields.tsx';
 import { BuilderSection, FieldGrid } from './builder-section.tsx';
 import { getAt, inputId, type DraftPath } from './scenario-draft.ts';
-import { SHAPE_OPTIONS, massKeyOf, newCompanionRow, type KindChoice } from './scenario-options.ts';
+import { chosenValue, massKeyOf, newCompanionRow, type KindChoice } from './scenario-options.ts';
+import { SHAPE_CHOICE } from '../../../../shared/contracts/method-choices.ts';
 import { COMPANION_CLASS_OPTIONS, MASS_UNITS, RowActions, shapeParameters } from '../../../components/companion-rows.tsx';
 
 /** A scenario holds at most this many inline rows (the schema's limit); longer tables are stored and named by id. */
@@ -146,8 +147,8 @@ function CompanionRowEditor({ index, row, count }: { index: number; row: Record<
   const path: DraftPath = [...ROWS, index];
   const massKey = massKeyOf(row);
   const massUnit = MASS_UNITS.find((u) => u.key === massKey)!;
-  const shapeChoice: KindChoice = { path: [...path, 'shape'], discriminator: 'kind', options: SHAPE_OPTIONS };
-  const shapeKind = getAt(row, ['shape', 'kind']);
+  const shapeChoice: KindChoice = { ...SHAPE_CHOICE, path: [...path, 'shape'] };
+  const shapeKind = chosenValue(row, SHAPE_CHOICE, ['shape']);
   const multiplier = getAt(doc, ['companions', 'multiplier']);
   const occurrence = row.occurrence;
   const effective = typeof occurrence === 'number' && typeof multiplier === 'number' ? occurrence * multiplier : null;
@@ -218,7 +219,7 @@ function CompanionRowEditor({ index, row, count }: { index: number; row: Record<
             hint="Occurrence × (M1 / 1 Msun)^slope, capped at 1 per star; empty or 0 = the same for every host. Giant planets grow more common with host mass (Johnson et al. 2010, from memory)."
           />
         </FieldGrid>
-        {(shapeKind === 'powerlaw' || shapeKind === 'lognormalPeriod') && (
+        {shapeKind !== undefined && (
           <FieldGrid>
             {shapeParameters(shapeKind).map((p) => (
               <DraftNumber key={p.key} path={[...path, 'shape', p.key]} label={<>{p.label}{sr}</>} unit={p.unit || 'dimensionless'} hint={p.hint} />

@@ -15,15 +15,16 @@ import {
   SUPERWIND_CHOICE,
   TIDE_CHOICE,
 } from '../../../../shared/contracts/method-choices.ts';
-import { CALIBRATION_OPTIONS } from './scenario-options.ts';
+import { CALIBRATION_OPTIONS } from '../../../../shared/contracts/ifmr-relations.ts';
+import { chosenValue } from './scenario-options.ts';
 
 /** Each section of the builder apart from the run and the companions: one published method per option, its source beside it. */
 
 export function PrimariesSection() {
   const { doc } = useBuilder();
-  const law = getAt(doc, ['primaries', 'imf', 'law']);
-  const lifetime = getAt(doc, ['primaries', 'lifetime', 'kind']);
-  const ifmr = getAt(doc, ['primaries', 'ifmr', 'relation']);
+  const law = chosenValue(doc, IMF_CHOICE);
+  const lifetime = chosenValue(doc, LIFETIME_CHOICE);
+  const ifmr = chosenValue(doc, IFMR_CHOICE);
   return (
     <BuilderSection id="primaries" description="The stars that become white dwarfs: how their masses are drawn, when they formed, how long they live and what mass they end with.">
       <FieldGrid>
@@ -88,8 +89,8 @@ export function PrimariesSection() {
 
 export function GiantSection() {
   const { doc } = useBuilder();
-  const kind = getAt(doc, ['giant', 'kind']);
-  const superwind = getAt(doc, ['giant', 'superwind', 'kind']);
+  const kind = chosenValue(doc, GIANT_CHOICE);
+  const superwind = chosenValue(doc, SUPERWIND_CHOICE);
   return (
     <BuilderSection id="giant" description="When the primary swells into a giant: which companions it engulfs.">
       <DraftKind choice={GIANT_CHOICE} label="Engulfment model" />
@@ -158,8 +159,8 @@ export function EnvelopeSection() {
 
 export function DisruptionSection() {
   const { doc } = useBuilder();
-  const fieldKind = getAt(doc, ['field', 'disruption', 'kind']);
-  const dissolution = getAt(doc, ['disruption', 'dissolution', 'kind']);
+  const fieldKind = chosenValue(doc, DISRUPTION_FIELD_CHOICE);
+  const dissolution = chosenValue(doc, DISSOLUTION_CHOICE);
   return (
     <BuilderSection
       id="disruption"
@@ -194,7 +195,7 @@ export function DisruptionSection() {
 
 export function FieldSection() {
   const { doc } = useBuilder();
-  const kind = getAt(doc, ['field', 'disruption', 'kind']);
+  const kind = chosenValue(doc, DISRUPTION_FIELD_CHOICE);
   const disruptionOn = getAt(doc, ['channels', 'disruption']) !== false;
   const closeOn = getAt(doc, ['channels', 'closeSurvivor']) === true;
   return (
@@ -293,7 +294,7 @@ export function ChannelsSection() {
 
 export function SelectionSection() {
   const { doc, update, readOnly } = useBuilder();
-  const kind = getAt(doc, ['selection', 'kind']);
+  const kind = chosenValue(doc, SELECTION_CHOICE);
   const observed = getAt(doc, ['observed']);
   return (
     <BuilderSection id="selection" description="Which white dwarfs a survey would see, and, if you like, the counts to test the prediction against.">

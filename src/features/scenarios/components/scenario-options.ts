@@ -1,25 +1,24 @@
-import type { DraftPath } from './scenario-draft.ts';
-import type { MethodChoice, MethodOption } from '../../../../shared/contracts/method-choices.ts';
-import { SHAPE_CHOICE } from '../../../../shared/contracts/method-choices.ts';
+import { getAt, type DraftPath } from './scenario-draft.ts';
+import { optionOf, SHAPE_CHOICE, type MethodChoice, type MethodOption, type ValueOf } from '../../../../shared/contracts/method-choices.ts';
 import { MASS_UNITS, type MassKey } from '../../../components/companion-rows.tsx';
 
 /**
- * The builder's view of the scenario's choices between published methods. Each choice (label,
- * summary, citations, starting values) is declared once in shared/contracts/method-choices.ts,
- * which the methods paragraph reads too; the builder imports the choices from there.
+ * The builder's view of the scenario's choices between published methods. Each choice (values,
+ * labels, summary, citations, starting values) is declared once in shared/contracts/method-choices.ts
+ * (the published IFMRs and Cummings et al.'s calibrations in ifmr-relations.ts), which the
+ * methods paragraph reads too; the builder imports the choices from there and repeats none of them.
  */
 export type KindOption = MethodOption;
 export type KindChoice = MethodChoice & { path: DraftPath };
 
-export const CALIBRATION_OPTIONS = [
-  { value: 'mist', label: 'MIST-based' },
-  { value: 'parsec', label: 'PARSEC-based' },
-] as const;
-
-/** A row's distribution shapes (the options of SHAPE_CHOICE). */
-export const SHAPE_OPTIONS: readonly KindOption[] = SHAPE_CHOICE.options;
-
-
+/**
+ * The option a document chose, typed as one of the choice's values (undefined when it names none),
+ * so that a section's test for a variant is checked against the declaration. `at` is where the
+ * union sits when it is not the choice's own path (a row's shape).
+ */
+export function chosenValue<C extends MethodChoice>(doc: unknown, choice: C, at: DraftPath = choice.path): ValueOf<C> | undefined {
+  return optionOf(choice, getAt(doc, [...at, choice.discriminator]))?.value as ValueOf<C> | undefined;
+}
 /** The mass key a row uses (the first present; a new row starts in Jupiter masses). */
 export function massKeyOf(row: Record<string, unknown>): MassKey {
   return MASS_UNITS.find((u) => row[u.key] !== undefined)?.key ?? 'massMJup';
@@ -33,11 +32,6 @@ export function newCompanionRow(): Record<string, unknown> {
     massMJup: [1, 10],
     periodDays: [10, 1000],
     occurrence: 0.05,
-    shape: { kind: 'powerlaw', massSlope: 0, periodSlope: 0 },
+    shape: structuredClone(SHAPE_CHOICE.options[0].template),
   };
 }
-
-export function optionOf(options: readonly KindOption[], value: unknown): KindOption | undefined {
-  return options.find((o) => o.value === value);
-}
-
