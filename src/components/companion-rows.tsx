@@ -1,4 +1,5 @@
 import type { CellColumn, MassUnit } from '../../shared/contracts/occurrence-row-cells.ts';
+import type { SHAPE_CHOICE, ValueOf } from '../../shared/contracts/method-choices.ts';
 import { Button } from './ui/button.tsx';
 
 /**
@@ -36,7 +37,7 @@ export interface ShapeParameter {
  * Each distribution shape's parameters, and a short name for narrow cells (the full label,
  * summary and sources are SHAPE_CHOICE's in shared/contracts/method-choices.ts).
  */
-const SHAPES: Record<string, { shortLabel: string; parameters: readonly ShapeParameter[] }> = {
+const SHAPES: Record<ValueOf<typeof SHAPE_CHOICE>, { shortLabel: string; parameters: readonly ShapeParameter[] }> = {
   powerlaw: {
     shortLabel: 'Power law',
     parameters: [
@@ -53,7 +54,7 @@ const SHAPES: Record<string, { shortLabel: string; parameters: readonly ShapePar
   },
 };
 
-const shapeOf = (shape: unknown) => SHAPES[typeof shape === 'string' && shape in SHAPES ? shape : 'powerlaw'];
+const shapeOf = (shape: unknown) => SHAPES[typeof shape === 'string' && shape in SHAPES ? (shape as keyof typeof SHAPES) : 'powerlaw'];
 
 /** The parameters of a shape kind (the others are ignored); an unknown or missing kind reads as a power law, as the row reader does. */
 export function shapeParameters(shape: unknown): readonly ShapeParameter[] {

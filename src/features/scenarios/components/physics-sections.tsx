@@ -11,6 +11,7 @@ import {
   IFMR_CHOICE,
   IMF_CHOICE,
   LIFETIME_CHOICE,
+  optionOf,
   SELECTION_CHOICE,
   SUPERWIND_CHOICE,
   TIDE_CHOICE,
@@ -33,13 +34,13 @@ export function PrimariesSection() {
       </FieldGrid>
       {law === 'powerlaw' && (
         <FieldGrid>
-          <DraftNumber path={['primaries', 'imf', 'slope']} label="Slope (dN/dM ∝ M^−slope)" unit="dimensionless" reference="Salpeter 1955 found 2.35" />
+          <DraftNumber path={['primaries', 'imf', 'slope']} label="Slope (dN/dM ∝ M^−slope)" unit="dimensionless" reference={<><CitationLinks cites={['salpeter']} /> found {String(optionOf(IMF_CHOICE, 'powerlaw')?.template.slope)}</>} />
         </FieldGrid>
       )}
       {law === 'brokenPowerlaw' && (
         <FieldGrid>
           <DraftNumberList path={['primaries', 'imf', 'breaksMsun']} label="Break masses" unit="Msun" hint="Ascending." />
-          <DraftNumberList path={['primaries', 'imf', 'slopes']} label="Slopes, one per segment" unit="dimensionless" hint="One more than there are breaks." reference="Kroupa 2001: 0.3, 1.3, 2.3" />
+          <DraftNumberList path={['primaries', 'imf', 'slopes']} label="Slopes, one per segment" unit="dimensionless" hint="One more than there are breaks." reference={<><CitationLinks cites={['kroupa']} />: {String(optionOf(IMF_CHOICE, 'brokenPowerlaw')?.template.slopes).replaceAll(',', ', ')}</>} />
         </FieldGrid>
       )}
       <FieldGrid>
