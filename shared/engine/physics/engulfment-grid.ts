@@ -31,7 +31,7 @@ export interface EngulfmentGridInput {
   finalCoreMassesMsun: number[];
   /** Ascending grid nodes in companion mass, Msun (10⁻⁵–2). */
   companionMassesMsun: number[];
-  /** Parsed options from shared/contracts/giant-track.ts. */
+  /** Parsed options of the giant track (its schema: GIANT_CHOICE in shared/contracts/method-choices.ts). */
   track: GiantTrackOptions;
 }
 
