@@ -1,7 +1,5 @@
 import type { DraftPath } from './scenario-draft.ts';
 import type { MethodChoice, MethodOption } from '../../../../shared/contracts/method-choices.ts';
-import { SHAPE_CHOICE } from '../../../../shared/contracts/method-choices.ts';
-import { MASS_UNITS, type MassKey } from '../../../components/companion-rows.tsx';
 
 /**
  * The builder's view of the scenario's choices between published methods. Each choice (label,
@@ -15,15 +13,6 @@ export const CALIBRATION_OPTIONS = [
   { value: 'mist', label: 'MIST-based' },
   { value: 'parsec', label: 'PARSEC-based' },
 ] as const;
-
-/** A row's distribution shapes (the options of SHAPE_CHOICE). */
-export const SHAPE_OPTIONS: readonly KindOption[] = SHAPE_CHOICE.options;
-
-
-/** The mass key a row uses (the first present; a new row starts in Jupiter masses). */
-export function massKeyOf(row: Record<string, unknown>): MassKey {
-  return MASS_UNITS.find((u) => row[u.key] !== undefined)?.key ?? 'massMJup';
-}
 
 /** A new companion row: a log-uniform band of giant planets, to be edited. */
 export function newCompanionRow(): Record<string, unknown> {

@@ -25,6 +25,7 @@ export function blankCells(): RowCells {
     periodSlope: '0',
     meanLog10PeriodDays: '',
     sigmaLog10Period: '',
+    hostMassSlope: '',
     label: '',
     source: '',
     assumed: '',
