@@ -17,10 +17,33 @@ export type RowCells = Record<CellColumn, string>;
 export const MASS_UNIT_KEYS = { MJup: 'massMJup', Msun: 'massMsun', q: 'massRatio' } as const;
 export type MassUnit = keyof typeof MASS_UNIT_KEYS;
 
-const NUMERIC: readonly CellColumn[] = ['massMin', 'massMax', 'periodMinDays', 'periodMaxDays', 'occurrence', 'massSlope', 'periodSlope', 'meanLog10PeriodDays', 'sigmaLog10Period', 'hostMassSlope'];
+const NUMERIC: readonly CellColumn[] = [
+  'massMin',
+  'massMax',
+  'periodMinDays',
+  'periodMaxDays',
+  'occurrence',
+  'massSlope',
+  'periodSlope',
+  'meanLog10PeriodDays',
+  'sigmaLog10Period',
+  'hostMassSlope',
+];
 
 /** The row fields the cells hold; anything else a draft row carries is not theirs. */
-export const CELL_ROW_KEYS = ['class', 'massMJup', 'massMsun', 'massRatio', 'periodDays', 'occurrence', 'hostMassSlope', 'shape', 'label', 'source', 'assumed'] as const;
+export const CELL_ROW_KEYS = [
+  'class',
+  'massMJup',
+  'massMsun',
+  'massRatio',
+  'periodDays',
+  'occurrence',
+  'hostMassSlope',
+  'shape',
+  'label',
+  'source',
+  'assumed',
+] as const;
 
 // 1e10 rather than 10000000000, so the cell shows the whole number; a missing or unreadable value is an empty cell.
 const text = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? formatNumber(v) : '');
@@ -61,7 +84,8 @@ export function cellsFromRow(row: CompanionRow | Readonly<Record<string, unknown
 /** A schema path inside a row → the cell it came from. */
 export function columnOfPath(path: readonly PropertyKey[]): CellColumn {
   const [first, second] = path;
-  if (first === 'massMJup' || first === 'massMsun' || first === 'massRatio') return second === 1 ? 'massMax' : 'massMin';
+  if (first === 'massMJup' || first === 'massMsun' || first === 'massRatio')
+    return second === 1 ? 'massMax' : 'massMin';
   if (first === 'periodDays') return second === 1 ? 'periodMaxDays' : 'periodMinDays';
   if (first === 'shape') return second === 'kind' || second === undefined ? 'shape' : (second as CellColumn);
   if (first === undefined) return 'massUnit';
@@ -72,9 +96,16 @@ export function columnOfPath(path: readonly PropertyKey[]): CellColumn {
 export function pathOfColumn(column: CellColumn, massUnit: string): (string | number)[] {
   const massKey = MASS_UNIT_KEYS[massUnit as MassUnit] ?? 'massMJup';
   if (column === 'massMin' || column === 'massMax') return [massKey, column === 'massMax' ? 1 : 0];
-  if (column === 'periodMinDays' || column === 'periodMaxDays') return ['periodDays', column === 'periodMaxDays' ? 1 : 0];
+  if (column === 'periodMinDays' || column === 'periodMaxDays')
+    return ['periodDays', column === 'periodMaxDays' ? 1 : 0];
   if (column === 'shape') return ['shape', 'kind'];
-  if (column === 'massSlope' || column === 'periodSlope' || column === 'meanLog10PeriodDays' || column === 'sigmaLog10Period') return ['shape', column];
+  if (
+    column === 'massSlope' ||
+    column === 'periodSlope' ||
+    column === 'meanLog10PeriodDays' ||
+    column === 'sigmaLog10Period'
+  )
+    return ['shape', column];
   return [column];
 }
 
@@ -114,20 +145,28 @@ type NumberReader = (text: string) => number | null;
  * "required" apply), an unknown unit read as Jupiter masses. A scenario draft holds its inline
  * rows in this form while they are typed.
  */
-export function rowCandidate(cells: Partial<RowCells>, parseNumber: NumberReader = plainNumber): Record<string, unknown> {
+export function rowCandidate(
+  cells: Partial<RowCells>,
+  parseNumber: NumberReader = plainNumber,
+): Record<string, unknown> {
   const cell = (column: CellColumn) => (cells[column] ?? '').trim();
   const number = (column: CellColumn) => parseNumber(cell(column)) ?? undefined;
   const shapeKind = cell('shape') || 'powerlaw';
-  const parameters = (shapeKind === 'lognormalPeriod' ? ['meanLog10PeriodDays', 'sigmaLog10Period'] : ['massSlope', 'periodSlope']) as CellColumn[];
+  const parameters = (
+    shapeKind === 'lognormalPeriod' ? ['meanLog10PeriodDays', 'sigmaLog10Period'] : ['massSlope', 'periodSlope']
+  ) as CellColumn[];
   const candidate: Record<string, unknown> = {
     class: cell('class'),
     [MASS_UNIT_KEYS[cell('massUnit') as MassUnit] ?? 'massMJup']: [number('massMin'), number('massMax')],
     periodDays: [number('periodMinDays'), number('periodMaxDays')],
     occurrence: number('occurrence'),
-    shape: Object.fromEntries([['kind', shapeKind], ...parameters.map((p) => [p, number(p)])].filter(([, v]) => v !== undefined)),
+    shape: Object.fromEntries(
+      [['kind', shapeKind], ...parameters.map((p) => [p, number(p)])].filter(([, v]) => v !== undefined),
+    ),
   };
   if (number('hostMassSlope') !== undefined) candidate.hostMassSlope = number('hostMassSlope');
-  for (const column of ['label', 'source', 'assumed'] as const) if (cell(column) !== '') candidate[column] = cell(column);
+  for (const column of ['label', 'source', 'assumed'] as const)
+    if (cell(column) !== '') candidate[column] = cell(column);
   return candidate;
 }
 
@@ -141,10 +180,16 @@ export function readRowCells(cells: Partial<RowCells>, parseNumber: NumberReader
   const problems: RowCellProblem[] = [];
   for (const column of NUMERIC) {
     const raw = cell(column);
-    if (Number.isNaN(parseNumber(raw))) problems.push({ column, field: column, message: `${column} must be a number (got "${raw}")` });
+    if (Number.isNaN(parseNumber(raw)))
+      problems.push({ column, field: column, message: `${column} must be a number (got "${raw}")` });
   }
   const unit = cell('massUnit');
-  if (!MASS_UNIT_KEYS[unit as MassUnit]) problems.push({ column: 'massUnit', field: 'massUnit', message: `massUnit must be one of MJup, Msun, q (got "${unit}")` });
+  if (!MASS_UNIT_KEYS[unit as MassUnit])
+    problems.push({
+      column: 'massUnit',
+      field: 'massUnit',
+      message: `massUnit must be one of MJup, Msun, q (got "${unit}")`,
+    });
   if (problems.length > 0) return { ok: false, problems };
 
   const parsed = parseFields(companionRowSchema, rowCandidate(cells, parseNumber));

@@ -2,7 +2,14 @@ import type { ReactNode } from 'react';
 import { SHAPE_CHOICE } from '../../shared/contracts/method-choices.ts';
 import type { CellColumn, RowCells } from '../../shared/contracts/occurrence-row-cells.ts';
 import { cx } from '../lib/class-names.ts';
-import { COMPANION_CLASS_OPTIONS, MASS_UNITS, RowActions, SHAPE_SHORT_OPTIONS, shapeParameters, type ShapeParameter } from './companion-rows.tsx';
+import {
+  COMPANION_CLASS_OPTIONS,
+  MASS_UNITS,
+  RowActions,
+  SHAPE_SHORT_OPTIONS,
+  shapeParameters,
+  type ShapeParameter,
+} from './companion-rows.tsx';
 import { formatNumber } from '../../shared/contracts/field-issues.ts';
 import { CitationLinks } from './ui/citation-links.tsx';
 
@@ -17,7 +24,8 @@ const HEADERS = ['Row', 'Class, occurrence (probability 0–1)', 'Mass', 'Initia
 function shapeCells(kind: string): Partial<RowCells> {
   const template = SHAPE_CHOICE.options.find((o) => o.value === kind)?.template ?? {};
   const patch: Partial<RowCells> = { shape: kind };
-  for (const p of shapeParameters(kind)) patch[p.key] = typeof template[p.key] === 'number' ? formatNumber(template[p.key] as number) : '';
+  for (const p of shapeParameters(kind))
+    patch[p.key] = typeof template[p.key] === 'number' ? formatNumber(template[p.key] as number) : '';
   return patch;
 }
 
@@ -64,9 +72,23 @@ export interface CompanionRowsEditorProps {
  * (shared/contracts/occurrence-row-cells.ts); the page that holds the rows checks them with the
  * shared row reader or schema and hands each cell its problem.
  */
-export function CompanionRowsEditor({ id, rows, first = 0, total = rows.length, caption, empty, readOnly, ...rowProps }: CompanionRowsEditorProps) {
+export function CompanionRowsEditor({
+  id,
+  rows,
+  first = 0,
+  total = rows.length,
+  caption,
+  empty,
+  readOnly,
+  ...rowProps
+}: CompanionRowsEditorProps) {
   return (
-    <div role="region" aria-labelledby={`${id}-caption`} tabIndex={0} className="relative overflow-x-auto rounded-md border border-ink-700">
+    <div
+      role="region"
+      aria-labelledby={`${id}-caption`}
+      tabIndex={0}
+      className="relative overflow-x-auto rounded-md border border-ink-700"
+    >
       <table role="table" className="w-full border-collapse text-left max-md:block">
         <caption id={`${id}-caption`} className="px-4 py-3 text-left font-bold text-foam-50 max-md:block">
           {caption}
@@ -89,7 +111,14 @@ export function CompanionRowsEditor({ id, rows, first = 0, total = rows.length, 
             </tr>
           )}
           {rows.map((row, offset) => (
-            <RowLines key={row.key} index={first + offset} total={total} cells={row.cells} readOnly={readOnly} {...rowProps} />
+            <RowLines
+              key={row.key}
+              index={first + offset}
+              total={total}
+              cells={row.cells}
+              readOnly={readOnly}
+              {...rowProps}
+            />
           ))}
         </tbody>
       </table>
@@ -97,20 +126,53 @@ export function CompanionRowsEditor({ id, rows, first = 0, total = rows.length, 
   );
 }
 
-type RowLinesProps = Omit<CompanionRowsEditorProps, 'id' | 'rows' | 'first' | 'caption' | 'empty'> & { index: number; total: number; cells: RowCells };
+type RowLinesProps = Omit<CompanionRowsEditorProps, 'id' | 'rows' | 'first' | 'caption' | 'empty'> & {
+  index: number;
+  total: number;
+  cells: RowCells;
+};
 
 const tdClasses = 'px-3 py-2 align-top max-md:block max-md:px-4 max-md:py-1.5';
 
 /** One row: the numbers on the first line, its label, provenance and actions on the second. */
-function RowLines({ index, total, cells, readOnly, cellId, errorAt, rowProblemAt, occurrenceNote, full, onCellsChange, onRemove, onDuplicate, onMove }: RowLinesProps) {
+function RowLines({
+  index,
+  total,
+  cells,
+  readOnly,
+  cellId,
+  errorAt,
+  rowProblemAt,
+  occurrenceNote,
+  full,
+  onCellsChange,
+  onRemove,
+  onDuplicate,
+  onMove,
+}: RowLinesProps) {
   const n = index + 1;
-  const control = (column: CellColumn, label: string, extra: Partial<Pick<CellControlProps, 'unit' | 'options' | 'width' | 'multiline' | 'prefix' | 'labelVisible' | 'note'>> = {}) => (
-    <CellControl id={cellId(index, column)} label={label} row={n} value={cells[column]} error={errorAt(index, column)} onChange={(value) => onCellsChange(index, { [column]: value })} {...extra} />
+  const control = (
+    column: CellColumn,
+    label: string,
+    extra: Partial<
+      Pick<CellControlProps, 'unit' | 'options' | 'width' | 'multiline' | 'prefix' | 'labelVisible' | 'note'>
+    > = {},
+  ) => (
+    <CellControl
+      id={cellId(index, column)}
+      label={label}
+      row={n}
+      value={cells[column]}
+      error={errorAt(index, column)}
+      onChange={(value) => onCellsChange(index, { [column]: value })}
+      {...extra}
+    />
   );
   const rowProblem = rowProblemAt?.(index);
   const massUnit = UNIT_OPTIONS.some((u) => u.value === cells.massUnit) ? cells.massUnit : 'MJup';
   const parameters = shapeParameters(cells.shape);
-  const hasProblem = Boolean(rowProblem) || (Object.keys(cells) as CellColumn[]).some((column) => errorAt(index, column));
+  const hasProblem =
+    Boolean(rowProblem) || (Object.keys(cells) as CellColumn[]).some((column) => errorAt(index, column));
   const shapeOption = SHAPE_CHOICE.options.find((o) => o.value === (cells.shape || 'powerlaw'));
   const shapeText = `${SHAPE_SHORT_OPTIONS.find((o) => o.value === cells.shape)?.label ?? cells.shape}: ${parameters
     .map((p) => `${p.symbol} = ${cells[p.key] || 'default'}${p.unit ? ` ${p.unit}` : ''}`)
@@ -129,14 +191,20 @@ function RowLines({ index, total, cells, readOnly, cellId, errorAt, rowProblemAt
             <>
               <ReadValue label="Class" value={CLASS_TEXT[cells.class] ?? cells.class} />
               <ReadValue label="Occurrence" value={`p = ${cells.occurrence}`} />
-              {cells.hostMassSlope && <ReadValue label="Host-mass slope" value={`× (M1/Msun)^${cells.hostMassSlope}`} />}
+              {cells.hostMassSlope && (
+                <ReadValue label="Host-mass slope" value={`× (M1/Msun)^${cells.hostMassSlope}`} />
+              )}
               {note && <p className="mt-1 max-w-48 text-sm text-foam-300">{note}</p>}
             </>
           ) : (
             <div className="flex flex-col gap-2">
               {control('class', 'Class', { options: CLASS_OPTIONS, width: 'w-40' })}
               {control('occurrence', 'Occurrence', { width: 'w-24', prefix: 'p =', note })}
-              {control('hostMassSlope', 'Host-mass slope (× (M1/Msun)^s; empty = 0)', { width: 'w-20', prefix: 's =' })}
+              {control('hostMassSlope', 'Host-mass slope s', {
+                width: 'w-20',
+                labelVisible: true,
+                unit: '× (M1/Msun)^s',
+              })}
             </div>
           )}
         </td>
@@ -186,7 +254,13 @@ function RowLines({ index, total, cells, readOnly, cellId, errorAt, rowProblemAt
               />
               <div className="flex flex-wrap items-start gap-2">
                 {parameters.map((p) => (
-                  <div key={p.key}>{control(p.key, parameterLabel(p), { unit: p.unit || undefined, width: 'w-20', prefix: `${p.symbol} =` })}</div>
+                  <div key={p.key}>
+                    {control(p.key, parameterLabel(p), {
+                      unit: p.unit || undefined,
+                      width: 'w-20',
+                      prefix: `${p.symbol} =`,
+                    })}
+                  </div>
                 ))}
               </div>
             </div>
@@ -206,8 +280,16 @@ function RowLines({ index, total, cells, readOnly, cellId, errorAt, rowProblemAt
           ) : (
             <div className="grid items-start gap-3 md:grid-cols-[12rem_minmax(0,1fr)_minmax(0,1fr)_auto]">
               {control('label', 'Label', { width: 'w-full', labelVisible: true })}
-              {control('source', 'Source (paper, table, equation)', { width: 'w-full', multiline: true, labelVisible: true })}
-              {control('assumed', 'Assumed (where the source is silent)', { width: 'w-full', multiline: true, labelVisible: true })}
+              {control('source', 'Source (paper, table, equation)', {
+                width: 'w-full',
+                multiline: true,
+                labelVisible: true,
+              })}
+              {control('assumed', 'Assumed (where the source is silent)', {
+                width: 'w-full',
+                multiline: true,
+                labelVisible: true,
+              })}
               <RowActions
                 row={n}
                 duplicateDisabled={full}
@@ -240,10 +322,12 @@ function Provenance({ label, source, assumed }: { label: string; source: string;
     <div className="flex flex-col gap-1 rounded-md border-l-2 border-tide-300/60 bg-ink-900/60 px-3 py-2 text-sm">
       {label && <p className="font-bold text-foam-50">{label}</p>}
       <p>
-        <span className="font-bold text-tide-300">Source:</span> <span className="text-foam-300">{source || 'not given'}</span>
+        <span className="font-bold text-tide-300">Source:</span>{' '}
+        <span className="text-foam-300">{source || 'not given'}</span>
       </p>
       <p>
-        <span className="font-bold text-tide-300">Assumed:</span> <span className="text-foam-300">{assumed || 'nothing stated'}</span>
+        <span className="font-bold text-tide-300">Assumed:</span>{' '}
+        <span className="text-foam-300">{assumed || 'nothing stated'}</span>
       </p>
     </div>
   );
@@ -272,8 +356,24 @@ const cellControl =
   'min-h-10 rounded border border-ink-500 bg-ink-900 px-2 py-1 text-base text-foam-50 hover:border-foam-400 aria-[invalid=true]:border-2 aria-[invalid=true]:border-coral-300';
 
 /** One input of the grid: its label is visible when the rows are stacked, read out always ("Occurrence, row 3"). */
-function CellControl({ id, label, row, value, error, unit, options, width = 'w-24', multiline, prefix, labelVisible, note, onChange }: CellControlProps) {
-  const described = [unit ? `${id}-unit` : null, note ? `${id}-note` : null, error ? `${id}-error` : null].filter(Boolean).join(' ') || undefined;
+function CellControl({
+  id,
+  label,
+  row,
+  value,
+  error,
+  unit,
+  options,
+  width = 'w-24',
+  multiline,
+  prefix,
+  labelVisible,
+  note,
+  onChange,
+}: CellControlProps) {
+  const described =
+    [unit ? `${id}-unit` : null, note ? `${id}-note` : null, error ? `${id}-error` : null].filter(Boolean).join(' ') ||
+    undefined;
   const common = { id, 'aria-invalid': error ? (true as const) : undefined, 'aria-describedby': described };
   return (
     <div className={cx('flex flex-col gap-1', multiline || width === 'w-full' ? 'w-full' : undefined)}>
@@ -288,7 +388,12 @@ function CellControl({ id, label, row, value, error, unit, options, width = 'w-2
           </span>
         )}
         {options ? (
-          <select {...common} value={value} onChange={(event) => onChange(event.target.value)} className={cx(cellControl, width, 'cursor-pointer')}>
+          <select
+            {...common}
+            value={value}
+            onChange={(event) => onChange(event.target.value)}
+            className={cx(cellControl, width, 'cursor-pointer')}
+          >
             {!options.some((o) => o.value === value) && <option value={value}>{value || '—'}</option>}
             {options.map((o) => (
               <option key={o.value} value={o.value}>
@@ -297,7 +402,14 @@ function CellControl({ id, label, row, value, error, unit, options, width = 'w-2
             ))}
           </select>
         ) : multiline ? (
-          <textarea {...common} value={value} rows={2} maxLength={2000} onChange={(event) => onChange(event.target.value)} className={cx(cellControl, width, 'resize-y text-sm')} />
+          <textarea
+            {...common}
+            value={value}
+            rows={2}
+            maxLength={2000}
+            onChange={(event) => onChange(event.target.value)}
+            className={cx(cellControl, width, 'resize-y text-sm')}
+          />
         ) : (
           <input
             {...common}

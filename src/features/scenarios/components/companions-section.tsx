@@ -13,8 +13,16 @@ import { BuilderSection, FieldGrid } from './builder-section.tsx';
 import { getAt, inputId, type DraftPath } from './scenario-draft.ts';
 import { newCompanionRow } from './scenario-options.ts';
 import { CompanionRowsEditor, type EditorRow } from '../../../components/companion-rows-editor.tsx';
-import { CELL_ROW_KEYS, cellsFromRow, pathOfColumn, rowCandidate, type CellColumn, type RowCells } from '../../../../shared/contracts/occurrence-row-cells.ts';
+import {
+  CELL_ROW_KEYS,
+  cellsFromRow,
+  pathOfColumn,
+  rowCandidate,
+  type CellColumn,
+  type RowCells,
+} from '../../../../shared/contracts/occurrence-row-cells.ts';
 import { parseNumberText } from '../../../lib/number-input.ts';
+import { checkCells } from '../../../components/companion-row-cells.ts';
 import { moveItem } from '../../../lib/move-item.ts';
 
 /** A scenario holds at most this many inline rows (the schema's limit); longer tables are stored and named by id. */
@@ -27,7 +35,6 @@ export function CompanionsSection() {
   const { doc, update, readOnly, messageAt, departmentId } = useBuilder();
   const tableId = getAt(doc, ['companions', 'tableId']);
   const rowsValue = getAt(doc, ROWS);
-  const rows = (Array.isArray(rowsValue) ? rowsValue : []) as Record<string, unknown>[];
   const usesTable = tableId !== undefined;
   // Rows set aside while a stored table is chosen, so that switching back restores them.
   const stash = useRef<Record<string, unknown>[] | null>(null);
@@ -82,22 +89,18 @@ export function CompanionsSection() {
       </fieldset>
 
       <FieldGrid>
-        <DraftNumber path={['companions', 'multiplier']} label="Occurrence multiplier" unit="×" hint="Scales every row’s occurrence, for what-if studies; each product must stay at most 1." />
+        <DraftNumber
+          path={['companions', 'multiplier']}
+          label="Occurrence multiplier"
+          unit="×"
+          hint="Scales every row’s occurrence, for what-if studies; each product must stay at most 1."
+        />
       </FieldGrid>
 
       {usesTable ? (
         <StoredTableChoice tables={tables} tableId={typeof tableId === 'string' ? tableId : ''} />
       ) : (
-        <div className="flex flex-col gap-4">
-          <InlineRows rows={rows} />
-          {!readOnly && (
-            <div>
-              <Button variant="secondary" disabled={rows.length >= MAX_ROWS} onClick={() => update(ROWS, [...rows, newCompanionRow()])}>
-                Add a companion row
-              </Button>
-            </div>
-          )}
-        </div>
+        <InlineRows value={rowsValue} />
       )}
     </BuilderSection>
   );
@@ -106,7 +109,15 @@ export function CompanionsSection() {
 function StoredTableChoice({ tables, tableId }: { tables: ReturnType<typeof useScenarioTables>; tableId: string }) {
   const { update, messageAt, readOnly } = useBuilder();
   if (tables.isPending) return <LoadingState label="Loading the stored tables…" />;
-  if (tables.isError) return <ErrorState error={tables.error} title="The stored tables could not be loaded" onRetry={() => void tables.refetch()} retrying={tables.isFetching} />;
+  if (tables.isError)
+    return (
+      <ErrorState
+        error={tables.error}
+        title="The stored tables could not be loaded"
+        onRetry={() => void tables.refetch()}
+        retrying={tables.isFetching}
+      />
+    );
   const list = tables.data.tables;
   const known = list.some((t) => t.id === tableId);
   return (
@@ -119,7 +130,9 @@ function StoredTableChoice({ tables, tableId }: { tables: ReturnType<typeof useS
         disabled={readOnly}
         hint={list.length === 0 ? 'The department has no stored table yet.' : undefined}
         options={[
-          ...(known ? [] : [{ value: tableId, label: tableId ? `Unknown table (${tableId})` : 'Choose a table…', disabled: true }]),
+          ...(known
+            ? []
+            : [{ value: tableId, label: tableId ? `Unknown table (${tableId})` : 'Choose a table…', disabled: true }]),
           ...list.map((t) => ({ value: t.id, label: `${t.name} (${t.rowCount} row${t.rowCount === 1 ? '' : 's'})` })),
         ]}
         onChange={(event) => update(['companions', 'tableId'], event.target.value)}
@@ -136,7 +149,11 @@ function StoredTableChoice({ tables, tableId }: { tables: ReturnType<typeof useS
 }
 
 /** The path of a cell's value in the draft ("companions.rows[2].massMJup[1]"). */
-const cellPath = (index: number, column: CellColumn, cells: RowCells | undefined): DraftPath => [...ROWS, index, ...pathOfColumn(column, cells?.massUnit ?? 'MJup')];
+const cellPath = (index: number, column: CellColumn, cells: RowCells | undefined): DraftPath => [
+  ...ROWS,
+  index,
+  ...pathOfColumn(column, cells?.massUnit ?? 'MJup'),
+];
 
 /**
  * The scenario's inline rows in the shared row editor. The editor holds each row as text cells
@@ -144,17 +161,18 @@ const cellPath = (index: number, column: CellColumn, cells: RowCells | undefined
  * reader's own reading) into the draft, where the scenario schema checks it. When the rows
  * change from elsewhere (a preset, pasted JSON, Discard) the cells are read again from the draft.
  */
-function InlineRows({ rows }: { rows: readonly Record<string, unknown>[] }) {
+function InlineRows({ value }: { value: unknown }) {
   const { doc, update, messageAt, readOnly } = useBuilder();
+  const rows = (Array.isArray(value) ? value : []) as Record<string, unknown>[];
   const nextKey = useRef(0);
-  const read = (list: readonly Record<string, unknown>[]): { source: readonly unknown[]; rows: EditorRow[] } => ({
-    source: list,
-    rows: list.map((row) => ({ key: nextKey.current++, cells: cellsFromRow(row) })),
+  const read = (): { source: unknown; rows: EditorRow[] } => ({
+    source: value,
+    rows: rows.map((row) => ({ key: nextKey.current++, cells: cellsFromRow(row) })),
   });
-  const [state, setState] = useState(() => read(rows));
+  const [state, setState] = useState(read);
   let current = state;
-  if (state.source !== rows) {
-    current = read(rows);
+  if (state.source !== value) {
+    current = read();
     setState(current);
   }
   const multiplier = getAt(doc, ['companions', 'multiplier']);
@@ -166,46 +184,84 @@ function InlineRows({ rows }: { rows: readonly Record<string, unknown>[] }) {
 
   /** The row the cells describe, keeping whatever else the draft's row holds. */
   function draftRow(cells: RowCells, before: Record<string, unknown> | undefined): Record<string, unknown> {
-    const kept = Object.fromEntries(Object.entries(before ?? {}).filter(([key]) => !(CELL_ROW_KEYS as readonly string[]).includes(key)));
+    const kept = Object.fromEntries(
+      Object.entries(before ?? {}).filter(([key]) => !(CELL_ROW_KEYS as readonly string[]).includes(key)),
+    );
     return { ...kept, ...rowCandidate(cells, (text) => parseNumberText(text)) };
   }
 
+  const full = current.rows.length >= MAX_ROWS;
+  const added = newCompanionRow();
   return (
-    <CompanionRowsEditor
-      id="companion-rows"
-      rows={current.rows}
-      caption={`${current.rows.length} row${current.rows.length === 1 ? '' : 's'} of at most ${MAX_ROWS}`}
-      empty="No companion rows: only the fossil channel, if it is on, can make magnetic white dwarfs."
-      readOnly={readOnly}
-      full={current.rows.length >= MAX_ROWS}
-      cellId={(index, column) => inputId(cellPath(index, column, current.rows[index]?.cells))}
-      errorAt={(index, column) => {
-        const path = cellPath(index, column, current.rows[index]?.cells);
-        // A range's own problem (low not below high) and a shape's are named by the pair and the shape.
-        return messageAt(path) ?? (path.at(-1) === 0 || column === 'shape' ? messageAt(path.slice(0, -1)) : undefined);
-      }}
-      rowProblemAt={(index) => messageAt([...ROWS, index])}
-      occurrenceNote={(_, cells) => {
-        const occurrence = parseNumberText(cells.occurrence);
-        const effective = occurrence !== null && typeof multiplier === 'number' ? occurrence * multiplier : null;
-        if (effective === null || !Number.isFinite(effective)) return undefined;
-        return <span className={cx(effective > 1 && 'font-bold text-coral-300')}>With the multiplier: {percent(effective)} of stars.</span>;
-      }}
-      onCellsChange={(index, patch) => {
-        const cells = { ...current.rows[index].cells, ...patch };
-        write(
-          current.rows.map((r, i) => (i === index ? { ...r, cells } : r)),
-          rows.map((r, i) => (i === index ? draftRow(cells, r) : r)),
-        );
-      }}
-      onRemove={(index) => write(current.rows.filter((_, i) => i !== index), rows.filter((_, i) => i !== index))}
-      onDuplicate={(index) =>
-        write(
-          [...current.rows.slice(0, index + 1), { key: nextKey.current++, cells: { ...current.rows[index].cells } }, ...current.rows.slice(index + 1)],
-          [...rows.slice(0, index + 1), structuredClone(rows[index]), ...rows.slice(index + 1)],
-        )
-      }
-      onMove={(index, to) => write(moveItem(current.rows, index, to), moveItem(rows, index, to))}
-    />
+    <div className="flex flex-col gap-4">
+      <CompanionRowsEditor
+        id="companion-rows"
+        rows={current.rows}
+        caption={`${current.rows.length} row${current.rows.length === 1 ? '' : 's'} of at most ${MAX_ROWS}`}
+        empty="No companion rows: only the fossil channel, if it is on, can make magnetic white dwarfs."
+        readOnly={readOnly}
+        full={full}
+        cellId={(index, column) => inputId(cellPath(index, column, current.rows[index]?.cells))}
+        errorAt={(index, column) => {
+          // Text that is not a number is said as such by the shared row reader; everything else as the scenario's check says it.
+          const cells = current.rows[index]?.cells;
+          const check = cells && Number.isNaN(parseNumberText(cells[column])) ? checkCells(cells) : null;
+          if (check && !check.ok) return check.problems.find((p) => p.column === column)?.message;
+          const path = cellPath(index, column, cells);
+          // A range's own problem (low not below high) and a shape's are named by the pair and the shape.
+          return (
+            messageAt(path) ?? (path.at(-1) === 0 || column === 'shape' ? messageAt(path.slice(0, -1)) : undefined)
+          );
+        }}
+        rowProblemAt={(index) => messageAt([...ROWS, index])}
+        occurrenceNote={(_, cells) => {
+          const occurrence = parseNumberText(cells.occurrence);
+          const effective = occurrence !== null && typeof multiplier === 'number' ? occurrence * multiplier : null;
+          if (effective === null || !Number.isFinite(effective)) return undefined;
+          return (
+            <span className={cx(effective > 1 && 'font-bold text-coral-300')}>
+              With the multiplier: {percent(effective)} of stars.
+            </span>
+          );
+        }}
+        onCellsChange={(index, patch) => {
+          const cells = { ...current.rows[index].cells, ...patch };
+          write(
+            current.rows.map((r, i) => (i === index ? { ...r, cells } : r)),
+            rows.map((r, i) => (i === index ? draftRow(cells, r) : r)),
+          );
+        }}
+        onRemove={(index) =>
+          write(
+            current.rows.filter((_, i) => i !== index),
+            rows.filter((_, i) => i !== index),
+          )
+        }
+        onDuplicate={(index) =>
+          write(
+            [
+              ...current.rows.slice(0, index + 1),
+              { key: nextKey.current++, cells: { ...current.rows[index].cells } },
+              ...current.rows.slice(index + 1),
+            ],
+            [...rows.slice(0, index + 1), structuredClone(rows[index]), ...rows.slice(index + 1)],
+          )
+        }
+        onMove={(index, to) => write(moveItem(current.rows, index, to), moveItem(rows, index, to))}
+      />
+      {!readOnly && (
+        <div>
+          <Button
+            variant="secondary"
+            disabled={full}
+            onClick={() =>
+              write([...current.rows, { key: nextKey.current++, cells: cellsFromRow(added) }], [...rows, added])
+            }
+          >
+            Add a companion row
+          </Button>
+        </div>
+      )}
+    </div>
   );
 }

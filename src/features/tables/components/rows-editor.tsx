@@ -7,7 +7,14 @@ import { errorMessage } from '../../../components/ui/error-state.tsx';
 import { useUnsavedChanges } from '../../../hooks/use-unsaved-changes.tsx';
 import { isApiError } from '../../../lib/api-client.ts';
 import { useUpdateTable } from '../api/update-table.ts';
-import { blankCells, cellKey, cellOfServerField, checkCells, serverCellMessage, type CellProblem } from './row-cells.ts';
+import {
+  blankCells,
+  cellKey,
+  cellOfServerField,
+  checkCells,
+  serverCellMessage,
+  type CellProblem,
+} from '../../../components/companion-row-cells.ts';
 import { cellsFromRow, type CellColumn, type RowCells } from '../../../../shared/contracts/occurrence-row-cells.ts';
 import { CompanionRowsEditor } from '../../../components/companion-rows-editor.tsx';
 import { moveItem } from '../../../lib/move-item.ts';
@@ -43,7 +50,11 @@ export function RowsEditor({ departmentId, table, readOnly }: RowsEditorProps) {
   const [page, setPage] = useState(0);
   const [touched, setTouched] = useState<ReadonlySet<number>>(new Set());
   const [attempted, setAttempted] = useState(false);
-  const [serverProblem, setServerProblem] = useState<{ index: number; column: CellColumn | null; message: string } | null>(null);
+  const [serverProblem, setServerProblem] = useState<{
+    index: number;
+    column: CellColumn | null;
+    message: string;
+  } | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
   const [pendingFocus, setPendingFocus] = useState<string | null>(null);
@@ -54,13 +65,15 @@ export function RowsEditor({ departmentId, table, readOnly }: RowsEditorProps) {
   const problems = useMemo(() => {
     const list: { index: number; problem: CellProblem }[] = [];
     checks.forEach((check, index) => {
-      if (!check.ok && (attempted || touched.has(rows[index].key))) for (const problem of check.problems) list.push({ index, problem });
+      if (!check.ok && (attempted || touched.has(rows[index].key)))
+        for (const problem of check.problems) list.push({ index, problem });
     });
     return list;
   }, [checks, attempted, touched, rows]);
   const cellErrors = useMemo(() => {
     const map = new Map<string, string>();
-    for (const { index, problem } of problems) if (!map.has(cellKey(index, problem.column))) map.set(cellKey(index, problem.column), problem.message);
+    for (const { index, problem } of problems)
+      if (!map.has(cellKey(index, problem.column))) map.set(cellKey(index, problem.column), problem.message);
     if (serverProblem?.column) map.set(cellKey(serverProblem.index, serverProblem.column), serverProblem.message);
     return map;
   }, [problems, serverProblem]);
@@ -102,7 +115,11 @@ export function RowsEditor({ departmentId, table, readOnly }: RowsEditorProps) {
   }
 
   function duplicateRow(index: number) {
-    setRows((list) => [...list.slice(0, index + 1), { key: nextKey.current++, cells: { ...list[index].cells } }, ...list.slice(index + 1)]);
+    setRows((list) => [
+      ...list.slice(0, index + 1),
+      { key: nextKey.current++, cells: { ...list[index].cells } },
+      ...list.slice(index + 1),
+    ]);
   }
 
   function moveRow(index: number, to: number) {
@@ -152,14 +169,21 @@ export function RowsEditor({ departmentId, table, readOnly }: RowsEditorProps) {
   return (
     <div className="flex flex-col gap-4">
       {problems.length > 0 && (
-        <section aria-labelledby="rows-problems-title" className="rounded-md border border-coral-300/50 bg-coral-300/8 p-4">
+        <section
+          aria-labelledby="rows-problems-title"
+          className="rounded-md border border-coral-300/50 bg-coral-300/8 p-4"
+        >
           <h3 id="rows-problems-title" className="font-bold text-foam-50">
             {problems.length} problem{problems.length === 1 ? '' : 's'} in the rows
           </h3>
           <ul className="mt-2 flex flex-col gap-1">
             {problems.slice(0, 10).map(({ index, problem }) => (
               <li key={`${index}:${problem.column}`}>
-                <button type="button" onClick={() => goTo(index, problem.column)} className="text-left text-sm text-coral-300 underline underline-offset-3">
+                <button
+                  type="button"
+                  onClick={() => goTo(index, problem.column)}
+                  className="text-left text-sm text-coral-300 underline underline-offset-3"
+                >
                   Row {index + 1}, {problem.column}: {problem.message}
                 </button>
               </li>
@@ -184,7 +208,9 @@ export function RowsEditor({ departmentId, table, readOnly }: RowsEditorProps) {
         readOnly={readOnly}
         cellId={cellId}
         errorAt={(index, column) => cellErrors.get(cellKey(index, column))}
-        rowProblemAt={(index) => (serverProblem && serverProblem.index === index && !serverProblem.column ? serverProblem.message : undefined)}
+        rowProblemAt={(index) =>
+          serverProblem && serverProblem.index === index && !serverProblem.column ? serverProblem.message : undefined
+        }
         onCellsChange={change}
         onRemove={removeRow}
         onDuplicate={duplicateRow}
@@ -199,7 +225,12 @@ export function RowsEditor({ departmentId, table, readOnly }: RowsEditorProps) {
           <span className="text-foam-300">
             Page {shownPage + 1} of {pages}
           </span>
-          <Button variant="secondary" size="sm" disabled={shownPage >= pages - 1} onClick={() => setPage(shownPage + 1)}>
+          <Button
+            variant="secondary"
+            size="sm"
+            disabled={shownPage >= pages - 1}
+            onClick={() => setPage(shownPage + 1)}
+          >
             Next rows
           </Button>
         </nav>
@@ -221,10 +252,18 @@ export function RowsEditor({ departmentId, table, readOnly }: RowsEditorProps) {
               </Button>
             )}
             <span aria-live="polite" className="text-sm">
-              {saved ? <span className="font-bold text-kelp-300">Saved.</span> : dirty ? <Badge tone="warning">Unsaved changes</Badge> : <span className="text-foam-300">No unsaved changes.</span>}
+              {saved ? (
+                <span className="font-bold text-kelp-300">Saved.</span>
+              ) : dirty ? (
+                <Badge tone="warning">Unsaved changes</Badge>
+              ) : (
+                <span className="text-foam-300">No unsaved changes.</span>
+              )}
             </span>
           </div>
-          <p className="text-sm text-foam-400">Saving replaces every row of the table. Runs already made keep the rows they used.</p>
+          <p className="text-sm text-foam-400">
+            Saving replaces every row of the table. Runs already made keep the rows they used.
+          </p>
         </div>
       )}
       {guard.dialog}
