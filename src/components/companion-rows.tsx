@@ -3,9 +3,9 @@ import type { SHAPE_CHOICE, ValueOf } from '../../shared/contracts/method-choice
 import { Button } from './ui/button.tsx';
 
 /**
- * What the two companion-row editors (a stored occurrence table's rows, a scenario's inline rows)
- * share: the classes, the mass units, each distribution shape's parameters and the row actions.
- * Declared once here so that both screens name and explain a row's fields the same way.
+ * The vocabulary of the companion-row editor (companion-rows-editor.tsx), which both a stored
+ * occurrence table's page and the scenario builder's inline rows use: the classes, the mass
+ * units, each distribution shape's parameters and the row actions.
  */
 
 export const COMPANION_CLASS_OPTIONS = [
@@ -69,15 +69,24 @@ export interface RowActionsProps {
   row: number;
   onDuplicate: () => void;
   onRemove: () => void;
+  /** Moves the row one place up (-1) or down (+1); absent where it cannot move that way. */
+  onMoveUp?: () => void;
+  onMoveDown?: () => void;
   /** No room for another row. */
   duplicateDisabled?: boolean;
   className?: string;
 }
 
-/** A row's Duplicate and Remove buttons. */
-export function RowActions({ row, onDuplicate, onRemove, duplicateDisabled = false, className }: RowActionsProps) {
+/** A row's Move up, Move down, Duplicate and Remove buttons. */
+export function RowActions({ row, onDuplicate, onRemove, onMoveUp, onMoveDown, duplicateDisabled = false, className }: RowActionsProps) {
   return (
     <div className={className}>
+      <Button variant="ghost" size="sm" disabled={!onMoveUp} onClick={onMoveUp}>
+        Move up<span className="sr-only"> row {row}</span>
+      </Button>
+      <Button variant="ghost" size="sm" disabled={!onMoveDown} onClick={onMoveDown}>
+        Move down<span className="sr-only"> row {row}</span>
+      </Button>
       <Button variant="ghost" size="sm" disabled={duplicateDisabled} onClick={onDuplicate}>
         Duplicate<span className="sr-only"> row {row}</span>
       </Button>

@@ -106,6 +106,43 @@ describe('scenario builder', () => {
       await context.close();
     }
   });
+
+  it('edits the inline companion rows in the shared row editor: plain words at the cell, rows moved, no crash on text in a number cell', { timeout: 120_000 }, async () => {
+    const { page, context } = await stack.newPage();
+    try {
+      await stack.signIn(page, 'modeller');
+      await page.goto('/scenarios/new?preset=baseline-fixed-reach');
+      await page.getByLabel('Scenario name').fill('Rows test');
+      const rows = page.getByRole('region', { name: /rows of at most 32/ });
+      await expect.poll(() => page.getByLabel('Label, row 2').inputValue(), { timeout: 20_000 }).toMatch(/^Giant planets, 2000/);
+
+      // Text in a number cell is named as such at the cell; the page keeps working.
+      const periodFrom = page.getByLabel('Period from, row 2');
+      await periodFrom.fill('abc');
+      await expect.poll(() => describedText(periodFrom)).toMatch(/Must be a number \(got "abc"\)/);
+      const check = page.getByRole('region', { name: /^Check/ });
+      await expect.poll(() => check.getByRole('heading').textContent()).toBe('Check: 1 problem');
+      await periodFrom.fill('2000');
+      // A probability lies between 0 and 1 (common practice, no source).
+      const occurrence = page.getByLabel('Occurrence, row 1');
+      await occurrence.fill('1.5');
+      await expect.poll(() => describedText(occurrence)).toMatch(/Must be between 0 and 1 \(got 1\.5\)/);
+      await occurrence.fill('0.105');
+      await expect.poll(() => check.getByRole('heading').textContent()).toBe('Check: no problems');
+
+      // Row 1 moved down: the document's rows follow.
+      await rows.getByRole('button', { name: 'Move down row 1' }).click();
+      await expect.poll(() => page.getByLabel('Label, row 1').inputValue()).toMatch(/^Giant planets, 2000/);
+      expect(await page.getByLabel('Label, row 2').inputValue()).toMatch(/^Giant planets, 2–2000/);
+      expect(await rows.getByRole('button', { name: 'Move up row 1' }).isDisabled()).toBe(true);
+      await stack.screenshot(page, 'builder-companion-rows');
+      await page.getByRole('button', { name: 'JSON', exact: true }).click();
+      const json = JSON.parse(await page.getByLabel('Scenario document (JSON)').inputValue());
+      expect(json.companions.rows.map((r: { label: string }) => r.label.slice(0, 18))).toEqual(['Giant planets, 200', 'Giant planets, 2–2', expect.any(String), expect.any(String)]);
+    } finally {
+      await context.close();
+    }
+  });
 });
 
 describe('overview', () => {

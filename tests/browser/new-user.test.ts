@@ -140,6 +140,20 @@ describe('observer', () => {
       await page.waitForURL(/\/occurrence-tables\/[A-Za-z0-9_-]{8,}$/);
       await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe('My own survey table');
       await page.getByRole('button', { name: /Delete/ }).first().waitFor();
+
+      // A row added and saved with a host-mass slope keeps it (a CSV has no column for it).
+      await page.getByRole('button', { name: 'Add a row' }).click();
+      await page.getByRole('button', { name: 'Save the rows' }).click();
+      const occurrence = page.getByLabel('Occurrence, row 1');
+      await expect.poll(() => describedText(occurrence)).toMatch(/Is required/);
+      expect(await page.getByText('Some rows have problems; they are marked in the table. Nothing was saved.').count()).toBe(1);
+      await occurrence.fill('0.08');
+      await page.getByLabel('Host-mass slope s, row 1').fill('1');
+      await page.getByRole('button', { name: 'Save the rows' }).click();
+      await page.getByText('Saved.', { exact: true }).waitFor();
+      await page.reload();
+      await expect.poll(() => page.getByLabel('Host-mass slope s, row 1').inputValue()).toBe('1');
+      expect(await page.getByLabel('Occurrence, row 1').inputValue()).toBe('0.08');
       await stack.screenshot(page, 'observer-own-table');
     } finally {
       await context.close();

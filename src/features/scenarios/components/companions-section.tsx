@@ -1,4 +1,4 @@
-import { useRef } from 'react';
+import { useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui/button.tsx';
 import { ErrorState } from '../../../components/ui/error-state.tsx';
@@ -8,12 +8,22 @@ import { paths } from '../../../config/paths.ts';
 import { cx } from '../../../lib/class-names.ts';
 import { useScenarioTables } from '../api/get-scenario-tables.ts';
 import { useBuilder } from './builder-context.tsx';
-import { DraftKind, DraftNumber, DraftRange, DraftSelect, DraftText } from './builder-fields.tsx';
+import { DraftNumber } from './builder-fields.tsx';
 import { BuilderSection, FieldGrid } from './builder-section.tsx';
 import { getAt, inputId, type DraftPath } from './scenario-draft.ts';
-import { chosenValue, massKeyOf, newCompanionRow, type KindChoice } from './scenario-options.ts';
-import { SHAPE_CHOICE } from '../../../../shared/contracts/method-choices.ts';
-import { COMPANION_CLASS_OPTIONS, MASS_UNITS, RowActions, shapeParameters } from '../../../components/companion-rows.tsx';
+import { newCompanionRow } from './scenario-options.ts';
+import { CompanionRowsEditor, type EditorRow } from '../../../components/companion-rows-editor.tsx';
+import {
+  CELL_ROW_KEYS,
+  cellsFromRow,
+  pathOfColumn,
+  rowCandidate,
+  type CellColumn,
+  type RowCells,
+} from '../../../../shared/contracts/occurrence-row-cells.ts';
+import { parseNumberText } from '../../../lib/number-input.ts';
+import { checkCells } from '../../../components/companion-row-cells.ts';
+import { moveItem } from '../../../lib/move-item.ts';
 
 /** A scenario holds at most this many inline rows (the schema's limit); longer tables are stored and named by id. */
 const MAX_ROWS = 32;
@@ -25,7 +35,6 @@ export function CompanionsSection() {
   const { doc, update, readOnly, messageAt, departmentId } = useBuilder();
   const tableId = getAt(doc, ['companions', 'tableId']);
   const rowsValue = getAt(doc, ROWS);
-  const rows = (Array.isArray(rowsValue) ? rowsValue : []) as Record<string, unknown>[];
   const usesTable = tableId !== undefined;
   // Rows set aside while a stored table is chosen, so that switching back restores them.
   const stash = useRef<Record<string, unknown>[] | null>(null);
@@ -80,31 +89,18 @@ export function CompanionsSection() {
       </fieldset>
 
       <FieldGrid>
-        <DraftNumber path={['companions', 'multiplier']} label="Occurrence multiplier" unit="×" hint="Scales every row’s occurrence, for what-if studies; each product must stay at most 1." />
+        <DraftNumber
+          path={['companions', 'multiplier']}
+          label="Occurrence multiplier"
+          unit="×"
+          hint="Scales every row’s occurrence, for what-if studies; each product must stay at most 1."
+        />
       </FieldGrid>
 
       {usesTable ? (
         <StoredTableChoice tables={tables} tableId={typeof tableId === 'string' ? tableId : ''} />
       ) : (
-        <div className="flex flex-col gap-4">
-          {rows.length === 0 && (
-            <p className="rounded-md border border-dashed border-ink-600 p-4 text-foam-300">
-              No companion rows: only the fossil channel, if it is on, can make magnetic white dwarfs.
-            </p>
-          )}
-          <ol className="flex flex-col gap-4">
-            {rows.map((row, index) => (
-              <CompanionRowEditor key={index} index={index} row={row} count={rows.length} />
-            ))}
-          </ol>
-          {!readOnly && (
-            <div>
-              <Button variant="secondary" disabled={rows.length >= MAX_ROWS} onClick={() => update(ROWS, [...rows, newCompanionRow()])}>
-                Add a companion row
-              </Button>
-            </div>
-          )}
-        </div>
+        <InlineRows value={rowsValue} />
       )}
     </BuilderSection>
   );
@@ -113,7 +109,15 @@ export function CompanionsSection() {
 function StoredTableChoice({ tables, tableId }: { tables: ReturnType<typeof useScenarioTables>; tableId: string }) {
   const { update, messageAt, readOnly } = useBuilder();
   if (tables.isPending) return <LoadingState label="Loading the stored tables…" />;
-  if (tables.isError) return <ErrorState error={tables.error} title="The stored tables could not be loaded" onRetry={() => void tables.refetch()} retrying={tables.isFetching} />;
+  if (tables.isError)
+    return (
+      <ErrorState
+        error={tables.error}
+        title="The stored tables could not be loaded"
+        onRetry={() => void tables.refetch()}
+        retrying={tables.isFetching}
+      />
+    );
   const list = tables.data.tables;
   const known = list.some((t) => t.id === tableId);
   return (
@@ -126,7 +130,9 @@ function StoredTableChoice({ tables, tableId }: { tables: ReturnType<typeof useS
         disabled={readOnly}
         hint={list.length === 0 ? 'The department has no stored table yet.' : undefined}
         options={[
-          ...(known ? [] : [{ value: tableId, label: tableId ? `Unknown table (${tableId})` : 'Choose a table…', disabled: true }]),
+          ...(known
+            ? []
+            : [{ value: tableId, label: tableId ? `Unknown table (${tableId})` : 'Choose a table…', disabled: true }]),
           ...list.map((t) => ({ value: t.id, label: `${t.name} (${t.rowCount} row${t.rowCount === 1 ? '' : 's'})` })),
         ]}
         onChange={(event) => update(['companions', 'tableId'], event.target.value)}
@@ -142,95 +148,120 @@ function StoredTableChoice({ tables, tableId }: { tables: ReturnType<typeof useS
   );
 }
 
-function CompanionRowEditor({ index, row, count }: { index: number; row: Record<string, unknown>; count: number }) {
-  const { doc, update, messageAt, readOnly } = useBuilder();
-  const path: DraftPath = [...ROWS, index];
-  const massKey = massKeyOf(row);
-  const massUnit = MASS_UNITS.find((u) => u.key === massKey)!;
-  const shapeChoice: KindChoice = { ...SHAPE_CHOICE, path: [...path, 'shape'] };
-  const shapeKind = chosenValue(row, SHAPE_CHOICE, ['shape']);
-  const multiplier = getAt(doc, ['companions', 'multiplier']);
-  const occurrence = row.occurrence;
-  const effective = typeof occurrence === 'number' && typeof multiplier === 'number' ? occurrence * multiplier : null;
-  const rows = getAt(doc, ROWS) as Record<string, unknown>[];
-  const sr = <span className="sr-only">, row {index + 1}</span>;
-  const title = `Row ${index + 1}${typeof row.label === 'string' && row.label ? `: ${row.label}` : ''}`;
+/** The path of a cell's value in the draft ("companions.rows[2].massMJup[1]"). */
+const cellPath = (index: number, column: CellColumn, cells: RowCells | undefined): DraftPath => [
+  ...ROWS,
+  index,
+  ...pathOfColumn(column, cells?.massUnit ?? 'MJup'),
+];
 
-  function changeUnit(key: string) {
-    const { massMJup, massMsun, massRatio, ...rest } = row;
-    const range = massMJup ?? massMsun ?? massRatio ?? [undefined, undefined];
-    update(path, { ...rest, [key]: range });
+/**
+ * The scenario's inline rows in the shared row editor. The editor holds each row as text cells
+ * while it is typed; each edit writes the row the cells describe (rowCandidate, the shared row
+ * reader's own reading) into the draft, where the scenario schema checks it. When the rows
+ * change from elsewhere (a preset, pasted JSON, Discard) the cells are read again from the draft.
+ */
+function InlineRows({ value }: { value: unknown }) {
+  const { doc, update, messageAt, readOnly } = useBuilder();
+  const rows = (Array.isArray(value) ? value : []) as Record<string, unknown>[];
+  const nextKey = useRef(0);
+  const read = (): { source: unknown; rows: EditorRow[] } => ({
+    source: value,
+    rows: rows.map((row) => ({ key: nextKey.current++, cells: cellsFromRow(row) })),
+  });
+  const [state, setState] = useState(read);
+  let current = state;
+  if (state.source !== value) {
+    current = read();
+    setState(current);
+  }
+  const multiplier = getAt(doc, ['companions', 'multiplier']);
+
+  function write(next: EditorRow[], draftRows: Record<string, unknown>[]) {
+    setState({ source: draftRows, rows: next });
+    update(ROWS, draftRows);
   }
 
+  /** The row the cells describe, keeping whatever else the draft's row holds. */
+  function draftRow(cells: RowCells, before: Record<string, unknown> | undefined): Record<string, unknown> {
+    const kept = Object.fromEntries(
+      Object.entries(before ?? {}).filter(([key]) => !(CELL_ROW_KEYS as readonly string[]).includes(key)),
+    );
+    return { ...kept, ...rowCandidate(cells, (text) => parseNumberText(text)) };
+  }
+
+  const full = current.rows.length >= MAX_ROWS;
+  const added = newCompanionRow();
   return (
-    <li className="rounded-lg border border-ink-700 bg-ink-900/60 p-4 sm:p-5">
-      <fieldset className="flex min-w-0 flex-col gap-5">
-        <legend className="sr-only">{title}</legend>
-        <div className="flex flex-wrap items-start justify-between gap-3">
-          <h3 className="text-lg font-bold text-foam-50" aria-hidden="true">
-            {title}
-          </h3>
-          {!readOnly && (
-            <RowActions
-              row={index + 1}
-              duplicateDisabled={count >= MAX_ROWS}
-              onDuplicate={() => update(ROWS, [...rows.slice(0, index + 1), structuredClone(row), ...rows.slice(index + 1)])}
-              onRemove={() => update(ROWS, rows.filter((_, j) => j !== index))}
-              className="flex flex-wrap gap-2"
-            />
-          )}
-        </div>
-        {messageAt(path) && <p className="text-sm font-bold text-coral-300">{messageAt(path)}</p>}
-        <FieldGrid columns={3}>
-          <DraftText path={[...path, 'label']} label={<>Label{sr}</>} maxLength={200} />
-          <DraftSelect path={[...path, 'class']} label={<>Class{sr}</>} options={COMPANION_CLASS_OPTIONS} />
-          <Select
-            id={inputId([...path, 'massUnit'])}
-            label={<>Mass given in{sr}</>}
-            value={massKey}
-            disabled={readOnly}
-            options={MASS_UNITS.map((u) => ({ value: u.key, label: u.label }))}
-            onChange={(event) => changeUnit(event.target.value)}
-          />
-        </FieldGrid>
-        <FieldGrid>
-          <DraftRange path={[...path, massKey]} label="Companion mass" srSuffix={`, row ${index + 1}`} unit={massUnit.unit} />
-          <DraftRange path={[...path, 'periodDays']} label="Initial orbital period" srSuffix={`, row ${index + 1}`} unit="days" />
-        </FieldGrid>
-        <FieldGrid>
-          <DraftNumber
-            path={[...path, 'occurrence']}
-            label={<>Occurrence{sr}</>}
-            unit="fraction"
-            hint={
-              <span className={cx(effective !== null && effective > 1 && 'font-bold text-coral-300')}>
-                Probability that a star hosts one such companion.
-                {effective !== null && Number.isFinite(effective) && ` With the multiplier: ${percent(effective)} of stars.`}
-              </span>
+    <div className="flex flex-col gap-4">
+      <CompanionRowsEditor
+        id="companion-rows"
+        rows={current.rows}
+        caption={`${current.rows.length} row${current.rows.length === 1 ? '' : 's'} of at most ${MAX_ROWS}`}
+        empty="No companion rows: only the fossil channel, if it is on, can make magnetic white dwarfs."
+        readOnly={readOnly}
+        full={full}
+        cellId={(index, column) => inputId(cellPath(index, column, current.rows[index]?.cells))}
+        errorAt={(index, column) => {
+          // Text that is not a number is said as such by the shared row reader; everything else as the scenario's check says it.
+          const cells = current.rows[index]?.cells;
+          const check = cells && Number.isNaN(parseNumberText(cells[column])) ? checkCells(cells) : null;
+          if (check && !check.ok) return check.problems.find((p) => p.column === column)?.message;
+          const path = cellPath(index, column, cells);
+          // A range's own problem (low not below high) and a shape's are named by the pair and the shape.
+          return (
+            messageAt(path) ?? (path.at(-1) === 0 || column === 'shape' ? messageAt(path.slice(0, -1)) : undefined)
+          );
+        }}
+        rowProblemAt={(index) => messageAt([...ROWS, index])}
+        occurrenceNote={(_, cells) => {
+          const occurrence = parseNumberText(cells.occurrence);
+          const effective = occurrence !== null && typeof multiplier === 'number' ? occurrence * multiplier : null;
+          if (effective === null || !Number.isFinite(effective)) return undefined;
+          return (
+            <span className={cx(effective > 1 && 'font-bold text-coral-300')}>
+              With the multiplier: {percent(effective)} of stars.
+            </span>
+          );
+        }}
+        onCellsChange={(index, patch) => {
+          const cells = { ...current.rows[index].cells, ...patch };
+          write(
+            current.rows.map((r, i) => (i === index ? { ...r, cells } : r)),
+            rows.map((r, i) => (i === index ? draftRow(cells, r) : r)),
+          );
+        }}
+        onRemove={(index) =>
+          write(
+            current.rows.filter((_, i) => i !== index),
+            rows.filter((_, i) => i !== index),
+          )
+        }
+        onDuplicate={(index) =>
+          write(
+            [
+              ...current.rows.slice(0, index + 1),
+              { key: nextKey.current++, cells: { ...current.rows[index].cells } },
+              ...current.rows.slice(index + 1),
+            ],
+            [...rows.slice(0, index + 1), structuredClone(rows[index]), ...rows.slice(index + 1)],
+          )
+        }
+        onMove={(index, to) => write(moveItem(current.rows, index, to), moveItem(rows, index, to))}
+      />
+      {!readOnly && (
+        <div>
+          <Button
+            variant="secondary"
+            disabled={full}
+            onClick={() =>
+              write([...current.rows, { key: nextKey.current++, cells: cellsFromRow(added) }], [...rows, added])
             }
-          />
-          <DraftKind choice={shapeChoice} label={<>Distribution inside the row{sr}</>} />
-        </FieldGrid>
-        <FieldGrid>
-          <DraftNumber
-            path={[...path, 'hostMassSlope']}
-            label={<>Host-mass slope{sr}</>}
-            unit="dimensionless"
-            hint="Occurrence × (M1 / 1 Msun)^slope, capped at 1 per star; empty or 0 = the same for every host. Giant planets grow more common with host mass (Johnson et al. 2010, from memory)."
-          />
-        </FieldGrid>
-        {shapeKind !== undefined && (
-          <FieldGrid>
-            {shapeParameters(shapeKind).map((p) => (
-              <DraftNumber key={p.key} path={[...path, 'shape', p.key]} label={<>{p.label}{sr}</>} unit={p.unit || 'dimensionless'} hint={p.hint} />
-            ))}
-          </FieldGrid>
-        )}
-        <FieldGrid>
-          <DraftText path={[...path, 'source']} label={<>Source{sr}</>} hint="Paper, table, equation." multiline maxLength={2000} />
-          <DraftText path={[...path, 'assumed']} label={<>Assumed{sr}</>} hint="What was assumed where the source is silent." multiline maxLength={2000} />
-        </FieldGrid>
-      </fieldset>
-    </li>
+          >
+            Add a companion row
+          </Button>
+        </div>
+      )}
+    </div>
   );
 }

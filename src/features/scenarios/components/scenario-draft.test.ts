@@ -87,6 +87,11 @@ describe('draft helpers', () => {
     expect(sameDocument({ a: [1, 2] }, { a: [2, 1] })).toBe(false);
   });
 
+  it('compares a draft holding NaN without throwing (text typed into a number field crashed the builder)', () => {
+    expect(sameDocument({ envelope: { alpha: Number.NaN } }, { envelope: { alpha: 1 } })).toBe(false);
+    expect(sameDocument({ rows: [[Number.NaN, 2]] }, { rows: [[Number.NaN, 2]] })).toBe(true);
+  });
+
   it('reads pasted JSON or says why it cannot', () => {
     expect(parseDraftJson('{"seed":"x"}')).toEqual({ ok: true, doc: { seed: 'x' } });
     expect(parseDraftJson('[1]')).toMatchObject({ ok: false });

@@ -152,10 +152,17 @@ export function defaultDraft(seed: string = newSeed()): Draft {
   return resolvedDraft({ seed });
 }
 
-/** Key order does not matter; everything else does (RFC 8785 canonical JSON, as the scenario hash uses). */
+/**
+ * Key order does not matter; everything else does (RFC 8785 canonical JSON, as the scenario hash
+ * uses). A draft may hold NaN (text typed into a number field), which JSON and canonicalize
+ * refuse: it is compared as the word "NaN".
+ */
 export function sameDocument(a: unknown, b: unknown): boolean {
-  return canonicalize(a) === canonicalize(b);
+  return canonicalize(jsonSafe(a)) === canonicalize(jsonSafe(b));
 }
+
+const jsonSafe = (value: unknown): unknown =>
+  value === undefined ? value : JSON.parse(JSON.stringify(value, (_key, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? String(v) : v)));
 
 /** The draft as the JSON a power user reads or pastes (NaN, which JSON lacks, shows as null). */
 export function draftJson(doc: unknown): string {

@@ -12,7 +12,7 @@ import {
   SUPERWIND_CHOICE,
   TIDE_CHOICE,
 } from '../../../../shared/contracts/method-choices.ts';
-import { massKeyOf, newCompanionRow } from './scenario-options.ts';
+import { newCompanionRow } from './scenario-options.ts';
 
 describe('scenario options', () => {
   const base = defaultDraft('options-test');
@@ -45,11 +45,5 @@ describe('scenario options', () => {
       const doc = setAt(base, ['companions', 'rows'], [{ ...newCompanionRow(), shape: shape.template }]);
       expect(draftIssues(doc)).toEqual([]);
     }
-  });
-
-  it('reads the mass unit a row uses', () => {
-    expect(massKeyOf({ massMsun: [0.1, 0.5] })).toBe('massMsun');
-    expect(massKeyOf({ massRatio: [0.1, 1] })).toBe('massRatio');
-    expect(massKeyOf({})).toBe('massMJup');
   });
 });

@@ -1,6 +1,5 @@
 import { getAt, type DraftPath } from './scenario-draft.ts';
 import { optionOf, SHAPE_CHOICE, type MethodChoice, type MethodOption, type ValueOf } from '../../../../shared/contracts/method-choices.ts';
-import { MASS_UNITS, type MassKey } from '../../../components/companion-rows.tsx';
 
 /**
  * The builder's view of the scenario's choices between published methods. Each choice (values,
@@ -18,10 +17,6 @@ export type KindChoice = MethodChoice & { path: DraftPath };
  */
 export function chosenValue<C extends MethodChoice>(doc: unknown, choice: C, at: DraftPath = choice.path): ValueOf<C> | undefined {
   return optionOf(choice, getAt(doc, [...at, choice.discriminator]))?.value as ValueOf<C> | undefined;
-}
-/** The mass key a row uses (the first present; a new row starts in Jupiter masses). */
-export function massKeyOf(row: Record<string, unknown>): MassKey {
-  return MASS_UNITS.find((u) => row[u.key] !== undefined)?.key ?? 'massMJup';
 }
 
 /** A new companion row: a log-uniform band of giant planets, to be edited. */

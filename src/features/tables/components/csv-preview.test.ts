@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { csvTemplate, linesToShow, previewLines } from './csv-preview.ts';
 import type { RowCells } from '../../../../shared/contracts/occurrence-row-cells.ts';
-import { checkCells } from './row-cells.ts';
+import { checkCells } from '../../../components/companion-row-cells.ts';
 
 describe('previewLines', () => {
   const csv = 'class,massUnit,occurrence\nplanet,MJup,0.1\n\ncomet,MJup,5\nstar,q,0.2\n';

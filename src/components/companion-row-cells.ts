@@ -1,13 +1,19 @@
-import { columnOfPath, pathOfField, readRowCells, type CellColumn, type RowCells } from '../../../../shared/contracts/occurrence-row-cells.ts';
-import type { CompanionRow } from '../../../../shared/contracts/occurrence-table.ts';
-import { parseNumberText } from '../../../lib/number-input.ts';
+import {
+  columnOfPath,
+  pathOfField,
+  readRowCells,
+  type CellColumn,
+  type RowCells,
+} from '../../shared/contracts/occurrence-row-cells.ts';
+import type { CompanionRow } from '../../shared/contracts/occurrence-table.ts';
+import { parseNumberText } from '../lib/number-input.ts';
 
 /**
- * The row editor's cells are the CSV's columns (OCCURRENCE_CSV_COLUMNS), held as text while
- * they are typed, and read by the same reader as the server's CSV upload
- * (shared/contracts/occurrence-row-cells.ts), so that a problem from the live check, from a CSV
- * preview or from the server ("rows.3.occurrence") is named by the same column and lands in the
- * same cell.
+ * The companion-row editor's cells (shared/contracts/occurrence-row-cells.ts: the CSV's columns
+ * and the host-mass slope), held as text while they are typed, and read by the same reader as the
+ * server's CSV upload, so that a problem from the live check, from a CSV preview or from the
+ * server ("rows.3.occurrence") is named by the same column and lands in the same cell. Here, the
+ * client's side of it: the words shown in a cell and where a server's answer belongs.
  */
 
 /** A new row to fill in: giant planets, log-uniform. */
@@ -25,6 +31,7 @@ export function blankCells(): RowCells {
     periodSlope: '0',
     meanLog10PeriodDays: '',
     sigmaLog10Period: '',
+    hostMassSlope: '',
     label: '',
     source: '',
     assumed: '',
@@ -50,7 +57,10 @@ export type RowCheck = { ok: true; row: CompanionRow } | { ok: false; problems: 
 export function checkCells(cells: RowCells): RowCheck {
   const check = readRowCells(cells, (text) => parseNumberText(text));
   if (check.ok) return check;
-  return { ok: false, problems: check.problems.map(({ column, field, message }) => ({ column, message: cellMessage(field, message) })) };
+  return {
+    ok: false,
+    problems: check.problems.map(({ column, field, message }) => ({ column, message: cellMessage(field, message) })),
+  };
 }
 
 /** Where the server's error of a rows save belongs: "rows.3.occurrence" → row 3, column occurrence. */

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import type { CompanionRow } from '../../../../shared/contracts/occurrence-table.ts';
-import { cellsFromRow, columnOfPath } from '../../../../shared/contracts/occurrence-row-cells.ts';
-import { blankCells, cellOfServerField, checkCells, serverCellMessage } from './row-cells.ts';
+import type { CompanionRow } from '../../shared/contracts/occurrence-table.ts';
+import { cellsFromRow, columnOfPath } from '../../shared/contracts/occurrence-row-cells.ts';
+import { blankCells, cellOfServerField, checkCells, serverCellMessage } from './companion-row-cells.ts';
 
 // The first row of the baseline table (shared/scenarios/baseline-occurrence.json).
 const cumming: CompanionRow = {
