@@ -20,6 +20,7 @@ import { whiteDwarfRadiusRsun } from '../physics/white-dwarf-radius-nauenberg197
 import { chunkUniform } from '../random.ts';
 import { CHUNK_SYSTEMS } from '../version.ts';
 import { BINS, binIndex } from './bins.ts';
+import { LOG_BIN_LOOKUPS, logBinIndex } from './log-bins.ts';
 import { companionMassDraw, companionPeriodDaysDraw } from './companion-draws.ts';
 import { surelyNotWhiteDwarf } from './formation-screen.ts';
 import type { PreparedTrack } from './engulfment.ts';
@@ -479,21 +480,21 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
     if (out.present[r] === 0) continue;
     const fate = out.fate[r];
     if (rowMassBin[r] < 0) {
-      rowMassBin[r] = binIndex(BINS.log10CompanionMsun, Math.log10(rowMass[r]));
-      rowPeriodBin[r] = binIndex(BINS.log10PeriodDays, Math.log10(rowPeriod[r]));
+      rowMassBin[r] = logBinIndex(LOG_BIN_LOOKUPS.log10CompanionMsun, rowMass[r]);
+      rowPeriodBin[r] = logBinIndex(LOG_BIN_LOOKUPS.log10PeriodDays, rowPeriod[r]);
     }
     tally.companionFates[fate] += sign;
     tally.fateMap[(fate * massBins + rowMassBin[r]) * periodBins + rowPeriodBin[r]] += sign;
-    if (fate === WIDE || fate === POST_CE) tally.survivorSeparation[fate * separationBins + binIndex(BINS.log10SeparationAU, Math.log10(out.separation[r]))] += sign;
+    if (fate === WIDE || fate === POST_CE) tally.survivorSeparation[fate * separationBins + logBinIndex(LOG_BIN_LOOKUPS.log10SeparationAU, out.separation[r])] += sign;
   }
 
   const setting = out.setting;
   const bestChannel = out.bestChannel;
   tally.settingWhiteDwarfs[setting] += sign;
   const massBin = binIndex(BINS.wdMassMsun, out.mwd);
-  const coolingBin = binIndex(BINS.log10CoolingAgeGyr, Math.log10(cooling));
+  const coolingBin = logBinIndex(LOG_BIN_LOOKUPS.log10CoolingAgeGyr, cooling);
   if (out.bestField > 0) {
-    const fieldBin = binIndex(BINS.log10FieldMG, Math.log10(out.bestField));
+    const fieldBin = logBinIndex(LOG_BIN_LOOKUPS.log10FieldMG, out.bestField);
     tally.logField[fieldBin] += sign;
     tally.logFieldByChannel[bestChannel * fieldBins + fieldBin] += sign;
   }
@@ -509,7 +510,7 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
   }
   tally.wdMassBySetting[(setting * 2 + split) * wdMassBins + massBin] += sign;
   tally.coolingAge[split * coolingBins + coolingBin] += sign;
-  if (setting === POST_CE_SETTING) tally.postCEPeriod[split * postCEPeriodBins + binIndex(BINS.log10PostCEPeriodDays, Math.log10(out.closestPostCEPeriod))] += sign;
+  if (setting === POST_CE_SETTING) tally.postCEPeriod[split * postCEPeriodBins + logBinIndex(LOG_BIN_LOOKUPS.log10PostCEPeriodDays, out.closestPostCEPeriod)] += sign;
   const smallestMultiplier = out.smallestMultiplier;
   if (smallestMultiplier === 0) tally.multiplierFossil += sign;
   else if (smallestMultiplier < Infinity) {
