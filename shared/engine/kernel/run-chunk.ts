@@ -11,7 +11,7 @@ import { lognormalFieldMG } from '../physics/field-lognormal.ts';
 import { fossilFieldMG } from '../physics/fossil-field.ts';
 import { finalMassMsun } from '../physics/ifmr-piecewise.ts';
 import { sampleImfLog10Msun } from '../physics/imf-sampler.ts';
-import { periodDays as keplerPeriodDays, semiMajorAxisAU } from '../physics/kepler.ts';
+import { periodDays as keplerPeriodDays, semiMajorAxisCubedAU3 } from '../physics/kepler.ts';
 import { mainSequenceRadiusRsun } from '../physics/main-sequence-radius-demircan1991.ts';
 import { widenedSeparationAU } from '../physics/orbit-mass-loss.ts';
 import { rgbTipCoreMassMsun } from '../physics/rgb-tip-core-mass.ts';
@@ -22,6 +22,7 @@ import { whiteDwarfRadiusRsun } from '../physics/white-dwarf-radius-nauenberg197
 import { chunkUniform } from '../random.ts';
 import { CHUNK_SYSTEMS } from '../version.ts';
 import { BINS, binIndex } from './bins.ts';
+import { LOG_BIN_LOOKUPS, logBinIndex } from './log-bins.ts';
 import { companionMassDraw, companionPeriodDaysDraw } from './companion-draws.ts';
 import { surelyNotWhiteDwarf } from './formation-screen.ts';
 import type { PreparedTrack } from './engulfment.ts';
@@ -49,6 +50,12 @@ const HALF_STEP = 2 ** -33;
 const MAX_ROWS = 32;
 /** An onset core mass this close above the red-giant tip still counts as a red-giant-branch ejection (the tables' interpolation smears the tip). */
 const HELIUM_CORE_MARGIN_MSUN = 0.005;
+/**
+ * a^3 above reach^3 by this relative margin is outside the reach without a cube root: the margin
+ * (a^3 ≥ reach^3 (1 + 1e-9) gives a ≥ reach (1 + 3e-10)) is far above the ~1e-16 rounding of
+ * Math.cbrt and of reach^3, so the test agrees exactly with a0 < reach.
+ */
+const OUTSIDE_REACH_MARGIN = 1 + 1e-9;
 
 /**
  * What the kernel needs of one parameter point: the values of the draw-free parameters (see
@@ -109,7 +116,8 @@ const rowPeriod = new Float64Array(MAX_ROWS);
 /** Fate-map bins of mass and initial period (computed on first use). */
 const rowMassBin = new Int32Array(MAX_ROWS);
 const rowPeriodBin = new Int32Array(MAX_ROWS);
-/** Initial semi-major axis (AU) and the widened one of a wide survivor. */
+/** Initial semi-major axis cubed (AU^3); the axis itself (AU, NaN until needed) and the widened one of a wide survivor. */
+const rowA0Cubed = new Float64Array(MAX_ROWS);
 const rowA0 = new Float64Array(MAX_ROWS);
 const rowWideAU = new Float64Array(MAX_ROWS);
 /** track: 1 iff the giant engulfs the companion (then the onset state below is set at the draw). */
@@ -134,6 +142,10 @@ const rowDisruptionGroup = new Int32Array(MAX_ROWS);
 const rowDisruptionField = new Float64Array(MAX_ROWS);
 const rowCloseGroup = new Int32Array(MAX_ROWS);
 const rowCloseField = new Float64Array(MAX_ROWS);
+
+/** The current system's field uniform and its normal deviate (NaN until a field needs it: a quantile only where a field is made). */
+let fieldUniform = 0;
+let fieldDeviate = NaN;
 
 /** One system's outcome at one point: what the tallies count. */
 class Outcome {
@@ -219,7 +231,8 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
     const ifmrMass = finalMassMsun(ifmr, m1);
     const cooling = age - tms;
     const uSelect = magnitudeLimited ? rng() : 0;
-    const z = normalQuantile(rng() + HALF_STEP);
+    fieldUniform = rng();
+    fieldDeviate = NaN;
 
     let uFossil = 1;
     let zFossil = 0;
@@ -244,7 +257,7 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
       if (row.massIsRatio) m2 *= m1;
       const periodDays = companionPeriodDaysDraw(row, uPeriod);
       drawnCompanion(r, u, occurrence, drawThreshold, m1, m2, periodDays, track);
-      if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : rowA0[r] < spread.maxReachAU)) varies = true;
+      if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : insideReach(r, spread.maxReachAU))) varies = true;
       if (spread.multiplierVaries && (row.hostMassSlope !== 0 || (u >= spread.minPresent[r] && u < spread.maxPresent[r]))) varies = true;
     }
     const pointsToEvaluate = varies ? pointCount : 1;
@@ -253,7 +266,7 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
     let acceptanceAtIfmr = NaN;
     for (let p = 0; p < pointsToEvaluate; p++) {
       const out = p === 0 ? reference : current;
-      evaluatePoint(prepared, points[p], out, m1, ifmrMass, cooling, z, uFossil, zFossil);
+      evaluatePoint(prepared, points[p], out, m1, ifmrMass, cooling, uFossil, zFossil);
       if (out.accepted && magnitudeLimited) {
         const selection = prepared.selection as Extract<PreparedScenario['selection'], { kind: 'magnitudeLimited' }>;
         let accept: number;
@@ -329,9 +342,10 @@ function drawnCompanion(r: number, u: number, occurrence: number, drawThreshold:
   rowEnvelopeGroup[r] = -1;
   rowDisruptionGroup[r] = -1;
   rowCloseGroup[r] = -1;
-  const a0 = semiMajorAxisAU(periodDays, m1 + m2);
-  rowA0[r] = a0;
+  rowA0Cubed[r] = semiMajorAxisCubedAU3(periodDays, m1 + m2);
+  rowA0[r] = NaN;
   if (track) {
+    const a0 = initialSeparationAU(r);
     const engulfed = commonEnvelopeOnset(track.grid, m1, m2, a0, onsetOut);
     rowEngulfed[r] = engulfed ? 1 : 0;
     if (engulfed) {
@@ -343,11 +357,29 @@ function drawnCompanion(r: number, u: number, occurrence: number, drawThreshold:
   }
 }
 
+/** Companion r's initial semi-major axis (AU), its cube root taken on first use. */
+function initialSeparationAU(r: number): number {
+  if (Number.isNaN(rowA0[r])) rowA0[r] = Math.cbrt(rowA0Cubed[r]); // = semiMajorAxisAU (kepler.ts)
+  return rowA0[r];
+}
+
+/** a0 < reachAU for companion r, without the cube root for orbits well outside the reach. */
+function insideReach(r: number, reachAU: number): boolean {
+  if (rowA0Cubed[r] > reachAU * reachAU * reachAU * OUTSIDE_REACH_MARGIN) return false;
+  return initialSeparationAU(r) < reachAU;
+}
+
+/** The current system's field deviate (a standard normal), its quantile taken on first use. */
+function fieldDeviateZ(): number {
+  if (Number.isNaN(fieldDeviate)) fieldDeviate = normalQuantile(fieldUniform + HALF_STEP);
+  return fieldDeviate;
+}
+
 /**
  * The current system's outcome at one point, before the magnitude-limited selection (`accepted`
  * is true here; the caller applies the selection with out.mwd).
  */
-function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, out: Outcome, m1: number, ifmrMass: number, cooling: number, z: number, uFossil: number, zFossil: number): void {
+function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, out: Outcome, m1: number, ifmrMass: number, cooling: number, uFossil: number, zFossil: number): void {
   const rows = prepared.rows;
   const threshold = point.field.thresholdMG;
   const fieldsEmerged = cooling >= point.field.emergenceDelayGyr;
@@ -361,11 +393,11 @@ function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, out: Ou
   for (let r = 0; r < rows.length; r++) {
     out.present[r] = 0;
     if (rowDrawn[r] === 0) continue;
-    companionFate(prepared, point, r, m1, ifmrMass, z);
-    const fate = fateOut[0];
     const u = rowU[r];
     const occurrence = rowOccurrence[r];
     const present = u < (rows[r].hostMassSlope === 0 ? point.presentThresholds[r] : Math.min(rowDrawThreshold[r], occurrence * point.multiplier));
+    companionFate(prepared, point, r, m1, ifmrMass, present);
+    const fate = fateOut[0];
     const companionField = fieldsEmerged ? fateOut[1] : 0;
     if (companionField >= threshold) {
       const m = u / occurrence;
@@ -450,21 +482,21 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
     if (out.present[r] === 0) continue;
     const fate = out.fate[r];
     if (rowMassBin[r] < 0) {
-      rowMassBin[r] = binIndex(BINS.log10CompanionMsun, Math.log10(rowMass[r]));
-      rowPeriodBin[r] = binIndex(BINS.log10PeriodDays, Math.log10(rowPeriod[r]));
+      rowMassBin[r] = logBinIndex(LOG_BIN_LOOKUPS.log10CompanionMsun, rowMass[r]);
+      rowPeriodBin[r] = logBinIndex(LOG_BIN_LOOKUPS.log10PeriodDays, rowPeriod[r]);
     }
     tally.companionFates[fate] += sign;
     tally.fateMap[(fate * massBins + rowMassBin[r]) * periodBins + rowPeriodBin[r]] += sign;
-    if (fate === WIDE || fate === POST_CE) tally.survivorSeparation[fate * separationBins + binIndex(BINS.log10SeparationAU, Math.log10(out.separation[r]))] += sign;
+    if (fate === WIDE || fate === POST_CE) tally.survivorSeparation[fate * separationBins + logBinIndex(LOG_BIN_LOOKUPS.log10SeparationAU, out.separation[r])] += sign;
   }
 
   const setting = out.setting;
   const bestChannel = out.bestChannel;
   tally.settingWhiteDwarfs[setting] += sign;
   const massBin = binIndex(BINS.wdMassMsun, out.mwd);
-  const coolingBin = binIndex(BINS.log10CoolingAgeGyr, Math.log10(cooling));
+  const coolingBin = logBinIndex(LOG_BIN_LOOKUPS.log10CoolingAgeGyr, cooling);
   if (out.bestField > 0) {
-    const fieldBin = binIndex(BINS.log10FieldMG, Math.log10(out.bestField));
+    const fieldBin = logBinIndex(LOG_BIN_LOOKUPS.log10FieldMG, out.bestField);
     tally.logField[fieldBin] += sign;
     tally.logFieldByChannel[bestChannel * fieldBins + fieldBin] += sign;
   }
@@ -480,7 +512,7 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
   }
   tally.wdMassBySetting[(setting * 2 + split) * wdMassBins + massBin] += sign;
   tally.coolingAge[split * coolingBins + coolingBin] += sign;
-  if (setting === POST_CE_SETTING) tally.postCEPeriod[split * postCEPeriodBins + binIndex(BINS.log10PostCEPeriodDays, Math.log10(out.closestPostCEPeriod))] += sign;
+  if (setting === POST_CE_SETTING) tally.postCEPeriod[split * postCEPeriodBins + logBinIndex(LOG_BIN_LOOKUPS.log10PostCEPeriodDays, out.closestPostCEPeriod)] += sign;
   const smallestMultiplier = out.smallestMultiplier;
   if (smallestMultiplier === 0) tally.multiplierFossil += sign;
   else if (smallestMultiplier < Infinity) {
@@ -500,14 +532,15 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
  * gets a field iff that channel is on. What does not depend on the point is computed once per
  * companion and kept in the row arrays.
  */
-function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: number, m1: number, ifmrMass: number, z: number): void {
+function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: number, m1: number, ifmrMass: number, present: boolean): void {
   const m2 = rowMass[r];
-  const a0 = rowA0[r];
   const fixedReach = prepared.giant.kind === 'fixedReach';
-  if (fixedReach ? !(a0 < point.reachAU) : rowEngulfed[r] === 0) {
-    if (Number.isNaN(rowWideAU[r])) rowWideAU[r] = widenedSeparationAU(a0, m1 + m2, ifmrMass + m2);
+  if (fixedReach ? !insideReach(r, point.reachAU) : rowEngulfed[r] === 0) {
+    // Only a present companion's separation is tallied.
+    if (present && Number.isNaN(rowWideAU[r])) rowWideAU[r] = widenedSeparationAU(initialSeparationAU(r), m1 + m2, ifmrMass + m2);
     return survivor(WIDE, rowWideAU[r]);
   }
+  const a0 = initialSeparationAU(r);
   if (rowEnvelopeReady[r] === 0) {
     if (fixedReach) {
       // fixedReach: the envelope engulfs the companion at R = a0, with the final core and the full envelope.
@@ -547,7 +580,7 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: numb
       const close = point.field.closeSurvivor;
       if (prepared.channels.closeSurvivor && finalPeriod < close.maxPeriodDays) {
         if (rowCloseGroup[r] !== point.closeFieldGroup) {
-          rowCloseField[r] = lognormalFieldMG(close.medianMG, close.widthDex, z);
+          rowCloseField[r] = lognormalFieldMG(close.medianMG, close.widthDex, fieldDeviateZ());
           rowCloseGroup[r] = point.closeFieldGroup;
         }
         fateOut[1] = rowCloseField[r];
@@ -573,7 +606,7 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: numb
     return;
   }
   if (rowDisruptionGroup[r] !== point.disruptionFieldGroup) {
-    rowDisruptionField[r] = disruptionFieldMG(point, coreMass, coreRadius, m2, r2, z);
+    rowDisruptionField[r] = disruptionFieldMG(point, coreMass, coreRadius, m2, r2, fieldDeviateZ());
     rowDisruptionGroup[r] = point.disruptionFieldGroup;
   }
   fateOut[1] = rowDisruptionField[r];

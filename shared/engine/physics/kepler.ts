@@ -9,8 +9,13 @@ const TWO_PI = 2 * Math.PI;
  * Example: P = 365.25636 d, M = 1 + 3.0e-6 Msun (Sun + Earth) gives a ≈ 1.0000 AU.
  */
 export function semiMajorAxisAU(periodDays: number, totalMassMsun: number): number {
+  return Math.cbrt(semiMajorAxisCubedAU3(periodDays, totalMassMsun));
+}
+
+/** a^3 in AU^3 (the same law before the cube root), for comparing an orbit with a radius without taking the root. */
+export function semiMajorAxisCubedAU3(periodDays: number, totalMassMsun: number): number {
   const x = (GAUSS_K * periodDays) / TWO_PI;
-  return Math.cbrt(totalMassMsun * x * x);
+  return totalMassMsun * x * x;
 }
 
 /** Inverse of semiMajorAxisAU: the orbital period in days for a in AU and M in Msun. */
