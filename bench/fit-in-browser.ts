@@ -35,14 +35,14 @@ const POLL_MS = 5_000;
 /**
  * The grid. The multiplier scales every companion row's occurrence; its upper end stays below
  * 1 / 0.23 (the M-dwarf row's occurrence in baseline-track.json), where an occurrence would pass
- * 1. α_CE from 0.02 to 2 spans the efficiencies fitted to post-common-envelope binaries (≈ 0.2–0.3,
+ * 1. α_CE from 0.01 (the scenario schema's lower bound) to 2 spans the efficiencies fitted to post-common-envelope binaries (≈ 0.2–0.3,
  * Zorotovic et al. 2010, A&A 520, A86, from memory) with room on both sides, including values
  * above 1 that need energy sources besides the orbit. Both are scale parameters: log spacing and
  * log-uniform priors.
  */
 const GRID = [
   { path: 'companions.multiplier', from: 0.1, to: 4 },
-  { path: 'envelope.alpha', from: 0.02, to: 2 },
+  { path: 'envelope.alpha', from: 0.01, to: 2 },
 ];
 
 const line = (label: string, value: string) => process.stdout.write(`${label.padEnd(44)} ${value}\n`);
@@ -162,7 +162,7 @@ async function main() {
     const detail = (await (await page.request.get(`/api/fits/${fitId}`)).json()) as { createdAt: string; finishedAt: string | null; status: string };
     line('grid', `${POINTS} × ${POINTS} points × ${SYSTEMS.toLocaleString('en-US')} systems (${(POINTS * POINTS * SYSTEMS).toExponential(1)} system-evaluations)`);
     line('fit status', detail.status);
-    line('progress values seen', `${seen.length} (${seen.join(', ')})`);
+    line('progress values seen', `${seen.length}: ${seen.join(' | ')}`);
     line('wall time, submit → intervals shown', seconds(finished - submitted));
     line('wall time, submit → corner plot drawn', seconds(rendered - submitted));
     if (detail.finishedAt) line('server: created → posterior stored', seconds(Date.parse(detail.finishedAt) - Date.parse(detail.createdAt)));

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { FitPosterior } from '../../../../shared/contracts/fits.ts';
-import { cellEdges, gridScale, pairSpec } from './fit-chart-specs.ts';
+import { cellEdges, gridScale, logTicks, pairSpec } from './fit-chart-specs.ts';
 
 /** A 20 × 20 posterior as a large fit returns it (only the fields the corner plot reads are filled). */
 function posterior20(): FitPosterior {
@@ -49,6 +49,16 @@ describe('corner plot of a 20 × 20 fit', () => {
   it('axes span exactly the grid, not rounded out to whole decades', () => {
     expect(gridScale([0.1, 1, 4], true)).toEqual({ type: 'log', domain: [0.1, 4], nice: false });
     expect(gridScale([0.2, 0.6], false)).toMatchObject({ domain: [0.2, 0.6], nice: false, zero: false });
+  });
+
+  // Common practice, no source: log axes are labelled at 1, 2 and 5 times the powers of ten.
+  it('labels a log axis at 1-2-5 values and at the grid’s ends when no label is close', () => {
+    expect(logTicks(0.01, 2)).toEqual([0.01, 0.02, 0.05, 0.1, 0.2, 0.5, 1, 2]);
+    expect(logTicks(0.1, 4)).toEqual([0.1, 0.2, 0.5, 1, 2, 4]);
+    // The ends are labelled when no 1-2-5 tick is within a factor 1.5 (0.05 / 0.03 = 1.67, 4.4 / 2 = 2.2) …
+    expect(logTicks(0.03, 4.4)).toEqual([0.03, 0.05, 0.1, 0.2, 0.5, 1, 2, 4.4]);
+    // … and left out when one is (0.02 / 0.015 = 1.33), so no two labels touch.
+    expect(logTicks(0.015, 1)).toEqual([0.02, 0.05, 0.1, 0.2, 0.5, 1]);
   });
 
   it('draws 400 cells tiling the plane without gaps and marks the best grid point', () => {

@@ -33,10 +33,33 @@ export function gridScale(values: readonly number[], log: boolean) {
   return log ? { type: 'log' as const, domain, nice: false } : { type: 'linear' as const, domain, nice: false, zero: false };
 }
 
+/**
+ * Tick values of a log axis over [lo, hi]: 1, 2 and 5 times the powers of ten inside it, and the
+ * grid's ends unless a tick lies within a factor 1.5 of them (so no two labels touch). Vega's own
+ * log ticks label every integer multiple of a decade (crowding "0.02 0.03 0.04") and can drop
+ * the domain's ends by rounding.
+ */
+export function logTicks(lo: number, hi: number): number[] {
+  const ticks: number[] = [];
+  for (let e = Math.floor(Math.log10(lo)); e <= Math.ceil(Math.log10(hi)); e++) {
+    for (const m of [1, 2, 5]) {
+      const t = Number((m * 10 ** e).toPrecision(12));
+      if (t >= lo * (1 - 1e-9) && t <= hi * (1 + 1e-9)) ticks.push(t);
+    }
+  }
+  const far = (end: number) => ticks.every((t) => Math.abs(Math.log(t / end)) > Math.log(1.5));
+  return [...(far(lo) ? [lo] : []), ...ticks, ...(far(hi) ? [hi] : [])];
+}
+
+/** A parameter's axis: its title, and on a log grid the ticks of logTicks (labels never overlap either way). */
+export function gridAxis(values: readonly number[], log: boolean, title: string) {
+  return { title, labelOverlap: 'greedy' as const, format: '~g', ...(log ? { values: logTicks(values[0], values[values.length - 1]) } : {}) };
+}
+
 /** A marginal posterior: the curve, with the central 95% interval shaded light and the 68% one darker. */
 export function marginalSpec(m: Marginal, iv: Interval, title: string, log: boolean): VisualizationSpec {
   const rows = marginalRows(m, iv);
-  const x = { field: 'x', type: 'quantitative' as const, title, scale: gridScale(m.values, log) };
+  const x = { field: 'x', type: 'quantitative' as const, axis: gridAxis(m.values, log, title), scale: gridScale(m.values, log) };
   const y = { field: 'density', type: 'quantitative' as const, title: 'Posterior density' };
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
@@ -106,8 +129,8 @@ export function pairSpec(post: FitPosterior, a: number, b: number): Visualizatio
     return { ...r, x0: x, x1: x2, y0: y, y1: y2 };
   });
   const best = { x: post.bestPoint.values[pa.path], y: post.bestPoint.values[pb.path] };
-  const x = { field: 'x0', type: 'quantitative' as const, title: axisTitle(pa), scale: gridScale(pa.values, pa.scale === 'log') };
-  const y = { field: 'y0', type: 'quantitative' as const, title: axisTitle(pb), scale: gridScale(pb.values, pb.scale === 'log') };
+  const x = { field: 'x0', type: 'quantitative' as const, axis: gridAxis(pa.values, pa.scale === 'log', axisTitle(pa)), scale: gridScale(pa.values, pa.scale === 'log') };
+  const y = { field: 'y0', type: 'quantitative' as const, axis: gridAxis(pb.values, pb.scale === 'log', axisTitle(pb)), scale: gridScale(pb.values, pb.scale === 'log') };
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     width: 'container',
