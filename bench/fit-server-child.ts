@@ -1,10 +1,10 @@
-import path from 'node:path';
 import { createInterface } from 'node:readline';
-import { PROJECT_ROOT, type DbConnection } from '../scripts/mariadb.ts';
+import type { DbConnection } from '../scripts/mariadb.ts';
 import { testConfig } from '../server/config.ts';
 import { startFakesOnFreePorts } from '../server/fakes/local-fakes.ts';
 import { startServer } from '../server/index.ts';
 import { seedDemo } from '../server/seed/demo.ts';
+import { builtAppConfig } from '../tests/support/browser-driver.ts';
 
 /**
  * Child process of `npm run bench:fit-browser`: the app as the browser tests run it (built
@@ -25,13 +25,7 @@ const server = await startServer(
     DB_PASSWORD: conn.password,
     DB_NAME: conn.database,
     ...fakes.config,
-    NODE_ENV: 'production',
-    PORT: 0,
-    HOST: '127.0.0.1',
-    CLIENT_DIST: path.join(PROJECT_ROOT, 'dist/client'),
-    WORKER_THREADS: 2,
-    LOG_LEVEL: 'warn',
-    DEMO_PASSWORD: demoPassword,
+    ...builtAppConfig(demoPassword),
   }),
 );
 await seedDemo(server.database.db, demoPassword);

@@ -10,6 +10,8 @@ import { chromium, type Browser, type BrowserContext, type Page } from 'playwrig
 import { CHROMIUM_ARGS } from '../../scripts/chromium.ts';
 import { DEMO_USERS } from '../../server/seed/demo.ts';
 import type { Role } from '../../shared/contracts/roles.ts';
+import type { Config } from '../../server/config.ts';
+import { PROJECT_ROOT } from '../../scripts/mariadb.ts';
 
 export interface BrowserDriver {
   browser: Browser;
@@ -20,6 +22,19 @@ export interface BrowserDriver {
   /** A full-page PNG in the driver's artifacts folder; returns its path. */
   screenshot(page: Page, name: string): Promise<string>;
   close(): Promise<void>;
+}
+
+/** The app as the browser suite serves it: the built client, two pool threads, on a free loopback port. */
+export function builtAppConfig(demoPassword: string): Partial<Config> {
+  return {
+    NODE_ENV: 'production',
+    PORT: 0,
+    HOST: '127.0.0.1',
+    CLIENT_DIST: path.join(PROJECT_ROOT, 'dist/client'),
+    WORKER_THREADS: 2,
+    LOG_LEVEL: 'warn',
+    DEMO_PASSWORD: demoPassword,
+  };
 }
 
 export async function launchBrowserDriver(options: { chromiumPath: string; baseUrl: string; artifacts: string; demoPassword: string }): Promise<BrowserDriver> {

@@ -10,7 +10,7 @@ import { startServer, type RunningServer } from '../../server/index.ts';
 import { seedDemo } from '../../server/seed/demo.ts';
 import type { Config } from '../../server/config.ts';
 import { startFakesOnFreePorts } from '../../server/fakes/local-fakes.ts';
-import { launchBrowserDriver, type BrowserDriver } from './browser-driver.ts';
+import { builtAppConfig, launchBrowserDriver, type BrowserDriver } from './browser-driver.ts';
 import { TEST_STRIPE_SECRETS, createTestDatabase } from './test-app.ts';
 
 export { chooseOption } from './browser-driver.ts';
@@ -31,17 +31,7 @@ export async function startBrowserStack(overrides: Partial<Config> = {}): Promis
   if (ownFakes) overrides = { ...ownFakes.config, ...overrides };
   const { config: dbConfig, database, drop } = await createTestDatabase();
   await seedDemo(database.db, DEMO_PASSWORD);
-  const server = await startServer({
-    ...dbConfig,
-    NODE_ENV: 'production',
-    PORT: 0,
-    HOST: '127.0.0.1',
-    CLIENT_DIST: path.join(PROJECT_ROOT, 'dist/client'),
-    WORKER_THREADS: 2,
-    LOG_LEVEL: 'warn',
-    DEMO_PASSWORD,
-    ...overrides,
-  });
+  const server = await startServer({ ...dbConfig, ...builtAppConfig(DEMO_PASSWORD), ...overrides });
   const driver = await launchBrowserDriver({ chromiumPath: inject('chromiumPath'), baseUrl: server.url, artifacts: ARTIFACTS, demoPassword: DEMO_PASSWORD });
   return {
     ...driver,

@@ -4,6 +4,7 @@ import { VegaChart } from '../../../components/charts/vega-chart.tsx';
 import { Alert } from '../../../components/ui/alert.tsx';
 import { Card } from '../../../components/ui/card.tsx';
 import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
+import { ProgressHeadline } from '../../../components/ui/progress-headline.tsx';
 import { marginalSpec, pairSpec } from './fit-chart-specs.ts';
 import { fitProgressText } from './fit-progress-text.ts';
 
@@ -16,14 +17,7 @@ export function FitResults({ fit, scorecard }: { fit: FitDetail; scorecard?: (ev
     return (
       <Card title="Progress" description={`${fit.pointCount.toLocaleString('en-US')} grid points × ${fit.systems.toLocaleString('en-US')} systems, one pass over the same draws.`}>
         <div className="flex flex-col gap-3">
-          <div className="flex flex-wrap items-baseline justify-between gap-2">
-            <p className="text-2xl font-bold tabular-nums" aria-hidden="true">
-              {percent}
-            </p>
-            <p className="text-foam-300" aria-live="polite">
-              {fitProgressText(fit)}
-            </p>
-          </div>
+          <ProgressHeadline percent={percent} status={fitProgressText(fit)} />
           <ProgressBar
             label="Grid computed"
             value={Math.round(fit.progress * 1000)}
