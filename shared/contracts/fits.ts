@@ -94,6 +94,11 @@ export const fitSummarySchema = z.object({
   name: z.string(),
   status: fitStatusSchema,
   progress: z.number(),
+  /** Chunks of the grid's one pass computed so far, of chunkCount (each chunk evaluates every grid point). */
+  chunksDone: z.number(),
+  chunkCount: z.number(),
+  /** Seconds left while it computes, from the rate so far (null before two chunks are done). */
+  etaSeconds: z.number().nullable(),
   createdAt: z.string(),
   scenarioName: z.string(),
   constraintSetName: z.string(),

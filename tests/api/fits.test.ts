@@ -89,6 +89,8 @@ describe('fits', () => {
     const fit = await waitForFit(observer.agent, created.body.id);
     expect(fit.status).toBe('succeeded');
     expect(fit.pointCount).toBe(5);
+    // One pass of ceil(20,000 / 65,536) = 1 chunk, all done; no time left.
+    expect(fit).toMatchObject({ chunksDone: 1, chunkCount: 1, etaSeconds: null });
     const post = fit.posterior;
     expect(post.parameters[0].values).toEqual(multipliers);
 

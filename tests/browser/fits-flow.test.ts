@@ -4,7 +4,8 @@
  * intervals, the corner plot (two marginals and one joint heat map) and the sentence.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { chooseOption, startBrowserStack, type BrowserStack } from '../support/browser.ts';
+import path from 'node:path';
+import { ARTIFACTS, chooseOption, startBrowserStack, type BrowserStack } from '../support/browser.ts';
 
 let stack: BrowserStack;
 beforeAll(async () => {
@@ -50,6 +51,7 @@ describe('fits', () => {
       await expect.poll(() => corner.locator('svg').count(), { timeout: 60_000 }).toBeGreaterThanOrEqual(3);
       expect(await page.getByTestId('fit-sentence').textContent()).toMatch(/^We find Common-envelope efficiency α_CE between .* \(68%/);
       await stack.screenshot(page, 'fit-corner-plot');
+      await corner.screenshot({ path: path.join(ARTIFACTS, 'fit-corner-panels.png') });
     } finally {
       await context.close();
     }

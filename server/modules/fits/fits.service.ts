@@ -61,12 +61,16 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
   function summary(fit: FitRow, run: RunRow | undefined): FitSummary {
     const status = fitStatus(fit, run);
     const live = run ? scheduler.live(run.id) : null;
-    const progress = status === 'succeeded' ? 1 : run && run.chunkCount > 0 ? (live?.chunksDone ?? run.chunksDone) / run.chunkCount : 0;
+    const chunkCount = run?.chunkCount ?? 0;
+    const chunksDone = status === 'succeeded' ? chunkCount : (live?.chunksDone ?? run?.chunksDone ?? 0);
     return {
       id: fit.id,
       name: fit.name,
       status,
-      progress,
+      progress: status === 'succeeded' ? 1 : chunkCount > 0 ? chunksDone / chunkCount : 0,
+      chunksDone,
+      chunkCount,
+      etaSeconds: status === 'running' ? (live?.etaSeconds ?? null) : null,
       createdAt: fit.createdAt.toISOString(),
       scenarioName: fit.scenarioName,
       constraintSetName: fit.constraintSetName,

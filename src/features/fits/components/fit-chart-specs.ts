@@ -4,6 +4,8 @@ import { chartInk, chartPalette, seriesColour } from '../../../components/ui/cha
 
 /** Posterior ramp: the theme's dark ground to the first palette colour (lightness rises with probability). */
 const POSTERIOR_RAMP = ['#2b3d4a', chartPalette[0].hex];
+/** The best grid point's marker: the palette's second colour, far from the ramp's hue. */
+const BEST_POINT = chartPalette[1].hex;
 
 type Marginal = FitPosterior['marginals'][number];
 type Interval = FitPosterior['intervals'][number];
@@ -22,10 +24,42 @@ export function marginalRows(m: Marginal, iv: Interval): { x: number; density: n
   return xs.map((x) => ({ x, density: densityAt(m, x), in68: x >= iv.lo68 && x <= iv.hi68, in95: x >= iv.lo95 && x <= iv.hi95 }));
 }
 
+/**
+ * The scale of a parameter's axis: the grid's own range (no rounding out to "nice" values, which
+ * on a log axis can add a decade of empty plot), so the corner plot's panels of one parameter line up.
+ */
+export function gridScale(values: readonly number[], log: boolean) {
+  const domain = [values[0], values[values.length - 1]];
+  return log ? { type: 'log' as const, domain, nice: false } : { type: 'linear' as const, domain, nice: false, zero: false };
+}
+
+/**
+ * Tick values of a log axis over [lo, hi]: 1, 2 and 5 times the powers of ten inside it, and the
+ * grid's ends unless a tick lies within a factor 1.5 of them (so no two labels touch). Vega's own
+ * log ticks label every integer multiple of a decade (crowding "0.02 0.03 0.04") and can drop
+ * the domain's ends by rounding.
+ */
+export function logTicks(lo: number, hi: number): number[] {
+  const ticks: number[] = [];
+  for (let e = Math.floor(Math.log10(lo)); e <= Math.ceil(Math.log10(hi)); e++) {
+    for (const m of [1, 2, 5]) {
+      const t = Number((m * 10 ** e).toPrecision(12));
+      if (t >= lo * (1 - 1e-9) && t <= hi * (1 + 1e-9)) ticks.push(t);
+    }
+  }
+  const far = (end: number) => ticks.every((t) => Math.abs(Math.log(t / end)) > Math.log(1.5));
+  return [...(far(lo) ? [lo] : []), ...ticks, ...(far(hi) ? [hi] : [])];
+}
+
+/** A parameter's axis: its title, and on a log grid the ticks of logTicks (labels never overlap either way). */
+export function gridAxis(values: readonly number[], log: boolean, title: string) {
+  return { title, labelOverlap: 'greedy' as const, format: '~g', ...(log ? { values: logTicks(values[0], values[values.length - 1]) } : {}) };
+}
+
 /** A marginal posterior: the curve, with the central 95% interval shaded light and the 68% one darker. */
 export function marginalSpec(m: Marginal, iv: Interval, title: string, log: boolean): VisualizationSpec {
   const rows = marginalRows(m, iv);
-  const x = { field: 'x', type: 'quantitative' as const, title, scale: log ? { type: 'log' as const } : { zero: false } };
+  const x = { field: 'x', type: 'quantitative' as const, axis: gridAxis(m.values, log, title), scale: gridScale(m.values, log) };
   const y = { field: 'density', type: 'quantitative' as const, title: 'Posterior density' };
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
@@ -68,29 +102,69 @@ export function pairDensity(post: FitPosterior, a: number, b: number): { x: numb
   return grid.map((p, k) => ({ x: post.parameters[a].values[Math.floor(k / sizes[b])], y: post.parameters[b].values[k % sizes[b]], p: top > 0 ? p / top : 0 }));
 }
 
-const tidy = (x: number) => String(Number(x.toPrecision(3)));
+/**
+ * Each grid node's cell on the axis: from the midpoint with its lower neighbour to the midpoint
+ * with its upper one (geometric midpoints on a log grid, where the cells then look equal), the
+ * grid's ends closing the outer cells. These are the trapezoid rule's weights drawn as areas.
+ */
+export function cellEdges(values: readonly number[], log: boolean): [number, number][] {
+  const mid = (a: number, b: number) => (log ? Math.sqrt(a * b) : (a + b) / 2);
+  return values.map((v, i) => [i > 0 ? mid(values[i - 1], v) : v, i + 1 < values.length ? mid(v, values[i + 1]) : v]);
+}
 
-/** One panel of the corner plot: the joint posterior of a pair as a heat map (grid values as cells). */
+const axisTitle = (p: FitPosterior['parameters'][number]) => `${p.label}${p.unit ? ` (${p.unit})` : ''}`;
+
+/**
+ * One panel of the corner plot: the joint posterior of a pair as a heat map on the parameters'
+ * own (log or linear) axes, each grid node filling its cell, and the best grid point marked.
+ */
 export function pairSpec(post: FitPosterior, a: number, b: number): VisualizationSpec {
-  const rows = pairDensity(post, a, b).map((r) => ({ ...r, xs: tidy(r.x), ys: tidy(r.y) }));
   const pa = post.parameters[a];
   const pb = post.parameters[b];
-  const axisTitle = (p: typeof pa) => `${p.label}${p.unit ? ` (${p.unit})` : ''}`;
+  const xCells = cellEdges(pa.values, pa.scale === 'log');
+  const yCells = cellEdges(pb.values, pb.scale === 'log');
+  const rows = pairDensity(post, a, b).map((r, k) => {
+    const [x, x2] = xCells[Math.floor(k / pb.values.length)];
+    const [y, y2] = yCells[k % pb.values.length];
+    return { ...r, x0: x, x1: x2, y0: y, y1: y2 };
+  });
+  const best = { x: post.bestPoint.values[pa.path], y: post.bestPoint.values[pb.path] };
+  const x = { field: 'x0', type: 'quantitative' as const, axis: gridAxis(pa.values, pa.scale === 'log', axisTitle(pa)), scale: gridScale(pa.values, pa.scale === 'log') };
+  const y = { field: 'y0', type: 'quantitative' as const, axis: gridAxis(pb.values, pb.scale === 'log', axisTitle(pb)), scale: gridScale(pb.values, pb.scale === 'log') };
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     width: 'container',
-    height: 220,
-    data: { values: rows },
-    mark: 'rect',
-    encoding: {
-      x: { field: 'xs', type: 'ordinal', title: axisTitle(pa), sort: pa.values.map(tidy) },
-      y: { field: 'ys', type: 'ordinal', title: axisTitle(pb), sort: [...pb.values.map(tidy)].reverse() },
-      color: { field: 'p', type: 'quantitative', title: 'Posterior / peak', scale: { range: POSTERIOR_RAMP, domain: [0, 1] } },
-      tooltip: [
-        { field: 'x', title: pa.label },
-        { field: 'y', title: pb.label },
-        { field: 'p', title: 'Posterior / peak', format: '.3f' },
-      ],
-    },
+    height: 260,
+    layer: [
+      {
+        data: { values: rows },
+        mark: 'rect',
+        encoding: {
+          x,
+          x2: { field: 'x1' },
+          y,
+          y2: { field: 'y1' },
+          color: { field: 'p', type: 'quantitative', title: 'Posterior / peak', scale: { range: POSTERIOR_RAMP, domain: [0, 1] } },
+          tooltip: [
+            { field: 'x', title: pa.label, format: '.3~g' },
+            { field: 'y', title: pb.label, format: '.3~g' },
+            { field: 'p', title: 'Posterior / peak', format: '.3f' },
+          ],
+        },
+      },
+      {
+        data: { values: [{ ...best, label: 'Best grid point' }] },
+        mark: { type: 'point', shape: 'diamond', size: 140, filled: true, color: BEST_POINT, stroke: chartInk.background, strokeWidth: 1.5 },
+        encoding: {
+          x: { ...x, field: 'x' },
+          y: { ...y, field: 'y' },
+          tooltip: [
+            { field: 'label', title: ' ' },
+            { field: 'x', title: pa.label, format: '.3~g' },
+            { field: 'y', title: pb.label, format: '.3~g' },
+          ],
+        },
+      },
+    ],
   } as VisualizationSpec;
 }

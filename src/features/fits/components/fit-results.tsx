@@ -4,16 +4,31 @@ import { VegaChart } from '../../../components/charts/vega-chart.tsx';
 import { Alert } from '../../../components/ui/alert.tsx';
 import { Card } from '../../../components/ui/card.tsx';
 import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
+import { ProgressHeadline } from '../../../components/ui/progress-headline.tsx';
 import { marginalSpec, pairSpec } from './fit-chart-specs.ts';
+import { fitProgressText } from './fit-progress-text.ts';
 
 const num = (x: number) => String(Number(x.toPrecision(3)));
 
 /** Progress while the grid computes, then the posterior: marginals with 68/95% shaded, the corner plot, the best point, the sentence. */
 export function FitResults({ fit, scorecard }: { fit: FitDetail; scorecard?: (evaluation: NonNullable<FitDetail['posterior']>['bestPoint']['evaluation']) => ReactNode }) {
   if (fit.status === 'queued' || fit.status === 'running') {
+    const percent = `${(100 * fit.progress).toFixed(1)}%`;
     return (
       <Card title="Progress" description={`${fit.pointCount.toLocaleString('en-US')} grid points × ${fit.systems.toLocaleString('en-US')} systems, one pass over the same draws.`}>
-        <ProgressBar label="Grid computed" value={Math.round(fit.progress * 1000)} max={1000} valueText={`${(100 * fit.progress).toFixed(1)}%`} />
+        <div className="flex flex-col gap-3">
+          <ProgressHeadline percent={percent} status={fitProgressText(fit)} />
+          <ProgressBar
+            label="Grid computed"
+            value={Math.round(fit.progress * 1000)}
+            max={1000}
+            valueText={`${percent}, ${fit.chunksDone} of ${fit.chunkCount} chunks`}
+            minimumPercent={fit.status === 'running' ? 1 : 0}
+          />
+          <p className="text-sm text-foam-400">
+            {fit.chunksDone.toLocaleString('en-US')} of {fit.chunkCount.toLocaleString('en-US')} chunks done; each chunk's systems are drawn once and evaluated at every grid point.
+          </p>
+        </div>
       </Card>
     );
   }
@@ -47,7 +62,7 @@ export function FitResults({ fit, scorecard }: { fit: FitDetail; scorecard?: (ev
           </tbody>
         </table>
       </Card>
-      <Card title={n > 1 ? 'Corner plot' : 'Marginal posterior'} description="Marginals with the 68% (dark) and 95% (light) intervals shaded; below the diagonal, the joint posterior of each pair.">
+      <Card title={n > 1 ? 'Corner plot' : 'Marginal posterior'} description="Marginals with the 68% (dark) and 95% (light) intervals shaded; below the diagonal, the joint posterior of each pair, with the best grid point marked by a diamond.">
         <div className="grid gap-4" style={{ gridTemplateColumns: `repeat(${n}, minmax(0, 1fr))` }} data-testid="fit-corner">
           {post.parameters.flatMap((row, i) =>
             post.parameters.map((col, j) => {

@@ -9,6 +9,7 @@ import { useCancelRun } from '../api/cancel-run.ts';
 import type { ProgressSource } from '../hooks/use-live-run.ts';
 import { formatCount, formatDuration } from './run-text.ts';
 import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
+import { ProgressHeadline } from '../../../components/ui/progress-headline.tsx';
 
 export interface RunProgressCardProps {
   departmentId: string;
@@ -50,14 +51,7 @@ export function RunProgressCard({ departmentId, run, source, canCancel }: RunPro
       }
     >
       <div className="flex flex-col gap-3">
-        <div className="flex flex-wrap items-baseline justify-between gap-2">
-          <p className="text-2xl font-bold tabular-nums" aria-hidden="true">
-            {percent}%
-          </p>
-          <p className="text-foam-300" aria-live="polite">
-            {etaText(run)}
-          </p>
-        </div>
+        <ProgressHeadline percent={`${percent}%`} status={etaText(run)} />
         <ProgressBar
           label="Run progress"
           value={percent}

@@ -1,5 +1,9 @@
 import type { RunStatus } from '../../../../shared/contracts/runs.ts';
 import type { BadgeTone } from '../../../components/ui/badge.tsx';
+import { formatDuration } from '../../../lib/format.ts';
+
+// Moved to the shared formats (the fits page shows durations too); runs import it from here as before.
+export { formatDuration };
 
 /** What each status is called on screen, and the tone of its badge. */
 export const RUN_STATUS_TEXT: Record<RunStatus, { label: string; tone: BadgeTone }> = {
@@ -9,21 +13,6 @@ export const RUN_STATUS_TEXT: Record<RunStatus, { label: string; tone: BadgeTone
   failed: { label: 'Failed', tone: 'danger' },
   cancelled: { label: 'Cancelled', tone: 'warning' },
 };
-
-/**
- * A span of time in words for an ETA or a compute time: "4 s", "2 min 10 s", "14 min",
- * "1 h 5 min". Seconds are dropped from ten minutes on, where they are noise.
- */
-export function formatDuration(seconds: number): string {
-  const s = Math.max(0, Math.round(seconds));
-  if (s < 60) return `${Math.max(1, s)} s`;
-  const minutes = Math.floor(s / 60);
-  if (minutes < 10) return s % 60 === 0 ? `${minutes} min` : `${minutes} min ${s % 60} s`;
-  if (minutes < 60) return `${Math.round(s / 60)} min`;
-  const totalMinutes = Math.round(s / 60);
-  const hours = Math.floor(totalMinutes / 60);
-  return totalMinutes % 60 === 0 ? `${hours} h` : `${hours} h ${totalMinutes % 60} min`;
-}
 
 /** A run's compute time: milliseconds below a second, else formatDuration. */
 export function formatComputeTime(ms: number): string {
