@@ -183,7 +183,7 @@ describe('a batch that keeps failing on its worker thread (issue: a worker crash
   }, 180_000);
 });
 
-describe('a fit whose job fails midway (issue 14: a failed multi-point job could not be resumed)', () => {
+describe('a fit and a sweep whose jobs fail midway (issue 14: a failed multi-point job could not be resumed)', () => {
   it('resumes from its checkpoint, computing only the missing chunks, to the counts of an uninterrupted fit, charged once', async () => {
     const fixture = new URL('../../server/engine-pool/failing-chunk-task.fixture.mjs', import.meta.url).href;
     const failing = createEnginePool({ workers: 2, filename: fixture });
@@ -199,6 +199,8 @@ describe('a fit whose job fails midway (issue 14: a failed multi-point job could
         .expect(201);
       const body = { scenarioId, constraintSetId: set.body.id, seed: 'fit-crash', parameters: [{ path: 'companions.multiplier', min: 0.5, max: 3, points: 3 }] };
       const created = await admin.agent.post('/api/fits').send(body).expect(201);
+      const sweepBody = { scenarioId, seed: 'sweep-crash', axes: [{ path: 'giant.reachAU', values: [0.5, 3] }] };
+      const sweep = await admin.agent.post('/api/sweeps').send(sweepBody).expect(201);
       const failed = await waitForFit(admin.agent, created.body.id);
       expect(failed.status).toBe('failed');
       expect(failed.error).toMatch(/deliberate failure in chunk 3.*3 attempts/);
@@ -211,6 +213,9 @@ describe('a fit whose job fails midway (issue 14: a failed multi-point job could
       expect(await ctx.database.db.select({ point: runCheckpointPoints.point }).from(runCheckpointPoints).where(eq(runCheckpointPoints.runId, failedRunId))).toHaveLength(3);
       const ledgerOf = (runId: string) => ctx.database.db.select().from(creditLedger).where(eq(creditLedger.runId, runId));
       await expect.poll(async () => (await ledgerOf(failedRunId)).map((e) => e.kind).sort(), { timeout: 10_000 }).toEqual(['refund', 'reservation']);
+
+      const sweepStatuses = async () => ((await admin.agent.get(`/api/sweeps/${sweep.body.id}`).expect(200)).body.points as { status: string }[]).map((p) => p.status);
+      await expect.poll(sweepStatuses, { timeout: 60_000 }).toEqual(['failed', 'failed']);
 
       // Mended: the same data on a pool whose first try at chunk 3 kills its thread; an executor that records what it was asked to compute.
       await ctx.tidefield.scheduler.stop();
@@ -237,6 +242,22 @@ describe('a fit whose job fails midway (issue 14: a failed multi-point job could
       expect(done.runId).not.toBe(failedRunId);
       expect(asked.get(done.runId)).toBe(7 - kept);
       await agent.post(`/api/fits/${created.body.id}/resume`).expect(409);
+
+      // A sweep's job resumes the same way; its points stay in their places and equal an uninterrupted sweep's.
+      const sweepPoints = async (id: string) => (await agent.get(`/api/sweeps/${id}`).expect(200)).body.points as { runId: string; status: string }[];
+      const failedPoints = await sweepPoints(sweep.body.id);
+      expect(failedPoints.map((p) => p.status)).toEqual(['failed', 'failed']);
+      await agent.post(`/api/sweeps/${sweep.body.id}/resume`).expect(200);
+      const rerun = (await agent.post('/api/sweeps').send(sweepBody).expect(201)).body.id as string;
+      for (const id of [sweep.body.id, rerun]) await expect.poll(async () => (await sweepPoints(id)).map((p) => p.status), { timeout: 60_000 }).toEqual(['succeeded', 'succeeded']);
+      const [resumedPoints, rerunPoints] = [await sweepPoints(sweep.body.id), await sweepPoints(rerun)];
+      expect(resumedPoints.map((p) => p.runId)).not.toEqual(failedPoints.map((p) => p.runId));
+      for (const i of [0, 1]) {
+        const x = (await agent.get(`/api/runs/${resumedPoints[i].runId}/result`).expect(200)).body;
+        const y = (await agent.get(`/api/runs/${rerunPoints[i].runId}/result`).expect(200)).body;
+        expect(x.counts).toEqual(y.counts);
+      }
+      await agent.post(`/api/sweeps/${sweep.body.id}/resume`).expect(409);
 
       const reference = await waitForFit(agent, (await agent.post('/api/fits').send(body).expect(201)).body.id);
       expect(reference.status).toBe('succeeded');
