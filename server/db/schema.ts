@@ -9,7 +9,7 @@ export { auditLog } from '../modules/audit/audit.table.ts';
 export { scenarios, scenarioVersions } from '../modules/scenarios/scenarios.table.ts';
 export { occurrenceTables, occurrenceRows } from '../modules/occurrence-tables/occurrence-tables.table.ts';
 export { samples, sampleBins } from '../modules/samples/samples.table.ts';
-export { runs, runCheckpoints, runResults, runBins, engulfmentGrids } from '../modules/runs/runs.table.ts';
+export { runs, runCheckpoints, runCheckpointPoints, runResults, runBins, engulfmentGrids } from '../modules/runs/runs.table.ts';
 export { sweeps } from '../modules/sweeps/sweeps.table.ts';
 export { fits } from '../modules/fits/fits.table.ts';
 export { apiTokens } from '../modules/tokens/tokens.table.ts';

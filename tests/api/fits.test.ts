@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type request from 'supertest';
 import { addMember, createTestApp, signUp, type TestContext } from '../support/test-app.ts';
-import { checkScenario, createScenario, waitForRun } from '../support/runs.ts';
+import { checkScenario, createScenario, waitForFit, waitForRun } from '../support/runs.ts';
 import { jStat } from '../../shared/engine/stats/testing/jstat-reference.ts';
 
 let ctx: TestContext;
@@ -30,16 +30,6 @@ async function separateRun(overrides: Record<string, unknown>) {
 
 const base = checkScenario();
 const withMultiplier = (m: number) => ({ companions: { ...(base.companions as object), multiplier: m } });
-
-async function waitForFit(agent: request.Agent, id: string, timeoutMs = 90_000) {
-  const deadline = Date.now() + timeoutMs;
-  for (;;) {
-    const res = await agent.get(`/api/fits/${id}`).expect(200);
-    if (['succeeded', 'failed', 'cancelled'].includes(res.body.status)) return res.body;
-    if (Date.now() > deadline) throw new Error(`fit ${id} still ${res.body.status}`);
-    await new Promise((r) => setTimeout(r, 150));
-  }
-}
 
 describe('sweeps as one job', () => {
   it('gives every point the counts of a separate run with the same seed, readable as a run', async () => {

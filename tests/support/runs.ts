@@ -27,3 +27,15 @@ export async function createScenario(agent: request.Agent, document: Record<stri
   if (res.status !== 201) throw new Error(`create scenario: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body.id as string;
 }
+
+/** Polls a fit until it reaches a final state (or the timeout passes) and returns its detail. */
+export async function waitForFit(agent: request.Agent, id: string, timeoutMs = 90_000): Promise<Record<string, any>> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const res = await agent.get(`/api/fits/${id}`);
+    if (res.status !== 200) throw new Error(`GET fit ${id}: ${res.status} ${JSON.stringify(res.body)}`);
+    if (['succeeded', 'failed', 'cancelled'].includes(res.body.status)) return res.body;
+    if (Date.now() > deadline) throw new Error(`fit ${id} still ${res.body.status} after ${timeoutMs} ms`);
+    await new Promise((r) => setTimeout(r, 150));
+  }
+}

@@ -39,5 +39,11 @@ export function fitsRoutes(registry: RouteRegistry, fitsService: FitsService): R
     params: idParamsSchema, response: fitSummarySchema,
   }, ({ auth, params }) => fitsService.cancel(auth, params.id));
 
+  defineRoute(router, registry, mount, {
+    method: 'post', path: '/:id/resume', tag, access: 'modeller', tokenScope: 'run',
+    summary: 'Continue a failed fit from the grid chunks it computed (credit is reserved again for every grid point; the failed run was refunded)',
+    params: idParamsSchema, response: fitSummarySchema,
+  }, ({ auth, params }) => fitsService.resume(auth, params.id));
+
   return router;
 }

@@ -9,7 +9,7 @@ import { buildResult } from '../../../shared/engine/result/build-result.ts';
 import { ENGINE_VERSION } from '../../../shared/engine/version.ts';
 import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
-import { AppError, notFound } from '../../lib/errors.ts';
+import { AppError, conflict, notFound } from '../../lib/errors.ts';
 import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import type { Logger } from 'pino';
 import { recordAudit } from '../audit/audit.service.ts';
@@ -190,6 +190,25 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
       const fit = await load(departmentOf(auth).id, id);
       if (!fit.methods) throw new AppError({ code: 'fit_not_finished', status: 409, message: 'The fit has no posterior yet; its methods paragraph exists once it has succeeded.' });
       return fit.methods;
+    },
+
+    /**
+     * Continues a failed fit from the grid chunks its run computed: a new computing run takes over
+     * the checkpoint (runs.resumeJob) and becomes the fit's run. It reserves credit for every grid
+     * point again; the failed run's reservation was refunded when it failed.
+     */
+    async resume(auth: RequestAuth, id: string): Promise<FitSummary> {
+      const department = departmentOf(auth);
+      const fit = await load(department.id, id);
+      const run = (await runsOf([fit.runId])).get(fit.runId);
+      if (!run || fitStatus(fit, run) !== 'failed' || run.status !== 'failed') {
+        throw conflict(`The fit is ${fitStatus(fit, run)}${run?.status === 'succeeded' ? ' (its grid was computed; the posterior could not be)' : ''}; only a fit whose computation failed can be resumed.`);
+      }
+      const { id: runId } = await runsService.resumeJob(auth, run, async (tx, jobId) => {
+        await tx.update(fits).set({ runId: jobId, error: null, finishedAt: null }).where(eq(fits.id, fit.id));
+        await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'fit.resumed', target: id, detail: { from: fit.runId, runId: jobId } });
+      });
+      return summary({ ...fit, runId }, (await runsOf([runId])).get(runId));
     },
 
     async cancel(auth: RequestAuth, id: string): Promise<FitSummary> {

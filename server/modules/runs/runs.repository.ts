@@ -1,9 +1,10 @@
-import { and, asc, count, desc, eq, inArray, isNull, like, notInArray, sql, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gte, inArray, isNull, like, lt, notInArray, sql, type SQL } from 'drizzle-orm';
 import type { RunListQuery, RunStatus } from '../../../shared/contracts/runs.ts';
 import type { Db } from '../../db/client.ts';
 import type { DbOrTx } from '../departments/departments.repository.ts';
 import { users } from '../users/users.table.ts';
-import { engulfmentGrids, runBins, runCheckpoints, runResults, runs, type RunRow } from './runs.table.ts';
+import type { ChunkTally } from '../../../shared/engine/kernel/tally.ts';
+import { engulfmentGrids, runBins, runCheckpointPoints, runCheckpoints, runResults, runs, type RunRow } from './runs.table.ts';
 
 export type { RunRow };
 
@@ -64,8 +65,12 @@ export async function listRuns(db: Db, departmentId: string, userId: string, q: 
   return { rows, total: Number(totals[0]?.n ?? 0) };
 }
 
+/** The sweep's points in order: for a point computed more than once (a resumed sweep), its newest run. */
 export async function runsOfSweep(db: Db, sweepId: string) {
-  return db.select().from(runs).where(eq(runs.sweepId, sweepId)).orderBy(asc(runs.sweepPointIndex));
+  const rows = await db.select().from(runs).where(eq(runs.sweepId, sweepId)).orderBy(asc(runs.sweepPointIndex), asc(runs.createdAt), asc(runs.id));
+  const newest = new Map<number | null, RunRow>();
+  for (const row of rows) newest.set(row.sweepPointIndex, row);
+  return [...newest.values()];
 }
 
 /** Claims a queued run for execution with a lease; false if someone else got it first or it was cancelled. */
@@ -150,7 +155,65 @@ export async function saveCheckpoint(db: DbOrTx, runId: string, tally: string, d
     .onDuplicateKeyUpdate({ set: { tally, doneChunks, updatedAt: now } });
 }
 
+/**
+ * Points per statement when a job's tallies are written or read: ≈ 10 kB of JSON each, so a
+ * statement stays near 1 MB, far below MariaDB's default max_allowed_packet (16 MB), and only
+ * one batch of serialised text is held at a time.
+ */
+const POINTS_PER_STATEMENT = 100;
+
+/**
+ * Writes a multi-point job's running totals (one row per point, in batches) and the chunks they
+ * cover in one transaction, so they never disagree. The caller must not change `tallies` until
+ * the promise settles (the scheduler waits for it before adding the next batch).
+ */
+export async function saveJobCheckpoint(db: Db, runId: string, tallies: readonly ChunkTally[], doneChunks: [number, number][]) {
+  await db.transaction(async (tx) => {
+    for (let first = 0; first < tallies.length; first += POINTS_PER_STATEMENT) {
+      const rows = tallies.slice(first, first + POINTS_PER_STATEMENT).map((tally, i) => ({ runId, point: first + i, tally: JSON.stringify(tally) }));
+      await tx.insert(runCheckpointPoints).values(rows).onDuplicateKeyUpdate({ set: { tally: sql`VALUES(${runCheckpointPoints.tally})` } });
+    }
+    await saveCheckpoint(tx, runId, '', doneChunks);
+  });
+}
+
+/**
+ * The running totals of a checkpoint: one tally per point for a multi-point job (`points`), read
+ * in batches; a single run's one tally otherwise. Checkpoints written before the per-point rows
+ * existed hold a job's tallies as one JSON array, read as such.
+ */
+export async function loadCheckpointTallies(db: Db, checkpoint: { runId: string; tally: string }, points: number | null): Promise<ChunkTally[]> {
+  if (checkpoint.tally !== '') {
+    const parsed = JSON.parse(checkpoint.tally) as ChunkTally | ChunkTally[];
+    return Array.isArray(parsed) ? parsed : [parsed];
+  }
+  const out: ChunkTally[] = [];
+  for (let first = 0; first < (points ?? 1); first += POINTS_PER_STATEMENT) {
+    const rows = await db
+      .select({ tally: runCheckpointPoints.tally })
+      .from(runCheckpointPoints)
+      .where(and(eq(runCheckpointPoints.runId, checkpoint.runId), gte(runCheckpointPoints.point, first), lt(runCheckpointPoints.point, first + POINTS_PER_STATEMENT)))
+      .orderBy(asc(runCheckpointPoints.point));
+    for (const row of rows) out.push(JSON.parse(row.tally) as ChunkTally);
+  }
+  if (out.length !== (points ?? 1)) throw new Error(`the checkpoint of run ${checkpoint.runId} holds ${out.length} of ${points ?? 1} point tallies`);
+  return out;
+}
+
+/** Hands a checkpoint (and a job's per-point rows) over to another run, inside the database; false if there is none. */
+export async function moveCheckpoint(tx: DbOrTx, fromRunId: string, toRunId: string): Promise<boolean> {
+  const checkpoint = await loadCheckpoint(tx, fromRunId);
+  if (!checkpoint) return false;
+  await tx.insert(runCheckpointPoints).select(
+    tx.select({ runId: sql`${toRunId}`.as('run_id'), point: runCheckpointPoints.point, tally: runCheckpointPoints.tally }).from(runCheckpointPoints).where(eq(runCheckpointPoints.runId, fromRunId)),
+  );
+  await saveCheckpoint(tx, toRunId, checkpoint.tally, checkpoint.doneChunks);
+  await deleteCheckpoint(tx, fromRunId);
+  return true;
+}
+
 export async function deleteCheckpoint(db: DbOrTx, runId: string) {
+  await db.delete(runCheckpointPoints).where(eq(runCheckpointPoints.runId, runId));
   await db.delete(runCheckpoints).where(eq(runCheckpoints.runId, runId));
 }
 

@@ -22,7 +22,7 @@ import type { RunScheduler } from './run-scheduler.ts';
 import { eq } from 'drizzle-orm';
 import { sweepPointText, sweepPointValues } from '../../../shared/contracts/sweep-point.ts';
 import { sweeps } from '../sweeps/sweeps.table.ts';
-import { deleteRun, findRun, findRunsByIds, insertRun, listRuns, loadCheckpoint, loadResult, saveCheckpoint, type RunRow } from './runs.repository.ts';
+import { deleteRun, moveCheckpoint, findRun, findRunsByIds, insertRun, listRuns, loadResult, loadRun, type RunRow } from './runs.repository.ts';
 
 export const runNotFound = () => notFound('That run');
 const notFinished = (status: string) =>
@@ -202,6 +202,48 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
     return { sweepId: sweep.id, sweepName: sweep.name, number: run.sweepPointIndex + 1, pointCount: sweep.pointCount, values };
   }
 
+  /**
+   * Resumes a failed run or multi-point job (a sweep's or a fit's computing run) from its
+   * checkpoint: a new run for the job and one for each point that had a run of its own (same
+   * snapshots, sweep places and fit) that takes over the checkpoint, so the chunks done are not
+   * recomputed (and the failed run cannot be resumed twice). Each new run reserves its own credit (the failed ones were refunded when
+   * they failed), so a resumed job is charged once, for the job. Returns the new job run's id.
+   */
+  async function resumeJob(auth: RequestAuth, job: RunRow, alsoInTransaction?: (tx: Tx, jobId: string) => Promise<void>): Promise<{ id: string }> {
+    const department = departmentOf(auth);
+    if (job.departmentId !== department.id) throw runNotFound();
+    if (job.ownerUserId !== auth.user.id && !roleAtLeast(auth.role!, 'modeller')) throw forbidden('Only the run\'s owner or a modeller can resume it.');
+    if (job.status !== 'failed') throw conflict(`The run is ${job.status}; only a failed run can be resumed.`);
+    const points = job.jobPoints;
+    const oldIds = points ? points.runIds : [job.id];
+    const passengers = await findRunsByIds(db, department.id, oldIds.filter((old): old is string => old !== null && old !== job.id));
+    const byId = new Map(passengers.map((p) => [p.run.id, p.run]));
+    const jobId = newId();
+    // A point keeps a run of its own if it had one (a deleted point's result has nowhere to go).
+    const newIds = oldIds.map((old) => (old === job.id ? jobId : old !== null && byId.has(old) ? newId() : null));
+    // The job's run reserves its own systems and those of every point without a run (a fit's nodes), as when it was queued.
+    const chargedSystems = job.systems * (1 + (points ? points.runIds.filter((r) => r === null).length : 0));
+    const source = (r: RunRow) => ({ scenarioId: r.scenarioId, scenarioVersion: r.scenarioVersion, scenarioName: r.scenarioName });
+    const place = (r: RunRow) => ({ ...(r.sweepId ? { sweepId: r.sweepId } : {}), ...(r.sweepPointIndex !== null ? { sweepPointIndex: r.sweepPointIndex } : {}) });
+    await db.transaction(async (tx) => {
+      await enqueue(auth, source(job), job.snapshot, {
+        tx, id: jobId, chargedSystems, ...place(job), ...(job.fitId ? { fitId: job.fitId } : {}),
+        ...(points ? { jobPoints: { values: points.values, runIds: newIds } } : {}),
+      });
+      for (const [p, old] of oldIds.entries()) {
+        const passenger = old === null ? undefined : byId.get(old);
+        const id = newIds[p];
+        if (passenger && id) await enqueue(auth, source(passenger), passenger.snapshot, { tx, id, jobRunId: jobId, ...place(passenger) });
+      }
+      // After the new runs exist (the checkpoint rows reference them); no checkpoint rolls everything back.
+      if (!(await moveCheckpoint(tx, job.id, jobId))) throw conflict('The run kept no computed chunks to continue from; start it again instead.');
+      await alsoInTransaction?.(tx, jobId);
+      await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'run.resumed', target: jobId, detail: { from: job.id, points: oldIds.length } });
+    });
+    scheduler.wake();
+    return { id: jobId };
+  }
+
   return {
     snapshotOf,
     enqueue,
@@ -247,29 +289,19 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
      * Continues a failed run from the chunks it had computed: a new run of the same snapshot that
      * starts from the failed run's checkpoint (chunk i depends only on (seed, i), so it ends with
      * the counts of an uninterrupted run). It reserves its own credit; the failed run was refunded.
+     * A point of a sweep computed in one pass resumes the whole sweep (resumeJob); a fit's run is
+     * resumed through its fit.
      */
     async resume(auth: RequestAuth, id: string): Promise<{ id: string }> {
-      const department = departmentOf(auth);
-      const found = await findRun(db, department.id, id);
+      const found = await findRun(db, departmentOf(auth).id, id);
       if (!found) throw runNotFound();
-      if (found.run.ownerUserId !== auth.user.id && !roleAtLeast(auth.role!, 'modeller')) throw forbidden('Only the run\'s owner or a modeller can resume it.');
-      if (found.run.status !== 'failed') throw conflict(`The run is ${found.run.status}; only a failed run can be resumed.`);
-      if (found.run.jobPoints || found.run.jobRunId) {
-        throw conflict(`The run is ${found.run.fitId ? 'the computing run of a fit' : 'a point of a sweep computed in one pass'}; start the ${found.run.fitId ? 'fit' : 'sweep'} again instead (resuming a multi-point job is not supported yet).`);
-      }
-      const checkpoint = await loadCheckpoint(db, id);
-      if (!checkpoint) throw conflict('The run kept no computed chunks to continue from; start it again instead.');
-      const snapshot = found.run.snapshot;
-      const source = { scenarioId: found.run.scenarioId, scenarioVersion: found.run.scenarioVersion, scenarioName: found.run.scenarioName };
-      const resumedId = await db.transaction(async (tx) => {
-        const newRunId = await enqueue(auth, source, snapshot, { tx });
-        await saveCheckpoint(tx, newRunId, checkpoint.tally, checkpoint.doneChunks);
-        await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'run.resumed', target: newRunId, detail: { from: id } });
-        return newRunId;
-      });
-      scheduler.wake();
-      return { id: resumedId };
+      if (found.run.fitId) throw conflict(`The run computes the grid of fit ${found.run.fitId}; resume the fit instead (POST /api/fits/${found.run.fitId}/resume).`);
+      const job = found.run.jobRunId ? await loadRun(db, found.run.jobRunId) : found.run;
+      if (!job) throw runNotFound();
+      return resumeJob(auth, job);
     },
+
+    resumeJob,
 
     /** Owners delete their own finished runs (admins any); a queued or running run is cancelled first. */
     async remove(auth: RequestAuth, id: string): Promise<void> {

@@ -1,4 +1,4 @@
-import { bigint, char, customType, double, index, int, json, longtext, mysqlEnum, mysqlTable, primaryKey, text, varchar } from 'drizzle-orm/mysql-core';
+import { bigint, char, customType, double, index, int, json, longtext, mediumtext, mysqlEnum, mysqlTable, primaryKey, text, varchar } from 'drizzle-orm/mysql-core';
 import { parseScenario, type Scenario } from '../../../shared/contracts/scenario.ts';
 import { RUN_STATUSES } from '../../../shared/contracts/runs.ts';
 import { idColumn, timestamp } from '../../db/columns.ts';
@@ -85,11 +85,29 @@ export const runCheckpoints = mysqlTable('run_checkpoints', {
   runId: idColumn('run_id')
     .primaryKey()
     .references(() => runs.id, { onDelete: 'cascade' }),
+  /** The summed tally (JSON); empty for a multi-point job, whose tallies are in run_checkpoint_points. */
   tally: longtext('tally').notNull(),
   /** Sorted, merged [first, last] index ranges of finished chunks. */
   doneChunks: json('done_chunks').$type<[number, number][]>().notNull(),
   updatedAt: timestamp('updated_at').notNull(),
 });
+
+/**
+ * The running totals of a multi-point job, one row per point (a fit may have 10^4 points of
+ * ≈ 10 kB each: one document would outgrow MariaDB's max_allowed_packet). Written in batches in
+ * the same transaction as the job's `run_checkpoints` row, whose `done_chunks` they cover.
+ */
+export const runCheckpointPoints = mysqlTable(
+  'run_checkpoint_points',
+  {
+    runId: idColumn('run_id')
+      .notNull()
+      .references(() => runs.id, { onDelete: 'cascade' }),
+    point: int('point').notNull(),
+    tally: mediumtext('tally').notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.runId, t.point] })],
+);
 
 /** The finished result document (same fields the CLI prints). */
 export const runResults = mysqlTable('run_results', {

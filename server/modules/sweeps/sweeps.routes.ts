@@ -29,5 +29,11 @@ export function sweepsRoutes(registry: RouteRegistry, sweeps: SweepsService): Ro
     method: 'post', path: '/:id/cancel', tag, access: 'modeller', tokenScope: 'run', summary: 'Cancel every point that has not finished', params: idParamsSchema, response: sweepSummarySchema,
   }, ({ auth, params }) => sweeps.cancel(auth, params.id));
 
+  defineRoute(router, registry, mount, {
+    method: 'post', path: '/:id/resume', tag, access: 'modeller', tokenScope: 'run',
+    summary: "Continue a failed sweep from the chunks its job computed (each point reserves its credit again; the failed points were refunded)",
+    params: idParamsSchema, response: sweepSummarySchema,
+  }, ({ auth, params }) => sweeps.resume(auth, params.id));
+
   return router;
 }

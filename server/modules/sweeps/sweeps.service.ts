@@ -6,7 +6,7 @@ import type { CreateSweepBody, SweepDetail, SweepSummary } from '../../../shared
 import { binomialTestTwoSided } from '../../../shared/engine/stats/binomial-test.ts';
 import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
-import { AppError, notFound } from '../../lib/errors.ts';
+import { AppError, conflict, notFound } from '../../lib/errors.ts';
 import { recordAudit } from '../audit/audit.service.ts';
 import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import type { RunScheduler } from '../runs/run-scheduler.ts';
@@ -180,6 +180,17 @@ export function createSweepsService(deps: { db: Db; runs: RunsService; scenarios
             : null,
         method: `Every point is computed from the same draws in one pass (common random numbers), so each point equals a separate run with the same seed and the curve is smooth; p-values are exact two-sided binomial tests of the sample against each point's predicted fraction${sample && sample.setting !== 'all' ? ` among ${sample.setting === 'single' ? 'single white dwarfs' : 'white dwarfs with a detached companion'} (the sample's setting)` : ' among all white dwarfs'}.`,
       };
+    },
+
+    /** Continues a failed sweep from its job's checkpoint (runs.resumeJob: new runs for its points, in the same places). */
+    async resume(auth: RequestAuth, id: string): Promise<SweepSummary> {
+      const department = departmentOf(auth);
+      const { points } = await load(department.id, id);
+      const job = points.find((run) => run.jobPoints !== null) ?? points[0];
+      if (!job || job.status !== 'failed') throw conflict(`The sweep is ${sweepStatus(points)}; only a sweep whose computation failed can be resumed.`);
+      await runs.resumeJob(auth, job);
+      const after = await load(department.id, id);
+      return summary(after.row, after.points);
     },
 
     async cancel(auth: RequestAuth, id: string): Promise<SweepSummary> {

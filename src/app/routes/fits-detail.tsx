@@ -6,6 +6,8 @@ import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
 import { ScorecardTable } from '../../features/constraints/components/scorecard-table.tsx';
 import { useFit } from '../../features/fits/api/get-fit.ts';
 import { FitResults } from '../../features/fits/components/fit-results.tsx';
+import { ResumeFitButton } from '../../features/fits/components/resume-fit-button.tsx';
+import { roleAtLeast } from '../../../shared/contracts/roles.ts';
 
 export function Component() {
   const me = useSignedInMe();
@@ -20,6 +22,7 @@ export function Component() {
             title={detail.name}
             description={`“${detail.scenarioName}” against “${detail.constraintSetName}”: ${detail.pointCount.toLocaleString('en-US')} grid points × ${detail.systems.toLocaleString('en-US')} systems, seed “${detail.seed}”, engine ${detail.engineVersion}.`}
           />
+          {roleAtLeast(me.role, 'modeller') ? <ResumeFitButton departmentId={me.department.id} fit={detail} /> : null}
           <FitResults fit={detail} scorecard={(evaluation) => <ScorecardTable evaluation={evaluation} />} />
         </>
       )}

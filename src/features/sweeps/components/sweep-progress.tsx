@@ -8,18 +8,22 @@ import { errorMessage } from '../../../components/ui/error-state.tsx';
 import { DescriptionList } from '../../../components/ui/description-list.tsx';
 import { formatDateTimeUtc } from '../../../lib/format.ts';
 import { useCancelSweep } from '../api/cancel-sweep.ts';
+import { useResumeSweep } from '../api/resume-sweep.ts';
 import { isSweepLive } from '../api/get-sweeps.ts';
 import { parameterTitle } from './sweep-axes.ts';
 import { SWEEP_STATUS_TEXT, missingPoints, pointsProgress } from './sweep-text.ts';
 import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
 
-/** Where the sweep stands: points done out of all, its settings, and a way to cancel the rest. */
+/** Where the sweep stands: points done out of all, its settings, and a way to cancel the rest (or resume a failed sweep). */
 export function SweepProgress({ departmentId, detail, canCancel, scenarioName }: { departmentId: string; detail: SweepDetail; canCancel: boolean; scenarioName: string }) {
   const cancel = useCancelSweep(departmentId);
+  const resume = useResumeSweep(departmentId);
   const [confirming, setConfirming] = useState(false);
   const progress = pointsProgress(detail);
   const live = isSweepLive(detail.status);
   const missing = missingPoints(detail);
+  // The points are one job: when it failed, every point failed with it and it can continue from its checkpoint.
+  const failed = !live && detail.points.some((p) => p.status === 'failed');
   // The server calls a sweep finished once no point is left to run, also when some were cancelled.
   const status = detail.status === 'finished' && detail.points.some((p) => p.status === 'cancelled') ? { label: 'Stopped early', tone: 'warning' as const } : SWEEP_STATUS_TEXT[detail.status];
 
@@ -38,6 +42,10 @@ export function SweepProgress({ departmentId, detail, canCancel, scenarioName }:
           >
             Cancel the sweep
           </Button>
+        ) : failed && canCancel ? (
+          <Button size="sm" pending={resume.isPending} onClick={() => resume.mutate(detail.id)}>
+            Resume the sweep
+          </Button>
         ) : undefined
       }
     >
@@ -48,6 +56,13 @@ export function SweepProgress({ departmentId, detail, canCancel, scenarioName }:
           {missing > 0 ? ` (${missing} without a result)` : ''}
         </span>
       </div>
+      {resume.isError ? <p role="alert" className="mt-2 text-sm text-coral-300">{errorMessage(resume.error)}</p> : null}
+      {failed ? (
+        <p className="mt-2 text-foam-300">
+          The sweep's computation failed. Resuming continues from the chunks it had computed, with the same seed, so every point ends with the counts of an
+          uninterrupted sweep; each point reserves its credit again (the failed attempt's was given back).
+        </p>
+      ) : null}
       <ProgressBar label="Points done" value={detail.pointsDone} max={detail.pointCount} valueText={progress.text} className="mt-3" />
       <DescriptionList
         className="mt-4"
