@@ -1,6 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
 import { z } from 'zod';
-import type { impliedOccurrenceBodySchema } from '../../../../shared/contracts/runs.ts';
+import type { impliedOccurrenceBodySchema } from '../../../../shared/contracts/implied-occurrence.ts';
 import { api } from '../../../lib/api-client.ts';
 
 const startedSchema = z.object({ runId: z.string(), sampleId: z.string() });

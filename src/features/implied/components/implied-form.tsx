@@ -1,7 +1,7 @@
 import { useMemo, useState, type ReactNode } from 'react';
 import { z } from 'zod';
 import { OBSERVER_MAX_SYSTEMS } from '../../../../shared/contracts/pricing.ts';
-import { impliedOccurrenceBodySchema } from '../../../../shared/contracts/runs.ts';
+import { impliedOccurrenceBodySchema } from '../../../../shared/contracts/implied-occurrence.ts';
 import { Alert } from '../../../components/ui/alert.tsx';
 import { Button } from '../../../components/ui/button.tsx';
 import { Select } from '../../../components/ui/select.tsx';
