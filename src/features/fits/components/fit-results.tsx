@@ -4,7 +4,8 @@ import { VegaChart } from '../../../components/charts/vega-chart.tsx';
 import { Alert } from '../../../components/ui/alert.tsx';
 import { Card } from '../../../components/ui/card.tsx';
 import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
-import { marginalSpec, pairSpec } from './fit-chart-specs.ts';
+import { marginalSpec } from '../../../components/charts/marginal-spec.ts';
+import { pairSpec } from './fit-chart-specs.ts';
 
 const num = (x: number) => String(Number(x.toPrecision(3)));
 
