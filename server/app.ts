@@ -38,6 +38,8 @@ import { createScenariosService } from './modules/scenarios/scenarios.service.ts
 import { sweepsRoutes } from './modules/sweeps/sweeps.routes.ts';
 import { createSweepsService } from './modules/sweeps/sweeps.service.ts';
 import { fitsRoutes } from './modules/fits/fits.routes.ts';
+import { impliedRoutes } from './modules/implied/implied.routes.ts';
+import { createImpliedService } from './modules/implied/implied.service.ts';
 import { createFitsService } from './modules/fits/fits.service.ts';
 import { tokensRoutes } from './modules/tokens/tokens.routes.ts';
 import { createTokensService } from './modules/tokens/tokens.service.ts';
@@ -142,6 +144,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   const sweeps = createSweepsService({ db, runs, scenarios, samples, scheduler });
   const constraintSets = createConstraintSetsService(db);
   const fitsService = createFitsService({ db, runs, scenarios, constraintSets, scheduler, logger });
+  const implied = createImpliedService({ runs, fits: fitsService, samples, scenarios });
   const exports = createExportsService({ db, config, runs, sweeps });
   const shares = createSharesService({ db, config, runs, sweeps, exports });
 
@@ -184,6 +187,7 @@ export function createApp(deps: AppDeps): TidefieldApp {
   app.use('/api', runsRoutes(registry, runs, events));
   app.use('/api/sweeps', sweepsRoutes(registry, sweeps));
   app.use('/api/fits', fitsRoutes(registry, fitsService));
+  app.use('/api', impliedRoutes(registry, implied));
   app.use('/api', constraintsRoutes(registry, constraintSets, runs));
   app.use('/api', exportsRoutes(registry, exports));
   app.use('/api', sharesRoutes(registry, config, shares));

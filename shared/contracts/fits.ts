@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { idSchema } from './common.ts';
 import { constraintSchema, evaluationResponseSchema, LIBRARY_SET_ID } from './constraints.ts';
+import { impliedFitQuestionSchema } from './implied-occurrence.ts';
 import { createRunBodySchema, runStatusSchema } from './runs.ts';
 
 /** Largest number of grid nodes of one fit (the product of the parameters' points). */
@@ -103,6 +104,8 @@ export const fitSummarySchema = z.object({
   scenarioName: z.string(),
   constraintSetName: z.string(),
   parameters: z.array(z.string()),
+  /** Set when the fit answers an implied-occurrence question (its page is /implied-occurrence?fit=ID). */
+  implied: impliedFitQuestionSchema.nullable(),
 });
 export type FitSummary = z.output<typeof fitSummarySchema>;
 export const fitListResponseSchema = z.object({ fits: z.array(fitSummarySchema) });

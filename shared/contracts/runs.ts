@@ -104,13 +104,6 @@ export const compareQuerySchema = z.strictObject({
   sample: idSchema.optional(),
 });
 
-export const impliedOccurrenceBodySchema = z.strictObject({
-  scenarioId: idSchema,
-  sampleId: idSchema,
-  systems: createRunBodySchema.shape.systems,
-  seed: createRunBodySchema.shape.seed,
-});
-
 /** Run a run's own scenario document again (a sweep's point keeps its values); size and seed may change. */
 export const runAgainBodySchema = z.strictObject({
   systems: createRunBodySchema.shape.systems,

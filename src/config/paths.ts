@@ -61,7 +61,9 @@ export const paths = {
   },
   impliedOccurrence: {
     ...page('/implied-occurrence'),
-    /** A question already asked: the run that answers it and the sample it was asked for. */
+    /** A question already asked: the fit over the multiplier that answers it. */
+    withFit: (fitId: string) => `/implied-occurrence?${new URLSearchParams({ fit: fitId })}`,
+    /** A question asked before implied occurrence was a fit: the run that answered it and the sample. */
     withRun: (runId: string, sampleId: string) =>
       `/implied-occurrence?${new URLSearchParams({ run: runId, sample: sampleId })}`,
   },

@@ -66,6 +66,7 @@ export const EXPECTED_ACCESS: Record<string, Minimum> = {
   'GET /api/runs/:id/methods.txt': 'observer',
   'GET /api/compare': 'observer',
   'POST /api/implied-occurrence': 'observer',
+  'GET /api/implied-occurrence/:id': 'observer',
   'POST /api/sweeps': 'modeller',
   'GET /api/sweeps': 'observer',
   'GET /api/sweeps/:id': 'observer',

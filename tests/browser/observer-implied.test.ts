@@ -1,37 +1,23 @@
 /**
- * The observer's question in the browser: choose a scenario and a sample, start the run, and
- * read the range of companion occurrence the sample allows, in words and drawn. The answer the
- * page shows is checked against the exact binomial test of R's binom.test, recomputed with jstat
- * (tests/support/binomial-reference.ts) on the response curve the server sent.
+ * The observer's question in the browser: choose a scenario and a sample, start the fit over the
+ * multiplier, and read both answers, in words and drawn. The confidence range the page shows is
+ * checked against the exact binomial test of R's binom.test, recomputed with jstat
+ * (tests/support/binomial-reference.ts) on the response curve the server sent; the credible
+ * interval against an independent integration of the binomial likelihood on that curve
+ * (tests/support/implied-reference.ts).
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { IMPLIED_CONFIDENCE_LABEL, IMPLIED_CREDIBLE_LABEL, type ImpliedOccurrenceAnswer } from '../../shared/contracts/implied-occurrence.ts';
 import { impliedSentence } from '../../src/features/implied/components/implied-text.ts';
 import { binomTestTwoSided } from '../support/binomial-reference.ts';
 import { chooseOption, startBrowserStack, type BrowserStack } from '../support/browser.ts';
+import { credibleReference, fractionAt } from '../support/implied-reference.ts';
 
 let stack: BrowserStack;
 beforeAll(async () => {
   stack = await startBrowserStack();
 });
 afterAll(() => stack?.stop());
-
-interface Answer {
-  interval68: [number, number] | null;
-  interval95: [number, number] | null;
-  bestFit: number;
-  curve: { multiplier: number; fraction: number }[];
-  sample: { magnetic: number; total: number };
-}
-
-/** The predicted fraction at multiplier m, linear between the curve's points (as the engine defines it). */
-function fractionAt(curve: Answer['curve'], m: number): number {
-  for (let i = 1; i < curve.length; i++) {
-    const a = curve[i - 1];
-    const b = curve[i];
-    if (m <= b.multiplier) return a.fraction + ((b.fraction - a.fraction) * (m - a.multiplier)) / (b.multiplier - a.multiplier);
-  }
-  return curve[curve.length - 1].fraction;
-}
 
 describe('observer', () => {
   it('asks what occurrence the demo pilot sample implies', async () => {
@@ -42,9 +28,14 @@ describe('observer', () => {
       await chooseOption(page.getByLabel('Scenario'), 'Baseline, fixed engulfment reach');
       await chooseOption(page.getByLabel('Observed sample'), 'Harrowgate 40 pc pilot survey (illustrative)');
       await page.getByLabel('Systems').fill('200000');
-      const response = page.waitForResponse((r) => r.url().includes('/implied-occurrence?') && r.status() === 200, { timeout: 120_000 });
+      // The answer once both parts are in (the page polls the fit until then).
+      const response = page.waitForResponse(
+        async (r) => r.url().includes('/api/implied-occurrence/') && r.status() === 200 && (await r.json()).credible !== null,
+        { timeout: 240_000 },
+      );
       await page.getByRole('button', { name: 'Find the implied occurrence' }).click();
-      const answer = (await (await response).json()) as Answer;
+      const body = (await (await response).json()) as ImpliedOccurrenceAnswer;
+      const answer = { ...body.confidence!, sample: body.sample };
       await page.locator('figure svg').first().waitFor({ timeout: 30_000 });
 
       // The demo seed's invented pilot survey: 9 magnetic of 78 (server/seed/demo.ts).
@@ -73,8 +64,32 @@ describe('observer', () => {
       }
       expect(answer.interval95).not.toBeNull();
 
-      // The page says exactly this answer in words.
+      // The fit's grid: m from 0 to 1 / 0.23, the baseline table's largest row occurrence
+      // (shared/scenarios/baseline-fixed-reach.json), with a uniform prior.
+      const credible = body.credible!;
+      expect(credible.prior).toBe('uniform');
+      expect(credible.grid.min).toBe(0);
+      expect(credible.grid.max).toBeCloseTo(1 / 0.23, 12);
+      expect(hi).toBeCloseTo(1 / 0.23, 12);
+      // The credible interval against the binomial likelihood on the same curve under a uniform
+      // prior, integrated independently (jstat, 2^16 sub-steps). The fit's density is linear between
+      // its nodes (spacing h = 4.35/128 = 0.034); for a posterior of width σ ≈ 0.3 (78 white
+      // dwarfs) that errs by about (h/σ)²/8 ≈ 0.2% of the density, far below h/10, the tolerance.
+      const reference = credibleReference(curve, k, n);
+      const h = (credible.grid.max - credible.grid.min) / (credible.grid.points - 1);
+      for (const key of ['interval68', 'interval95'] as const) {
+        credible[key].forEach((x, i) => expect(Math.abs(x - reference[key][i])).toBeLessThan(h / 10));
+      }
+
+      // The page says both answers, each under its own label.
+      await page.getByRole('heading', { name: IMPLIED_CONFIDENCE_LABEL }).waitFor({ timeout: 10_000 });
       await page.getByText(impliedSentence(answer)).first().waitFor({ timeout: 10_000 });
+      await page.getByRole('heading', { name: IMPLIED_CREDIBLE_LABEL }).waitFor({ timeout: 10_000 });
+      await page.getByText(credible.summary).first().waitFor({ timeout: 10_000 });
+      await page.getByText(`Prior: ${credible.priorText}.`).waitFor({ timeout: 10_000 });
+      const methods = await page.getByRole('region', { name: 'Methods text' }).innerText();
+      expect(methods).toContain(`${IMPLIED_CONFIDENCE_LABEL}: ${answer.summary}`);
+      expect(methods).toContain(`${IMPLIED_CREDIBLE_LABEL}: ${credible.summary}`);
       await stack.screenshot(page, 'observer-implied-occurrence');
     } finally {
       await context.close();

@@ -1,6 +1,7 @@
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import { SWEEPABLE_PARAMETERS, ScenarioValidationError, withParameter, type Scenario } from '../../../shared/contracts/scenario.ts';
-import type { CreateFitBody, FitDetail, FitPosterior, FitSummary } from '../../../shared/contracts/fits.ts';
+import type { CreateFitBody, FitDetail, FitParameter, FitPosterior, FitSummary } from '../../../shared/contracts/fits.ts';
+import type { ImpliedFitQuestion } from '../../../shared/contracts/implied-occurrence.ts';
 import type { RunStatus } from '../../../shared/contracts/runs.ts';
 import { scenarioAtPoint } from '../../../shared/contracts/point-scenario.ts';
 import { multiplierMaxFor } from '../../../shared/engine/kernel/scenario-physics.ts';
@@ -14,6 +15,7 @@ import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import type { Logger } from 'pino';
 import { recordAudit } from '../audit/audit.service.ts';
 import { resolveConstraints, type ConstraintSetsService } from '../constraints/constraint-sets.service.ts';
+import type { ResolvedConstraint } from '../constraints/evaluate.ts';
 import type { RunScheduler } from '../runs/run-scheduler.ts';
 import { runs } from '../runs/runs.table.ts';
 import type { RunRow } from '../runs/runs.repository.ts';
@@ -41,6 +43,17 @@ export function definitionOf(fit: FitRow, scenario: Scenario): FitDefinition {
     constraints: fit.constraints,
     constraintSet: { id: fit.constraintSetId, name: fit.constraintSetName, version: fit.constraintSetVersion },
   };
+}
+
+/** A fit ready to queue: the scenario as run, the grid and the constraints (from a set, or an implied-occurrence sample). */
+export interface FitSpec {
+  source: { scenarioId: string; version: number; name: string };
+  base: Scenario;
+  parameters: FitParameter[];
+  constraints: ResolvedConstraint[];
+  constraintSet: { id: string; name: string; version: number | null };
+  name: string;
+  implied?: ImpliedFitQuestion;
 }
 
 export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: ScenariosService; constraintSets: ConstraintSetsService; scheduler: RunScheduler; logger: Logger }) {
@@ -75,6 +88,7 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
       scenarioName: fit.scenarioName,
       constraintSetName: fit.constraintSetName,
       parameters: fit.parameters.map((p) => p.path),
+      implied: fit.implied ?? null,
     };
   }
 
@@ -102,12 +116,57 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
 
   scheduler.onJobFinished(onJobFinished);
 
+  /** Every parameter's range must be allowed by the scenario's schema (both ends; the fields are independent), and a multiplier by its rows. */
+  function checkRanges(base: Scenario, parameters: readonly FitParameter[]) {
+    parameters.forEach((p, i) => {
+      for (const end of ['min', 'max'] as const) {
+        try {
+          withParameter(base, p.path, p[end]);
+        } catch (error) {
+          if (!(error instanceof ScenarioValidationError)) throw error;
+          throw invalid(`parameters[${i}].${end}`, `parameters[${i}].${end} = ${p[end]}: ${error.issues[0]?.message ?? 'invalid'}`);
+        }
+      }
+      if (p.path === 'companions.multiplier') {
+        const mMax = multiplierMaxFor(base.companions.rows ?? []);
+        if (p.max > mMax * (1 + 1e-12)) throw invalid(`parameters[${i}].max`, `parameters[${i}].max = ${p.max} is above the largest multiplier this scenario's rows allow (${mMax}, 1 / the largest row occurrence)`);
+      }
+    });
+  }
+
+  /**
+   * Queues a checked fit: the grid's first point as a run whose multi-point job computes every
+   * grid point from the same draws. Credit is reserved for every grid point (systems × points),
+   * as a sweep reserves each point.
+   */
+  async function queue(auth: RequestAuth, spec: FitSpec): Promise<{ id: string; runId: string }> {
+    const department = departmentOf(auth);
+    const { source, base, parameters, constraints, constraintSet, name } = spec;
+    checkRanges(base, parameters);
+    const points = fitPoints(parameters);
+    const first = scenarioAtPoint(base, points[0]);
+    const id = newId();
+    const runId = newId();
+    await db.transaction(async (tx) => {
+      await tx.insert(fits).values({
+        id, departmentId: department.id, ownerUserId: auth.user.id, name, scenarioId: source.scenarioId, scenarioVersion: source.version, scenarioName: source.name,
+        constraintSetId: constraintSet.id, constraintSetVersion: constraintSet.version, constraintSetName: constraintSet.name, constraints,
+        parameters, seed: base.seed, systems: base.systems, pointCount: points.length, runId, engineVersion: ENGINE_VERSION, implied: spec.implied ?? null, createdAt: new Date(),
+      });
+      await runsService.enqueue(auth, { scenarioId: source.scenarioId, scenarioVersion: source.version, scenarioName: `Fit: ${name}`.slice(0, 160) }, first, {
+        tx, id: runId, fitId: id, chargedSystems: base.systems * points.length,
+        jobPoints: { values: points.map((p) => ({ ...p })), runIds: points.map((_, i) => (i === 0 ? runId : null)) },
+      });
+      await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'fit.created', target: id, detail: { points: points.length, systems: base.systems, ...(spec.implied ? { sampleId: spec.implied.sample.id } : {}) } });
+    });
+    scheduler.wake();
+    return { id, runId };
+  }
+
   return {
-    /**
-     * Queues a fit: the grid's first point as a run whose multi-point job computes every grid
-     * point from the same draws. Credit is reserved for every grid point (systems × points), as
-     * a sweep reserves each point.
-     */
+    queue,
+
+    /** POST /api/fits: a grid over 1–4 sweepable parameters given a constraint set. */
     async create(auth: RequestAuth, body: CreateFitBody): Promise<{ id: string }> {
       const department = departmentOf(auth);
       body.parameters.forEach((p, i) => {
@@ -117,42 +176,17 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
       });
       const source = await scenarios.resolve(department.id, body.scenarioId);
       const base = await runsService.snapshotOf(department.id, source.scenario, { systems: body.systems, seed: body.seed });
-      // Every parameter's range must be allowed by the scenario's schema (both ends; the fields are independent).
-      body.parameters.forEach((p, i) => {
-        for (const end of ['min', 'max'] as const) {
-          try {
-            withParameter(base, p.path, p[end]);
-          } catch (error) {
-            if (!(error instanceof ScenarioValidationError)) throw error;
-            throw invalid(`parameters[${i}].${end}`, `parameters[${i}].${end} = ${p[end]}: ${error.issues[0]?.message ?? 'invalid'}`);
-          }
-        }
-        if (p.path === 'companions.multiplier') {
-          const mMax = multiplierMaxFor(base.companions.rows ?? []);
-          if (p.max > mMax * (1 + 1e-12)) throw invalid(`parameters[${i}].max`, `parameters[${i}].max = ${p.max} is above the largest multiplier this scenario's rows allow (${mMax}, 1 / the largest row occurrence)`);
-        }
-      });
+      checkRanges(base, body.parameters);
       const set = await constraintSets.detail(auth, body.constraintSetId);
-      const constraints = resolveConstraints(set.constraints);
-      const points = fitPoints(body.parameters);
-      const first = scenarioAtPoint(base, points[0]);
-      const id = newId();
-      const runId = newId();
       const words = body.parameters.map((p) => parameterWords(p.path).label).join(' × ');
-      const name = (body.name ?? `${source.name}: ${words} given ${set.name}`).slice(0, 160);
-      await db.transaction(async (tx) => {
-        await tx.insert(fits).values({
-          id, departmentId: department.id, ownerUserId: auth.user.id, name, scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: source.name,
-          constraintSetId: set.id, constraintSetVersion: set.library ? null : set.currentVersion, constraintSetName: set.name, constraints,
-          parameters: body.parameters, seed: base.seed, systems: base.systems, pointCount: points.length, runId, engineVersion: ENGINE_VERSION, createdAt: new Date(),
-        });
-        await runsService.enqueue(auth, { scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: `Fit: ${name}`.slice(0, 160) }, first, {
-          tx, id: runId, fitId: id, chargedSystems: base.systems * points.length,
-          jobPoints: { values: points.map((p) => ({ ...p })), runIds: points.map((_, i) => (i === 0 ? runId : null)) },
-        });
-        await recordAudit(tx, { departmentId: department.id, actorUserId: auth.user.id, action: 'fit.created', target: id, detail: { points: points.length, systems: base.systems } });
+      const { id } = await queue(auth, {
+        source: { scenarioId: body.scenarioId, version: source.version, name: source.name },
+        base,
+        parameters: body.parameters,
+        constraints: resolveConstraints(set.constraints),
+        constraintSet: { id: set.id, name: set.name, version: set.library ? null : set.currentVersion },
+        name: (body.name ?? `${source.name}: ${words} given ${set.name}`).slice(0, 160),
       });
-      scheduler.wake();
       return { id };
     },
 
@@ -170,7 +204,8 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
         ...summary(fit, run),
         scenarioId: fit.scenarioId,
         scenarioVersion: fit.scenarioVersion,
-        constraintSetId: fit.constraintSetId,
+        // An implied-occurrence fit is scored against its sample, not a constraint set.
+        constraintSetId: fit.implied ? null : fit.constraintSetId,
         constraintSetVersion: fit.constraintSetVersion,
         grid: fit.parameters.map((p) => ({ ...p, ...parameterWords(p.path) })),
         pointCount: fit.pointCount,

@@ -1,5 +1,6 @@
 import { bigint, index, int, json, longtext, mysqlTable, text, varchar } from 'drizzle-orm/mysql-core';
 import type { FitParameter } from '../../../shared/contracts/fits.ts';
+import type { ImpliedFitQuestion } from '../../../shared/contracts/implied-occurrence.ts';
 import { idColumn, timestamp } from '../../db/columns.ts';
 import type { ResolvedConstraint } from '../constraints/evaluate.ts';
 
@@ -18,7 +19,7 @@ export const fits = mysqlTable(
     scenarioId: idColumn('scenario_id').notNull(),
     scenarioVersion: int('scenario_version').notNull(),
     scenarioName: varchar('scenario_name', { length: 160 }).notNull(),
-    /** A constraint set of the department, or "library". */
+    /** A constraint set of the department, or "library"; for an implied-occurrence fit, the sample's id. */
     constraintSetId: varchar('constraint_set_id', { length: 32 }).notNull(),
     /** The set's version when the fit was queued (null for the library). */
     constraintSetVersion: int('constraint_set_version'),
@@ -38,6 +39,8 @@ export const fits = mysqlTable(
     methods: text('methods'),
     /** Why no posterior could be computed from a finished grid. */
     error: text('error'),
+    /** Set for an implied-occurrence fit (POST /api/implied-occurrence): the sample asked about and the scenario's own multiplier. */
+    implied: json('implied').$type<ImpliedFitQuestion>(),
     createdAt: timestamp('created_at').notNull(),
     finishedAt: timestamp('finished_at'),
   },

@@ -1,12 +1,10 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import { idParamsSchema } from '../../../shared/contracts/common.ts';
-import { runComparisonResponseSchema, runComparisonSchema, runImpliedOccurrenceSchema } from '../../../shared/contracts/comparison.ts';
+import { runComparisonResponseSchema, runComparisonSchema } from '../../../shared/contracts/comparison.ts';
 import { scenarioResultSchema } from '../../../shared/contracts/result.ts';
 import {
   compareQuerySchema,
   createRunBodySchema,
-  impliedOccurrenceBodySchema,
   runAgainBodySchema,
   runListQuerySchema,
   runListResponseSchema,
@@ -97,12 +95,6 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
   }, ({ auth, params, query }) => runs.comparison(auth, params.id, query.sample));
 
   defineRoute(router, registry, mount, {
-    method: 'get', path: '/runs/:id/implied-occurrence', tag, access: 'observer',
-    summary: 'The range of the companion-occurrence multiplier a sample allows (68% and 95%), from the run\'s exact response',
-    params: idParamsSchema, query: sampleQuerySchema, response: runImpliedOccurrenceSchema,
-  }, ({ auth, params, query }) => runs.impliedOccurrence(auth, params.id, query.sample));
-
-  defineRoute(router, registry, mount, {
     method: 'get', path: '/runs/:id/export.csv', tag, access: 'observer', summary: 'The result as CSV', params: idParamsSchema, produces: 'text/csv',
   }, async ({ auth, params, res }) => sendDownload(res, `tidefield-run-${params.id}.csv`, await runs.exportCsv(auth, params.id)));
 
@@ -123,12 +115,6 @@ export function runsRoutes(registry: RouteRegistry, runs: RunsService, events: R
     method: 'get', path: '/compare', tag, access: 'observer', summary: 'Two to four finished runs side by side on the same axes',
     query: compareQuerySchema, response: runComparisonResponseSchema,
   }, ({ auth, query }) => runs.compare(auth, query.runs));
-
-  defineRoute(router, registry, mount, {
-    method: 'post', path: '/implied-occurrence', tag, access: 'observer', status: 201, tokenScope: 'read',
-    summary: 'Start the run that answers "what occurrence does this sample imply?" for a scenario; then read /runs/{runId}/implied-occurrence',
-    body: impliedOccurrenceBodySchema, response: z.object({ runId: z.string(), sampleId: z.string() }),
-  }, ({ auth, body }) => runs.startImpliedOccurrence(auth, body));
 
   return router;
 }

@@ -3,13 +3,12 @@ import type { CreateRunBody, RunListQuery, RunSummary } from '../../../shared/co
 import { parseScenario, type Scenario } from '../../../shared/contracts/scenario.ts';
 import { listPriceCredits, OBSERVER_MAX_SYSTEMS } from '../../../shared/contracts/pricing.ts';
 import { roleAtLeast } from '../../../shared/contracts/roles.ts';
-import { impliedMultiplier } from '../../../shared/engine/stats/implied-occurrence.ts';
 import type { Db, Tx } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
 import { planChunks } from '../../../shared/engine/kernel/chunks.ts';
 import { scenarioHash } from '../../../shared/engine/kernel/scenario-hash.ts';
 import { ENGINE_VERSION } from '../../../shared/engine/version.ts';
-import { AppError, badRequest, conflict, forbidden, notFound } from '../../lib/errors.ts';
+import { AppError, conflict, forbidden, notFound } from '../../lib/errors.ts';
 import { recordAudit } from '../audit/audit.service.ts';
 import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import type { OccurrenceTablesService } from '../occurrence-tables/occurrence-tables.service.ts';
@@ -33,20 +32,6 @@ const notFinished = (status: string) =>
  * its transaction: it reserves the cost (free systems first, shared/contracts/pricing.ts) and
  * returns the credits reserved, or throws a 402 so that nothing is queued.
  */
-/**
- * The one-run response to the multiplier is exact for the fraction among all white dwarfs
- * only (a white dwarf's setting itself changes with the multiplier), so a sample of one
- * setting is sent to a multiplier sweep instead.
- */
-function requireAllWhiteDwarfs(sample: { setting: string }, field: string) {
-  if (sample.setting !== 'all') {
-    throw badRequest(
-      `This sample counts only ${sample.setting === 'single' ? 'single white dwarfs' : 'white dwarfs with a detached companion'}; implied occurrence from one run is exact only for a sample of all white dwarfs. Sweep companions.multiplier and compare with this sample instead.`,
-      field,
-    );
-  }
-}
-
 export interface RunBilling {
   reserve(tx: Tx, run: { id: string; departmentId: string; userId: string; systems: number }): Promise<{ costCredits: number }>;
 }
@@ -130,7 +115,7 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
     }
   }
 
-  /** Queues one run of a fully resolved scenario (used by runs, sweeps and implied occurrence). */
+  /** Queues one run of a fully resolved scenario (used by runs, sweeps and fits). */
   async function enqueue(
     auth: RequestAuth,
     source: { scenarioId: string; scenarioVersion: number; scenarioName: string },
@@ -151,7 +136,9 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
     } = {},
   ): Promise<string> {
     const department = departmentOf(auth);
-    checkSize(auth, extra.chargedSystems ?? snapshot.systems);
+    // The observer's cap is on the systems of one population (what they choose); a fit's
+    // reservation covers all of its grid points.
+    checkSize(auth, snapshot.systems);
     const id = extra.id ?? newId();
     const insert = async (tx: Tx) => {
       const { costCredits } = await billing.reserve(tx, { id, departmentId: department.id, userId: auth.user.id, systems: extra.chargedSystems ?? snapshot.systems });
@@ -327,23 +314,6 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       return compareRunWithSample(result, sample, run.snapshot.field.thresholdMG);
     },
 
-    async impliedOccurrence(auth: RequestAuth, id: string, sampleId: string) {
-      const department = departmentOf(auth);
-      const { result } = await finishedResult(department.id, id);
-      const sample = await samples.visible(department.id, sampleId);
-      if (sample.kind !== 'counts' || sample.magnetic === null || sample.total === null) {
-        throw badRequest('Implied occurrence needs a sample with counts (magnetic of total); this one states only a fraction or mean masses.', 'sample');
-      }
-      requireAllWhiteDwarfs(sample, 'sample');
-      if (result.counts.whiteDwarfs === 0) throw badRequest('The run has no white dwarfs, so no occurrence is implied.', 'runId');
-      return {
-        runId: id,
-        sample: { id: sample.id, name: sample.name, magnetic: sample.magnetic, total: sample.total },
-        runMultiplier: result.multiplierResponse.runMultiplier,
-        ...impliedMultiplier(result.multiplierResponse, { magnetic: sample.magnetic, total: sample.total }),
-      };
-    },
-
     async compare(auth: RequestAuth, ids: string[]) {
       const department = departmentOf(auth);
       const found = await findRunsByIds(db, department.id, ids);
@@ -413,28 +383,6 @@ export function createRunsService({ db, scheduler, scenarios, tables, samples, b
       const newId = await enqueue(auth, { scenarioId: run.scenarioId, scenarioVersion: run.scenarioVersion, scenarioName }, snapshot);
       scheduler.wake();
       return { id: newId };
-    },
-
-    /** The observer's question in one call: run the scenario (or reuse an identical finished run) for a sample. */
-    async startImpliedOccurrence(auth: RequestAuth, body: { scenarioId: string; sampleId: string; systems?: number; seed?: string }) {
-      const department = departmentOf(auth);
-      const sample = await samples.visible(department.id, body.sampleId);
-      if (sample.kind !== 'counts') throw badRequest('Implied occurrence needs a sample with counts (magnetic of total).', 'sampleId');
-      requireAllWhiteDwarfs(sample, 'sampleId');
-      const source = await scenarios.resolve(department.id, body.scenarioId);
-      const snapshot = await snapshotOf(department.id, source.scenario, { systems: body.systems, seed: body.seed });
-      // The answer scales the scenario's companion occurrences; with none there is nothing to
-      // scale, so refuse before spending a run on it.
-      const rows = snapshot.companions.rows ?? [];
-      if (!rows.some((r) => r.occurrence > 0)) {
-        throw badRequest(
-          `The scenario "${source.name}" has no occurrence table to scale (${rows.length === 0 ? 'it lists no companion rows' : 'every companion row has occurrence 0'}), so no occurrence can be implied. Choose a scenario with companions, or add an occurrence table to this one.`,
-          'scenarioId',
-        );
-      }
-      const id = await enqueue(auth, { scenarioId: body.scenarioId, scenarioVersion: source.version, scenarioName: source.name }, snapshot);
-      scheduler.wake();
-      return { runId: id, sampleId: sample.id };
     },
   };
 }

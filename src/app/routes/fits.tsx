@@ -52,7 +52,7 @@ export function Component() {
           </Card>
         ) : null}
         <Card title="Recent fits">
-          <FitsList fits={fits.data?.fits ?? []} hrefOf={paths.fits.detail.getHref} />
+          <FitsList fits={fits.data?.fits ?? []} hrefOf={(f) => (f.implied ? paths.impliedOccurrence.withFit(f.id) : paths.fits.detail.getHref(f.id))} />
         </Card>
       </div>
     </>

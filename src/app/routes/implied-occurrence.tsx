@@ -1,11 +1,13 @@
 import { useNavigate, useSearchParams } from 'react-router-dom';
+import { IMPLIED_GRID_POINTS } from '../../../shared/contracts/implied-occurrence.ts';
+import { listPriceCredits } from '../../../shared/contracts/pricing.ts';
 import { roleAtLeast } from '../../../shared/contracts/roles.ts';
 import { Card } from '../../components/ui/card.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { paths } from '../../config/paths.ts';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
 import { RunCostNotice } from '../../features/billing/components/run-cost-notice.tsx';
-import { ImpliedAnswer } from '../../features/implied/components/implied-answer.tsx';
+import { ImpliedAnswer, ImpliedFitAnswer } from '../../features/implied/components/implied-answer.tsx';
 import { ImpliedForm } from '../../features/implied/components/implied-form.tsx';
 import { useSampleChoices } from '../../lib/api/scenario-choices.ts';
 
@@ -15,6 +17,7 @@ export function Component() {
   const me = useSignedInMe();
   const navigate = useNavigate();
   const [search] = useSearchParams();
+  const fitId = search.get('fit');
   const runId = search.get('run');
   const sampleId = search.get('sample');
   const samples = useSampleChoices(me.department.id);
@@ -29,24 +32,34 @@ export function Component() {
       <PageHeader
         eyebrow={me.department.name}
         title="Implied occurrence"
-        description="The observer’s question: given a scenario and the magnetic white dwarfs you counted, how common may companions be? The answer is the range of a multiplier on the scenario’s companion occurrence that your counts allow, at 68% and 95%."
+        description="The observer’s question: given a scenario and the magnetic white dwarfs you counted, how common may companions be? The answer is a multiplier on the scenario’s companion occurrence, found by a one-parameter fit: the range your counts allow by the exact binomial test (a confidence range) and the fit’s posterior (a credible interval), each at 68% and 95%."
       />
       <div className="flex flex-col gap-6">
-        <Card title="Ask" description="One run of the scenario is enough: the kernel tallies the magnetic fraction at every multiplier with the same random numbers.">
+        <Card
+          title="Ask"
+          description={`A fit over the multiplier m from 0 to the largest value the occurrence table allows, on ${IMPLIED_GRID_POINTS} values in one pass over the same random numbers, with a uniform prior on m.`}
+        >
           <ImpliedForm
             departmentId={me.department.id}
             limitSystems={!roleAtLeast(me.role, 'modeller')}
-            onStarted={(run, sampleOf) => navigate(paths.impliedOccurrence.withRun(run, sampleOf))}
+            onStarted={(fit) => navigate(paths.impliedOccurrence.withFit(fit))}
             renderCost={(systems) =>
               systems === null || !Number.isInteger(systems) || systems < 1e3 || systems > 1e10 ? (
                 <p className="text-foam-300">Choose a scenario and a valid number of systems to see what the run costs.</p>
               ) : (
-                <RunCostNotice departmentId={me.department.id} systems={systems} />
+                <div className="flex flex-col gap-2">
+                  <RunCostNotice departmentId={me.department.id} systems={systems * IMPLIED_GRID_POINTS} runs={1} />
+                  <p className="text-sm text-foam-400">
+                    Like any fit, credit is reserved for every value of m: {IMPLIED_GRID_POINTS} × {systems.toLocaleString('en-US')} systems ={' '}
+                    {(IMPLIED_GRID_POINTS * systems).toLocaleString('en-US')} systems (at list price {listPriceCredits(IMPLIED_GRID_POINTS * systems).toLocaleString('en-US')} credits); refunded if the fit fails or is cancelled.
+                  </p>
+                </div>
               )
             }
           />
         </Card>
-        {runId && sampleId && <ImpliedAnswer key={`${runId}-${sampleId}`} departmentId={me.department.id} runId={runId} sampleId={sampleId} settingCaveat={settingCaveat} />}
+        {fitId && <ImpliedFitAnswer key={fitId} departmentId={me.department.id} fitId={fitId} />}
+        {!fitId && runId && sampleId && <ImpliedAnswer key={`${runId}-${sampleId}`} departmentId={me.department.id} runId={runId} sampleId={sampleId} settingCaveat={settingCaveat} />}
       </div>
     </>
   );

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { FitPosterior } from '../../../../shared/contracts/fits.ts';
-import { cellEdges, gridScale, logTicks, pairSpec } from './fit-chart-specs.ts';
+import { cellEdges, pairSpec } from './fit-chart-specs.ts';
+import { gridScale, logTicks } from '../../../components/charts/marginal-spec.ts';
 
 /** A 20 × 20 posterior as a large fit returns it (only the fields the corner plot reads are filled). */
 function posterior20(): FitPosterior {

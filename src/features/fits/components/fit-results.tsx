@@ -5,7 +5,8 @@ import { Alert } from '../../../components/ui/alert.tsx';
 import { Card } from '../../../components/ui/card.tsx';
 import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
 import { ProgressHeadline } from '../../../components/ui/progress-headline.tsx';
-import { marginalSpec, pairSpec } from './fit-chart-specs.ts';
+import { marginalSpec } from '../../../components/charts/marginal-spec.ts';
+import { pairSpec } from './fit-chart-specs.ts';
 import { fitProgressText } from './fit-progress-text.ts';
 
 const num = (x: number) => String(Number(x.toPrecision(3)));

@@ -1,7 +1,7 @@
 import { useMemo, useState, type ReactNode } from 'react';
 import { z } from 'zod';
 import { OBSERVER_MAX_SYSTEMS } from '../../../../shared/contracts/pricing.ts';
-import { impliedOccurrenceBodySchema } from '../../../../shared/contracts/runs.ts';
+import { impliedOccurrenceBodySchema } from '../../../../shared/contracts/implied-occurrence.ts';
 import { Alert } from '../../../components/ui/alert.tsx';
 import { Button } from '../../../components/ui/button.tsx';
 import { Select } from '../../../components/ui/select.tsx';
@@ -15,8 +15,9 @@ export interface ImpliedFormProps {
   departmentId: string;
   /** Observers may run at most 10^6 systems; the form says so and fills that in. */
   limitSystems: boolean;
-  onStarted: (runId: string, sampleId: string) => void;
-  /** What the run would cost, composed by the route (billing is its own feature). */
+  /** Called with the fit that answers the question. */
+  onStarted: (fitId: string) => void;
+  /** What the fit would cost for this many systems per value of m, composed by the route (billing is its own feature). */
   renderCost?: (systems: number | null) => ReactNode;
 }
 
@@ -52,7 +53,7 @@ export function ImpliedForm({ departmentId, limitSystems, onStarted, renderCost 
   const schema = useMemo(() => formSchema(limitSystems, scenarioSystems), [limitSystems, scenarioSystems]);
   const form = useSchemaForm(schema, async (body) => {
     const started = await start.mutateAsync(body);
-    onStarted(started.runId, started.sampleId);
+    onStarted(started.fitId);
   });
 
   // An observer's run is capped: fill in the cap (or the scenario's own, if smaller) until they type their own.
@@ -110,7 +111,7 @@ export function ImpliedForm({ departmentId, limitSystems, onStarted, renderCost 
             error={form.fieldErrors.systems}
             hint={
               limitSystems
-                ? `At most ${count(OBSERVER_MAX_SYSTEMS)} for observers; more systems make the curve’s own Monte Carlo error smaller.`
+                ? `At most ${count(OBSERVER_MAX_SYSTEMS)} for observers; per value of m; more systems make the curve’s own Monte Carlo error smaller.`
                 : `1,000 to 10^10, e.g. 1e6; empty for the scenario’s own${scenarioSystems ? ` (${count(scenarioSystems)})` : ''}.`
             }
           />

@@ -1,0 +1,1 @@
+ALTER TABLE `fits` ADD `implied` json;
