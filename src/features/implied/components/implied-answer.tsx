@@ -94,17 +94,8 @@ function fractionOnCurve(curve: ImpliedRange['curve'], m: number): number {
 function FitProgress({ answer }: { answer: ImpliedOccurrenceAnswer }) {
   const percent = Math.round(100 * answer.progress);
   const words = answer.status === 'queued' ? 'Queued: the fit starts when a worker is free.' : `Running: ${percent}% of the draws done for all ${answer.pointCount} values of m.`;
-  return (
-    <div className="flex flex-col gap-3">
-      <p className="font-bold text-foam-50" aria-live="polite">
-        {words}
-      </p>
-      <ProgressBar label="Fit progress" value={percent} max={100} valueText={words} />
-      <p className="text-sm text-foam-400">
-        {answer.systems.toLocaleString('en-US')} systems of “{answer.scenarioName}” per value of m, seed “{answer.seed}”. This page follows the fit; you may also leave and come back through its link.
-      </p>
-    </div>
-  );
+  const about = `${answer.systems.toLocaleString('en-US')} systems of “${answer.scenarioName}” per value of m, seed “${answer.seed}”. This page follows the fit; you may also leave and come back through its link.`;
+  return <ProgressBlock label="Fit progress" percent={percent} words={words} about={about} />;
 }
 
 /** An answer from before implied occurrence was a fit: one run, the confidence range only. */
@@ -133,15 +124,19 @@ function RunProgress({ run }: { run: RunSummary }) {
   const percent = Math.round(100 * run.progress);
   const eta = etaText(run.etaSeconds);
   const words = run.status === 'queued' ? 'Queued: the run starts when a worker is free.' : `Running: ${percent}% of ${run.chunkCount} chunks${eta ? `, ${eta}` : ''}.`;
+  const about = `${run.systems.toLocaleString('en-US')} systems of “${run.scenarioName}”, seed “${run.seed}”. This page follows the run; you may also leave and come back through its link.`;
+  return <ProgressBlock label="Run progress" percent={percent} words={words} about={about} />;
+}
+
+/** A queued or running job: what is happening (announced politely), the bar, and what is being computed. */
+function ProgressBlock({ label, percent, words, about }: { label: string; percent: number; words: string; about: string }) {
   return (
     <div className="flex flex-col gap-3">
       <p className="font-bold text-foam-50" aria-live="polite">
         {words}
       </p>
-      <ProgressBar label="Run progress" value={percent} max={100} valueText={words} />
-      <p className="text-sm text-foam-400">
-        {run.systems.toLocaleString('en-US')} systems of “{run.scenarioName}”, seed “{run.seed}”. This page follows the run; you may also leave and come back through its link.
-      </p>
+      <ProgressBar label={label} value={percent} max={100} valueText={words} />
+      <p className="text-sm text-foam-400">{about}</p>
     </div>
   );
 }
