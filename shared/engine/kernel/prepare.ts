@@ -13,7 +13,7 @@ import { opticalFlux } from '../physics/selection-magnitude-limited.ts';
 import { ENGINE_VERSION } from '../version.ts';
 import { planChunks } from './chunks.ts';
 import { buildTrackGiant, type EngulfmentGrid, type PreparedTrack } from './engulfment.ts';
-import { buildFormationScreen, type FormationScreen } from './formation-screen.ts';
+import { buildPrimaryTable, type PrimaryTable } from './primary-table.ts';
 import { scenarioHash } from './scenario-hash.ts';
 import {
   heaviestWhiteDwarfMsun,
@@ -88,8 +88,8 @@ export interface PreparedScenario {
   constantHistory: boolean;
   ageGyr: number;
   lifetime: PreparedLifetime;
-  /** Lower bounds of t_MS over cells of the primary-mass uniform (rejects most non-white-dwarfs without a pow). */
-  formationScreen: FormationScreen;
+  /** The primary's mass and main-sequence lifetime tabulated over its mass uniform (primary-table.ts). */
+  primary: PrimaryTable;
   ifmr: IfmrSegments;
   rows: PreparedRow[];
   multiplier: number;
@@ -138,7 +138,7 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
     constantHistory: isConstantHistory(p.history),
     ageGyr: p.history.ageGyr,
     lifetime,
-    formationScreen: buildFormationScreen(imf, lifetime),
+    primary: buildPrimaryTable(imf, lifetime),
     ifmr,
     rows: preparedRows,
     multiplier,
