@@ -23,7 +23,8 @@ import { CHUNK_SYSTEMS } from '../version.ts';
 import { BINS, binIndex } from './bins.ts';
 import { LOG_BIN_LOOKUPS, logBinIndex } from './log-bins.ts';
 import { companionLog10MassDraw, companionLog10PeriodDraw, companionMassDraw, companionPeriodDaysDraw } from './companion-draws.ts';
-import { PRIMARY_STRIDE } from './primary-table.ts';
+import { PRIMARY_STRIDE, whiteDwarfPosition } from './primary-table.ts';
+import { binomialQuantile } from '../stats/binomial-quantile.ts';
 import type { PreparedTrack } from './engulfment.ts';
 import type { PreparedFossil, PreparedRow, PreparedScenario } from './prepare.ts';
 import { addCountsInto, emptyTallyFor, type ChunkTally } from './tally.ts';
@@ -150,18 +151,30 @@ const rowCloseGroup = new Int32Array(MAX_ROWS);
 const rowCloseField = new Float64Array(MAX_ROWS);
 
 /**
- * The current system's scalars, in a typed array rather than module variables (a double stored in
- * a module variable is a new heap object on every write): the primary mass (Msun), a lower bound
- * of its log10 (its table node's), the field uniform and its normal deviate (NaN until a field
- * needs it: a quantile only where a field is made).
+ * The current system's scalars (and a few of the chunk's), in a typed array rather than module
+ * variables or function arguments: a double stored in a module variable or passed to a call that
+ * is not inlined becomes a new heap object each time, which was a large part of the kernel's cost.
+ * The field uniform's normal deviate is NaN until a field needs it (a quantile only where a field
+ * is made).
  */
-const systemNow = new Float64Array(5);
+const systemNow = new Float64Array(12);
 const PRIMARY_MASS = 0;
 const PRIMARY_LOG10_MASS_FLOOR = 1;
 const FIELD_UNIFORM = 2;
 const FIELD_DEVIATE = 3;
 /** fixedReach: radius (Rsun) of the white dwarf of the IFMR mass, the core in every common envelope of the system (NaN until needed). */
 const FINAL_CORE_RADIUS = 4;
+/** The white-dwarf mass of the IFMR (Msun) and the cooling age (Gyr). */
+const IFMR_MASS = 5;
+const COOLING = 6;
+/** The fossil channel's uniform and normal deviate (1 and 0 when the channel is off). */
+const FOSSIL_UNIFORM = 7;
+const FOSSIL_DEVIATE = 8;
+/** The chunk's constants: multiplier-tally bins per unit multiplier; track: log10 a0³ above which nothing is engulfed. */
+const MULTIPLIER_SCALE = 9;
+const TRACK_OUTSIDE = 10;
+/** Scratch for the white dwarf's position in the primary table (primary-table.ts). */
+const POSITION = 11;
 
 /** One system's outcome at one point: what the tallies count. */
 class Outcome {
@@ -233,42 +246,44 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
   const rowCount = rows.length;
   const magnitudeLimited = prepared.selection.kind === 'magnitudeLimited';
   const track = prepared.giant.kind === 'track' ? prepared.giant : null;
-  const trackOutsideLog10A3 = track ? outsideReachLog10A3(Math.exp(Math.max(...track.grid.logCriticalSeparationAU))) : NaN;
+  systemNow[TRACK_OUTSIDE] = track ? outsideReachLog10A3(Math.exp(Math.max(...track.grid.logCriticalSeparationAU))) : NaN;
   const pointCount = points.length;
-  const multiplierScale = BINS.multiplierBins / prepared.multiplierMax;
+  systemNow[MULTIPLIER_SCALE] = BINS.multiplierBins / prepared.multiplierMax;
   const spread = pointSpread(points, logs, rowCount);
 
-  let whiteDwarfsFormed = 0;
-  for (let s = 0; s < n; s++) {
-    const uPrimary = rng();
-    const age = constantHistory ? ageGyr * rng() : ageGyr;
-    // The primary from its table cell (primary-table.ts); t_MS falls across the cell, so an age at or
-    // below the lifetime at the cell's upper node rejects it before interpolating.
-    const position = uPrimary * cells;
-    const k = position | 0;
+  // The chunk's white dwarfs, drawn directly (primary-table.ts): their number, then each one's
+  // mass uniform (its position in the primary table) and, for constant star formation, birth time.
+  const whiteDwarfs = prepared.whiteDwarfs;
+  const whiteDwarfsFormed = binomialQuantile(rng(), n, whiteDwarfs.probability);
+  for (let s = 0; s < whiteDwarfsFormed; s++) {
+    if (constantHistory) whiteDwarfPosition(whiteDwarfs, prepared.primary, rng, systemNow, POSITION);
+    else systemNow[POSITION] = (whiteDwarfs.uLowest + (1 - whiteDwarfs.uLowest) * rng()) * cells;
+    const position = systemNow[POSITION];
+    const k = Math.min(position | 0, cells - 1);
     const at = PRIMARY_STRIDE * k;
-    const tmsUpper = nodes[at + PRIMARY_STRIDE + 1];
-    if (age <= tmsUpper) continue;
     const w = position - k;
-    const tms = nodes[at + 1] + w * (tmsUpper - nodes[at + 1]);
-    if (!(tms < age)) continue;
-    whiteDwarfsFormed++;
+    const tms = nodes[at + 1] + w * (nodes[at + PRIMARY_STRIDE + 1] - nodes[at + 1]);
     const m1 = nodes[at] + w * (nodes[at + PRIMARY_STRIDE] - nodes[at]);
     systemNow[PRIMARY_MASS] = m1;
     systemNow[PRIMARY_LOG10_MASS_FLOOR] = nodes[at + 2];
     const ifmrMass = finalMassMsun(ifmr, m1);
-    const cooling = age - tms;
+    // Rounding can put t̃ a hair above the age at the edge of the white-dwarf region: cooling age 0 there.
+    const youngest = ageGyr - tms > 0 ? ageGyr - tms : 0;
+    const cooling = constantHistory ? youngest * rng() : youngest;
+    systemNow[IFMR_MASS] = ifmrMass;
+    systemNow[COOLING] = cooling;
     const uSelect = magnitudeLimited ? rng() : 0;
     systemNow[FIELD_UNIFORM] = rng();
     systemNow[FIELD_DEVIATE] = NaN;
     systemNow[FINAL_CORE_RADIUS] = NaN;
 
     let uFossil = 1;
-    let zFossil = 0;
+    systemNow[FOSSIL_DEVIATE] = 0;
     if (fossil.enabled) {
       uFossil = rng();
-      zFossil = normalQuantile(rng() + HALF_STEP);
+      systemNow[FOSSIL_DEVIATE] = normalQuantile(rng() + HALF_STEP);
     }
+    systemNow[FOSSIL_UNIFORM] = uFossil;
     // Whether this system's outcome can differ between the points (false: point 0's counts hold for all).
     let varies = spread.fossilVaries && uFossil < spread.maxFossilFraction && m1 >= fossilLoMsun && m1 <= fossilHiMsun;
 
@@ -280,7 +295,10 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
       const occurrence = row.hostMassSlope === 0 ? row.occurrence : row.occurrence * Math.pow(m1, row.hostMassSlope);
       const drawThreshold = row.hostMassSlope === 0 ? row.drawThreshold : Math.min(1, occurrence * prepared.multiplierMax);
       if (!(u < drawThreshold)) continue;
-      drawnCompanion(r, row, u, occurrence, drawThreshold, rng(), rng(), track, trackOutsideLog10A3);
+      rowU[r] = u;
+      rowOccurrence[r] = occurrence;
+      rowDrawThreshold[r] = drawThreshold;
+      drawnCompanion(r, row, rng, track);
       if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : insideReach(r, spread.maxReachAU, spread.maxReachOutsideLog10A3))) varies = true;
       if (spread.multiplierVaries && (row.hostMassSlope !== 0 || (u >= spread.minPresent[r] && u < spread.maxPresent[r]))) varies = true;
     }
@@ -290,7 +308,7 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
     let acceptanceAtIfmr = NaN;
     for (let p = 0; p < pointsToEvaluate; p++) {
       const out = p === 0 ? reference : current;
-      evaluatePoint(prepared, points[p], logs[p], out, m1, ifmrMass, cooling, uFossil, zFossil);
+      evaluatePoint(prepared, points[p], logs[p], out);
       if (out.accepted && magnitudeLimited) {
         const selection = prepared.selection as Extract<PreparedScenario['selection'], { kind: 'magnitudeLimited' }>;
         let accept: number;
@@ -300,10 +318,10 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
         } else accept = magnitudeLimitedAcceptance(out.mwd, cooling, selection.coolingAgeFloorGyr, selection.wavelengthNm, selection.referenceFlux);
         out.accepted = uSelect < accept;
       }
-      if (p === 0) tallyOutcome(tallies[0], reference, 1, rowCount, cooling, multiplierScale);
+      if (p === 0) tallyOutcome(tallies[0], reference, 1, rowCount);
       else if (!sameOutcome(reference, current, rowCount)) {
-        tallyOutcome(tallies[p], current, 1, rowCount, cooling, multiplierScale);
-        tallyOutcome(tallies[p], reference, -1, rowCount, cooling, multiplierScale);
+        tallyOutcome(tallies[p], current, 1, rowCount);
+        tallyOutcome(tallies[p], reference, -1, rowCount);
       }
     }
   }
@@ -381,15 +399,15 @@ function pointSpread(points: readonly PreparedPoint[], logs: readonly PointLogs[
 }
 
 /**
- * Records drawn companion r from its mass and period uniforms, and what follows from the draws
- * alone: a lower bound of log10 a0³, and for track whether the giant engulfs it (with the onset
- * state). A quantity the row draws in log10 form stays in that form until the value is needed.
+ * Draws companion r's mass and period (the next two uniforms; its presence uniform, occurrence and
+ * draw threshold are already in the row arrays) and records what follows from the draws alone: a
+ * lower bound of log10 a0³, and for track whether the giant engulfs it (with the onset state). A
+ * quantity the row draws in log10 form stays in that form until the value is needed.
  */
-function drawnCompanion(r: number, row: PreparedRow, u: number, occurrence: number, drawThreshold: number, uMass: number, uPeriod: number, track: PreparedTrack | null, trackOutsideLog10A3: number): void {
+function drawnCompanion(r: number, row: PreparedRow, rng: () => number, track: PreparedTrack | null): void {
   rowDrawn[r] = 1;
-  rowU[r] = u;
-  rowOccurrence[r] = occurrence;
-  rowDrawThreshold[r] = drawThreshold;
+  const uMass = rng();
+  const uPeriod = rng();
   if (row.log10MassTable && !row.massIsRatio) {
     rowLog10Mass[r] = companionLog10MassDraw(row, uMass);
     rowMass[r] = NaN;
@@ -416,7 +434,7 @@ function drawnCompanion(r: number, row: PreparedRow, u: number, occurrence: numb
   rowCloseGroup[r] = -1;
   if (track) {
     // Beyond the largest critical separation of the whole grid no interpolation engulfs it.
-    const engulfed = rowLog10A3Floor[r] < trackOutsideLog10A3 && commonEnvelopeOnset(track.grid, systemNow[PRIMARY_MASS], companionMassMsun(r), initialSeparationAU(r), onsetOut);
+    const engulfed = rowLog10A3Floor[r] < systemNow[TRACK_OUTSIDE] && commonEnvelopeOnset(track.grid, systemNow[PRIMARY_MASS], companionMassMsun(r), initialSeparationAU(r), onsetOut);
     rowEngulfed[r] = engulfed ? 1 : 0;
     if (engulfed) {
       rowCoreMass[r] = onsetOut[0];
@@ -458,8 +476,8 @@ function companionRadiusOf(r: number): number {
 }
 
 /** fixedReach: the radius (Rsun) of the white dwarf of the IFMR mass, computed once per system. */
-function finalCoreRadiusRsun(ifmrMass: number): number {
-  if (Number.isNaN(systemNow[FINAL_CORE_RADIUS])) systemNow[FINAL_CORE_RADIUS] = whiteDwarfRadiusRsun(ifmrMass);
+function finalCoreRadiusRsun(): number {
+  if (Number.isNaN(systemNow[FINAL_CORE_RADIUS])) systemNow[FINAL_CORE_RADIUS] = whiteDwarfRadiusRsun(systemNow[IFMR_MASS]);
   return systemNow[FINAL_CORE_RADIUS];
 }
 
@@ -479,7 +497,10 @@ function fieldDeviateZ(): number {
  * The current system's outcome at one point, before the magnitude-limited selection (`accepted`
  * is true here; the caller applies the selection with out.mwd).
  */
-function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, logs: PointLogs, out: Outcome, m1: number, ifmrMass: number, cooling: number, uFossil: number, zFossil: number): void {
+function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, logs: PointLogs, out: Outcome): void {
+  const m1 = systemNow[PRIMARY_MASS];
+  const ifmrMass = systemNow[IFMR_MASS];
+  const cooling = systemNow[COOLING];
   const rows = prepared.rows;
   const track = prepared.giant.kind === 'track';
   const threshold = logs.threshold;
@@ -499,7 +520,7 @@ function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, logs: P
     const present = u < (rows[r].hostMassSlope === 0 ? point.presentThresholds[r] : Math.min(rowDrawThreshold[r], occurrence * point.multiplier));
     // An absent companion outside the giant's reach neither counts nor makes a field.
     if (!present && (track ? rowEngulfed[r] === 0 : rowLog10A3Floor[r] > logs.reachOutsideLog10A3)) continue;
-    companionFate(prepared, point, logs, r, m1, ifmrMass, present);
+    companionFate(prepared, point, logs, r, present);
     const fate = fateOut[0];
     const companionField = fieldsEmerged ? fateOut[1] : NO_FIELD;
     if (companionField >= threshold) {
@@ -525,8 +546,8 @@ function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, logs: P
   }
 
   const fossil = prepared.channels.fossil;
-  if (fossil.enabled && uFossil < point.fossil.fraction && m1 >= fossil.massRangeMsun[0] && m1 <= fossil.massRangeMsun[1]) {
-    const fossilField = Math.log10(fossilFieldMG(lognormalFieldMG(point.fossil.msField.medianKG, point.fossil.msField.widthDex, zFossil), mainSequenceRadiusRsun(m1), whiteDwarfRadiusRsun(mwd)));
+  if (fossil.enabled && systemNow[FOSSIL_UNIFORM] < point.fossil.fraction && m1 >= fossil.massRangeMsun[0] && m1 <= fossil.massRangeMsun[1]) {
+    const fossilField = Math.log10(fossilFieldMG(lognormalFieldMG(point.fossil.msField.medianKG, point.fossil.msField.widthDex, systemNow[FOSSIL_DEVIATE]), mainSequenceRadiusRsun(m1), whiteDwarfRadiusRsun(mwd)));
     if (fossilField >= threshold) smallestMultiplier = 0;
     if (fossilField > bestField) {
       bestField = fossilField;
@@ -570,8 +591,9 @@ function sameOutcome(a: Outcome, b: Outcome, rowCount: number): boolean {
 }
 
 /** Adds (sign = 1) or takes away (sign = -1) one system's outcome to the tally's counts. */
-function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: number, cooling: number, multiplierScale: number): void {
+function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: number): void {
   if (!out.accepted) return;
+  const cooling = systemNow[COOLING];
   const massBins = BINS.log10CompanionMsun.count;
   const periodBins = BINS.log10PeriodDays.count;
   const separationBins = BINS.log10SeparationAU.count;
@@ -619,7 +641,7 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
   const smallestMultiplier = out.smallestMultiplier;
   if (smallestMultiplier === 0) tally.multiplierFossil += sign;
   else if (smallestMultiplier < Infinity) {
-    const bin = Math.floor(smallestMultiplier * multiplierScale);
+    const bin = Math.floor(smallestMultiplier * systemNow[MULTIPLIER_SCALE]);
     tally.multiplierBins[bin < BINS.multiplierBins ? bin : BINS.multiplierBins - 1] += sign;
   }
 }
@@ -635,7 +657,9 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
  * gets a field iff that channel is on. What does not depend on the point is computed once per
  * companion and kept in the row arrays.
  */
-function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: PointLogs, r: number, m1: number, ifmrMass: number, present: boolean): void {
+function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: PointLogs, r: number, present: boolean): void {
+  const m1 = systemNow[PRIMARY_MASS];
+  const ifmrMass = systemNow[IFMR_MASS];
   const fixedReach = prepared.giant.kind === 'fixedReach';
   if (fixedReach ? !insideReach(r, point.reachAU, logs.reachOutsideLog10A3) : rowEngulfed[r] === 0) {
     // Only a present companion's separation is tallied.
@@ -643,7 +667,9 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: P
       const m2 = companionMassMsun(r);
       rowWideAU[r] = widenedSeparationAU(initialSeparationAU(r), m1 + m2, ifmrMass + m2);
     }
-    return survivor(WIDE, rowWideAU[r]);
+    survivor(WIDE);
+    fateOut[3] = rowWideAU[r];
+    return;
   }
   const m2 = companionMassMsun(r);
   const a0 = initialSeparationAU(r);
@@ -659,7 +685,7 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: P
       const tip = rgbTipCoreMassMsun(m1);
       rowHelium[r] = tip !== null && rowCoreMass[r] < tip + HELIUM_CORE_MARGIN_MSUN ? 1 : 0;
     }
-    rowCoreRadius[r] = fixedReach ? finalCoreRadiusRsun(ifmrMass) : whiteDwarfRadiusRsun(rowCoreMass[r]);
+    rowCoreRadius[r] = fixedReach ? finalCoreRadiusRsun() : whiteDwarfRadiusRsun(rowCoreMass[r]);
     rowCompanionRadius[r] = NaN;
     rowRocheFraction[r] = NaN;
     rowEnvelopeReady[r] = 1;
@@ -678,7 +704,8 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: P
     if (companionRadiusOf(r) < rowRocheFraction[r] * finalRsun) {
       if (Number.isNaN(rowFinalPeriod[r])) rowFinalPeriod[r] = keplerPeriodDays(finalAU, coreMass + m2);
       const finalPeriod = rowFinalPeriod[r];
-      survivor(POST_CE, finalAU);
+      survivor(POST_CE);
+      fateOut[3] = finalAU;
       fateOut[4] = coreMass;
       fateOut[5] = finalPeriod;
       fateOut[6] = rowHelium[r];
@@ -744,11 +771,11 @@ const disruptionLog10MedianOf = byOption<DisruptionFieldOptions, 'kind', number>
   accretion: () => NaN,
 });
 
-function survivor(fate: number, separationAU: number): void {
+/** Writes a surviving companion's fate without a field (the caller writes its separation, fateOut[3]). */
+function survivor(fate: number): void {
   fateOut[0] = fate;
   fateOut[1] = NO_FIELD;
   fateOut[2] = -1;
-  fateOut[3] = separationAU;
   fateOut[4] = 0;
   fateOut[5] = 0;
   fateOut[6] = 0;
