@@ -13,7 +13,7 @@ import { opticalFlux } from '../physics/selection-magnitude-limited.ts';
 import { ENGINE_VERSION } from '../version.ts';
 import { planChunks } from './chunks.ts';
 import { buildTrackGiant, type EngulfmentGrid, type PreparedTrack } from './engulfment.ts';
-import { buildFormationScreen, type FormationScreen } from './formation-screen.ts';
+import { buildPrimaryTable, buildWhiteDwarfDraw, type PrimaryTable, type WhiteDwarfDraw } from './primary-table.ts';
 import { scenarioHash } from './scenario-hash.ts';
 import {
   heaviestWhiteDwarfMsun,
@@ -88,8 +88,10 @@ export interface PreparedScenario {
   constantHistory: boolean;
   ageGyr: number;
   lifetime: PreparedLifetime;
-  /** Lower bounds of t_MS over cells of the primary-mass uniform (rejects most non-white-dwarfs without a pow). */
-  formationScreen: FormationScreen;
+  /** The primary's mass and main-sequence lifetime tabulated over its mass uniform (primary-table.ts). */
+  primary: PrimaryTable;
+  /** How many of a chunk's primaries are white dwarfs today, and how each is drawn (primary-table.ts). */
+  whiteDwarfs: WhiteDwarfDraw;
   ifmr: IfmrSegments;
   rows: PreparedRow[];
   multiplier: number;
@@ -127,6 +129,8 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
   const preparedRows = rows.map((row) => prepareRow(row, maxOccurrence, multiplierMax, multiplier));
   const fossil = scenario.channels.fossil;
   const imf = buildImfSampler(p.imf, p.massRangeMsun);
+  const primary = buildPrimaryTable(imf, lifetime);
+  const constantHistory = isConstantHistory(p.history);
   return {
     engineVersion: ENGINE_VERSION,
     scenarioHash: scenarioHash(scenario),
@@ -135,10 +139,11 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
     chunkCount,
     imf,
     massRangeMsun: [p.massRangeMsun[0], p.massRangeMsun[1]],
-    constantHistory: isConstantHistory(p.history),
+    constantHistory,
     ageGyr: p.history.ageGyr,
     lifetime,
-    formationScreen: buildFormationScreen(imf, lifetime),
+    primary,
+    whiteDwarfs: buildWhiteDwarfDraw(primary, { constant: constantHistory, ageGyr: p.history.ageGyr }),
     ifmr,
     rows: preparedRows,
     multiplier,
