@@ -4,7 +4,8 @@ import { scenarioAtPoint } from '../../shared/contracts/point-scenario.ts';
 import { parseScenario, ScenarioValidationError, withParameter } from '../../shared/contracts/scenario.ts';
 import { planChunks } from '../../shared/engine/kernel/chunks.ts';
 import { scenarioHash } from '../../shared/engine/kernel/scenario-hash.ts';
-import { addTallyInto, emptyTallyFor } from '../../shared/engine/kernel/tally.ts';
+import { addPackedIntoAll } from '../../shared/engine/kernel/packed-tally.ts';
+import { emptyTallyFor } from '../../shared/engine/kernel/tally.ts';
 import { EngineError } from '../../shared/engine/errors.ts';
 import { buildResult } from '../../shared/engine/result/build-result.ts';
 import { ENGINE_VERSION } from '../../shared/engine/version.ts';
@@ -64,7 +65,7 @@ export async function main(argv: readonly string[], io: CliIo): Promise<number> 
       let done = 0;
       let lastReport = 0;
       for await (const batch of executor.execute({ runId: 'local', scenario: scenarios[0], pending, signal: new AbortController().signal, points })) {
-        batch.pointTallies!.forEach((tally, p) => addTallyInto(totals[p], tally));
+        addPackedIntoAll(totals, batch.pointTallies!);
         done += batch.chunks.length;
         const now = performance.now();
         if (done === chunkCount || now - lastReport > 1000) {

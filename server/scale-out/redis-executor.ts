@@ -4,6 +4,7 @@ import { BATCH_RETRIES, BatchFailedError, pendingBatches, RunAbortedError, type 
 import {
   cancelChannel,
   cancelledKey,
+  decodePackedTallies,
   jobIdOf,
   redisConnection,
   workerKeyPrefix,
@@ -78,7 +79,7 @@ export function createRedisExecutor(options: RedisExecutorOptions): ChunkExecuto
       if (request.signal.aborted) throw new RunAbortedError(request.signal.reason);
       throw new BatchFailedError(chunks, BATCH_RETRIES + 1, error);
     }
-    return { batch, chunks: result.chunks, tally: result.tally, ...(result.tallies ? { pointTallies: result.tallies } : {}) };
+    return { batch, chunks: result.chunks, tally: result.tally, ...(result.packed ? { pointTallies: decodePackedTallies(result.packed) } : {}) };
   }
 
   async function* execute(request: ExecuteRequest): AsyncGenerator<BatchDone> {
