@@ -81,7 +81,11 @@ export function addPackedInto(target: ChunkTally, packed: PackedTallies, p: numb
     const values = target[key];
     if (values.length !== length) throw new Error(`cannot add packed counts to a tally whose ${key} has ${values.length} entries (expected ${length})`);
     const start = base + offset;
-    for (let i = 0; i < length; i++) values[i] += counts[start + i];
+    for (let i = 0; i < length; i++) {
+      // Most counts are zero: skipping them spares the stores (and the running totals' integer arrays a conversion to doubles).
+      const count = counts[start + i];
+      if (count !== 0) values[i] += count;
+    }
   }
   return target;
 }
