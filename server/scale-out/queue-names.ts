@@ -29,6 +29,8 @@ export interface ChunkJobResult {
   tally: ChunkTally;
   /** A multi-point job: every point's tally, packed (tally is point 0's). */
   packed?: WirePackedTallies;
+  /** The same as JSON arrays, as workers wrote it before `packed`: still read (a finished job's value stays in Redis for a day). */
+  tallies?: ChunkTally[];
 }
 
 /**

@@ -167,12 +167,12 @@ type DrawFreeParts = Pick<PreparedScenario, 'multiplier' | 'rows' | 'giant' | 'e
  */
 function drawFreeParts(scenario: Scenario, rows: readonly DrawnRow[], giant: PreparedGiant): DrawFreeParts {
   // occurrence × multiplier ≤ 1 is the contract's rule (scenario.ts checks it when the document is
-  // parsed, the one place); presence is still capped at the draw threshold.
+  // parsed, the one place); presence is still capped at the draw threshold, so that rounding never
+  // lets "present" exceed "drawn".
   const multiplier = scenario.companions.multiplier;
   const fossil = scenario.channels.fossil;
   return {
     multiplier,
-    // The most frequent row is always drawn; rounding must never let "present" exceed "drawn".
     rows: rows.map((row) => ({ ...row, presentThreshold: Math.min(row.drawThreshold, row.occurrence * multiplier) })),
     giant: giant.kind === 'track' ? giant : preparedGiant(scenario.giant, scenario, undefined),
     envelope: { alpha: scenario.envelope.alpha, lambda: scenario.envelope.lambda },

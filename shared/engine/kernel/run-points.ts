@@ -85,7 +85,7 @@ export interface PreparedPoints {
  * present in this scenario, every value inside the contract's range (and the multiplier at most
  * 1 / the largest row occurrence). Each point's scenario is validated like any document and its
  * preparation derived from `prepared` (withDrawFreeValues: only the draw-free parts and the hash
- * are its own, so a point costs about a millisecond, not a full preparation); the first and the
+ * are its own: well under a millisecond a point, where a full preparation takes ≈ 14 ms); the first and the
  * last point are also prepared in full and must agree (an internal check of DRAW_FREE_PATHS).
  * `prepared` must be prepareScenario(scenario) (a track grid is reused, not rebuilt). Memory: the
  * pass returns one tally (≈ 2,700 numbers) per point per chunk.
