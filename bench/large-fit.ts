@@ -77,6 +77,11 @@ try {
   addPackedIntoAll(nowTotals, packed);
   const [, addPackedMs] = await timed(() => addPackedIntoAll(nowTotals, packed));
   line('one batch (one chunk by default): kernel, tallies back to the main thread', cloneMs, movedMs);
+  // What crossing threads costs without the kernel (whose time follows the machine's load): a structured clone of the tallies against moving one buffer.
+  const [, crossMs] = await timed(() => structuredClone(tallies));
+  const copy = { ...packed, counts: packed.counts.slice() };
+  const [, moveMs] = await timed(() => structuredClone(copy, { transfer: [copy.counts.buffer] }));
+  line('  of which the tallies crossing threads (structured clone, no kernel)', crossMs, moveMs);
   line('  of which summing a batch into the running totals (main thread)', addMs, addPackedMs);
   if (JSON.stringify(beforeTotals) !== JSON.stringify(nowTotals)) throw new Error('the packed path gave other counts than the cloned one');
 

@@ -140,7 +140,10 @@ describe('runs on BullMQ workers over Redis', () => {
       return waitForFit(agent, created.body.id, 180_000);
     };
     const local = await fitOn((await signUp(embedded.app)).agent);
+    const before = await jobsDoneTotal();
     const remote = await fitOn(admin.agent);
+    // Two jobs (chunks 0–1 and 2), each counted once the workers' heartbeats catch up (the next tests count jobs).
+    await expect.poll(jobsDoneTotal, { timeout: 5000 }).toBe(before + 2);
     expect([local.status, remote.status]).toEqual(['succeeded', 'succeeded']);
     expect(remote.posterior.logLikelihood).toEqual(local.posterior.logLikelihood);
     expect(remote.posterior.intervals).toEqual(local.posterior.intervals);
