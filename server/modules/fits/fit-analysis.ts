@@ -2,6 +2,8 @@ import type { Evaluation } from '../../../shared/contracts/constraints.ts';
 import type { FitParameter, FitPosterior } from '../../../shared/contracts/fits.ts';
 import { SWEEPABLE_PARAMETERS, type Scenario } from '../../../shared/contracts/scenario.ts';
 import type { PointValues } from '../../../shared/engine/kernel/run-points.ts';
+import type { ChunkTally } from '../../../shared/engine/kernel/tally.ts';
+import { buildResult } from '../../../shared/engine/result/build-result.ts';
 import { formatPValue, formatSigma } from '../../../shared/engine/stats/format.ts';
 import { gridNodes, gridPosterior } from '../../../shared/engine/stats/grid-posterior.ts';
 import { MC_LIMITED_SIGMA_SHIFT, evaluateConstraints, type EvaluableResult, type ResolvedConstraint } from '../constraints/evaluate.ts';
@@ -34,6 +36,11 @@ export const FIT_METHOD =
   'where the Monte Carlo error of a prediction is not negligible the fit names the constraint. Marginals integrate the other parameters with the trapezoidal rule; ' +
   'intervals are central credible intervals (15.87–84.13% and 2.5–97.5% of the marginal, density linear between nodes); the best point is the node of highest likelihood, ' +
   'and its goodness of fit is Fisher\'s combination of the per-constraint p-values there.';
+
+/** A grid node's result as the fit scores it (no comparison with the scenario's own observed counts: analyseFit never reads it). */
+export function nodeResult(scenario: Scenario, tally: ChunkTally): EvaluableResult {
+  return buildResult(scenario, tally, { compareObserved: false });
+}
 
 /**
  * The posterior of a fit from the prediction at every grid node: each node's result is scored
