@@ -24,10 +24,8 @@ export const PRIMARY_STRIDE = 3;
  * Layout: nodes[3k] = M(k / cells), nodes[3k + 1] = t_MS there, nodes[3k + 2] = log10 of that
  * mass (exact, Math.log10): a lower bound of log10 M for every u in cell k (M rises with u),
  * which lets the kernel tell an orbit far outside the engulfment reach without a logarithm.
- * t_MS falls with u (the contract keeps lifetimes falling with mass), so on cell k the
- * interpolated lifetime is at least the node value at k + 1: an age at or below that node's
- * lifetime rejects the primary without interpolating (the squeeze principle of rejection
- * sampling, Marsaglia 1977, Computers & Mathematics with Applications 3, 321).
+ * t_MS falls with u (the contract keeps lifetimes falling with mass), so t̃ is linear and falling
+ * on every cell: what buildWhiteDwarfDraw relies on.
  */
 export interface PrimaryTable {
   cells: number;
@@ -74,7 +72,6 @@ const GUIDE_PER_CELL = 1;
  * the counts have exactly the distribution of drawing every primary and keeping the white dwarfs.
  */
 export interface WhiteDwarfDraw {
-  constant: boolean;
   ageGyr: number;
   /** Probability that a primary is a white dwarf today. */
   probability: number;
@@ -104,7 +101,7 @@ export function buildWhiteDwarfDraw(primary: PrimaryTable, history: { constant: 
     guide[j] = k;
   }
   const probability = history.constant ? total / (cells * A) : 1 - uLowest;
-  return { constant: history.constant, ageGyr: A, probability: Math.min(1, Math.max(0, probability)), uLowest, cumulative, guide };
+  return { ageGyr: A, probability: Math.min(1, Math.max(0, probability)), uLowest, cumulative, guide };
 }
 
 /** ∫₀¹ max(0, g0 + (g1 − g0) s) ds for a linear g: the weight of one cell (times cells). */
