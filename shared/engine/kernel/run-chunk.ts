@@ -299,7 +299,7 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
       rowOccurrence[r] = occurrence;
       rowDrawThreshold[r] = drawThreshold;
       drawnCompanion(r, row, rng, track);
-      if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : insideReach(r, spread.maxReachAU, spread.maxReachOutsideLog10A3))) varies = true;
+      if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : insideReach(r, spread.maxReachAU, spread.maxReachOutsideLog10A3)) && !destroyedAtEveryPoint(prepared, points, logs, spread, r)) varies = true;
       if (spread.multiplierVaries && (row.hostMassSlope !== 0 || (u >= spread.minPresent[r] && u < spread.maxPresent[r]))) varies = true;
     }
     const pointsToEvaluate = varies ? pointCount : 1;
@@ -395,7 +395,32 @@ function pointSpread(points: readonly PreparedPoint[], logs: readonly PointLogs[
   });
   const maxReachAU = points[maxReach].reachAU;
   const maxReachOutsideLog10A3 = logs[maxReach].reachOutsideLog10A3;
-  return { minPresent, maxPresent, maxReachAU, maxReachOutsideLog10A3, maxFossilFraction, multiplierVaries, fateVaries, fossilVaries };
+  return { minPresent, maxPresent, maxReachAU, maxReachOutsideLog10A3, maxFossilFraction, multiplierVaries, fateVaries, fossilVaries, widestEnvelope: widestEnvelopePoint(points, firstFieldKey, fieldKey) };
+}
+
+/**
+ * The point with the largest α_CE λ if the points' fates differ only through α_CE and λ (same
+ * reach, threshold, dissolution and field options); else -1. The Webbink (1984) orbit after the
+ * common envelope grows with α_CE λ, and each IEEE operation in it is monotone, so a companion
+ * destroyed at that point is destroyed, with the same field, at every point.
+ */
+function widestEnvelopePoint(points: readonly PreparedPoint[], firstFieldKey: string, fieldKey: (p: PreparedPoint) => string): number {
+  const first = points[0];
+  let widest = 0;
+  for (let i = 0; i < points.length; i++) {
+    const p = points[i];
+    if (p.field.thresholdMG !== first.field.thresholdMG || !Object.is(p.reachAU, first.reachAU) || fieldKey(p) !== firstFieldKey) return -1;
+    if (p.envelope.alpha * p.envelope.lambda > points[widest].envelope.alpha * points[widest].envelope.lambda) widest = i;
+  }
+  return widest;
+}
+
+/** true iff engulfed companion r is destroyed at every point (see widestEnvelopePoint): its part of the outcome is then the same at every point. */
+function destroyedAtEveryPoint(prepared: PreparedScenario, points: readonly PreparedPoint[], logs: readonly PointLogs[], spread: ReturnType<typeof pointSpread>, r: number): boolean {
+  const p = spread.widestEnvelope;
+  if (p < 0) return false;
+  companionFate(prepared, points[p], logs[p], r, true);
+  return fateOut[0] === DISRUPTED || fateOut[0] === DISSOLVED;
 }
 
 /**
