@@ -85,7 +85,7 @@ describe('white dwarfs drawn directly', () => {
     const out = new Float64Array(1);
     const masses: number[] = [];
     for (let i = 0; i < 100_000; i++) {
-      whiteDwarfPosition(draw, table, u, out, 0);
+      whiteDwarfPosition(draw, table, { uniform: u }, out, 0);
       const v = out[0] / table.cells;
       const { mass, lifetime } = read(v);
       expect(lifetime).toBeLessThanOrEqual(A * (1 + 1e-12));

@@ -114,12 +114,12 @@ function cellWeight(g0: number, g1: number): number {
 
 /**
  * Position of a white dwarf in the primary table (cell index + fraction, i.e. u · cells) from the
- * next uniform v, for constant star formation: the cell whose cumulative weight brackets v · total,
+ * next uniform v of `uniforms`, for constant star formation: the cell whose cumulative weight brackets v · total,
  * then the inverse of the linear density inside it. Written to out[at] (the kernel keeps its
  * doubles in typed arrays, see run-chunk.ts).
  */
-export function whiteDwarfPosition(draw: WhiteDwarfDraw, primary: PrimaryTable, rng: () => number, out: Float64Array, at: number): void {
-  const v = rng();
+export function whiteDwarfPosition(draw: WhiteDwarfDraw, primary: PrimaryTable, uniforms: { uniform(): number }, out: Float64Array, at: number): void {
+  const v = uniforms.uniform();
   const { cumulative, guide } = draw;
   const cells = primary.cells;
   const x = v * cumulative[cells];

@@ -18,7 +18,7 @@ import { rocheLobeFraction } from '../physics/roche-lobe-eggleton1983.ts';
 import { magnitudeLimitedAcceptance } from '../physics/selection-magnitude-limited.ts';
 import { tidalRadiusRsun } from '../physics/tidal-disruption.ts';
 import { whiteDwarfRadiusRsun } from '../physics/white-dwarf-radius-nauenberg1972.ts';
-import { chunkInt32, UNIFORM_SCALE } from '../random.ts';
+import { ChunkStream } from '../random.ts';
 import { CHUNK_SYSTEMS } from '../version.ts';
 import { BINS, binIndex } from './bins.ts';
 import { LOG_BIN_LOOKUPS, logBinIndex } from './log-bins.ts';
@@ -106,6 +106,8 @@ export function preparedPoint(prepared: PreparedScenario, groups: Pick<PreparedP
  * evolution (post-CE survivor; else 0), 5 final period (days, post-CE survivors), 6 helium core (1/0).
  */
 const fateOut = new Float64Array(7);
+/** The generator, reset for each chunk: one object whose step V8 can inline (random.ts). */
+const stream = new ChunkStream();
 const onsetOut = new Float64Array(4);
 
 // The current system's companions as drawn: the same at every point. NaN / -1 = not computed yet.
@@ -235,8 +237,7 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
   if (points.length === 0) throw new RangeError('points must hold at least one parameter point');
   const tallies = points.map((point) => emptyTallyFor(point.scenarioHash));
   const logs = points.map(pointLogs);
-  const nextInt32 = chunkInt32(prepared.seed, chunkIndex);
-  const rng = () => (nextInt32() >>> 0) * UNIFORM_SCALE; // = chunkUniform(prepared.seed, chunkIndex)()
+  const rng = stream.reset(prepared.seed, chunkIndex); // = chunkUniform(prepared.seed, chunkIndex)
   const { ifmr, rows } = prepared;
   const { cells, nodes } = prepared.primary;
   const fossil = prepared.channels.fossil;
@@ -254,10 +255,10 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
   // The chunk's white dwarfs, drawn directly (primary-table.ts): their number, then each one's
   // mass uniform (its position in the primary table) and, for constant star formation, birth time.
   const whiteDwarfs = prepared.whiteDwarfs;
-  const whiteDwarfsFormed = binomialQuantile(rng(), n, whiteDwarfs.probability);
+  const whiteDwarfsFormed = binomialQuantile(rng.uniform(), n, whiteDwarfs.probability);
   for (let s = 0; s < whiteDwarfsFormed; s++) {
     if (constantHistory) whiteDwarfPosition(whiteDwarfs, prepared.primary, rng, systemNow, POSITION);
-    else systemNow[POSITION] = (whiteDwarfs.uLowest + (1 - whiteDwarfs.uLowest) * rng()) * cells;
+    else systemNow[POSITION] = (whiteDwarfs.uLowest + (1 - whiteDwarfs.uLowest) * rng.uniform()) * cells;
     const position = systemNow[POSITION];
     const k = Math.min(position | 0, cells - 1);
     const at = PRIMARY_STRIDE * k;
@@ -269,19 +270,19 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
     const ifmrMass = finalMassMsun(ifmr, m1);
     // Rounding can put t̃ a hair above the age at the edge of the white-dwarf region: cooling age 0 there.
     const youngest = ageGyr - tms > 0 ? ageGyr - tms : 0;
-    const cooling = constantHistory ? youngest * rng() : youngest;
+    const cooling = constantHistory ? youngest * rng.uniform() : youngest;
     systemNow[IFMR_MASS] = ifmrMass;
     systemNow[COOLING] = cooling;
-    const uSelect = magnitudeLimited ? rng() : 0;
-    systemNow[FIELD_UNIFORM] = rng();
+    const uSelect = magnitudeLimited ? rng.uniform() : 0;
+    systemNow[FIELD_UNIFORM] = rng.uniform();
     systemNow[FIELD_DEVIATE] = NaN;
     systemNow[FINAL_CORE_RADIUS] = NaN;
 
     let uFossil = 1;
     systemNow[FOSSIL_DEVIATE] = 0;
     if (fossil.enabled) {
-      uFossil = rng();
-      systemNow[FOSSIL_DEVIATE] = normalQuantile(rng() + HALF_STEP);
+      uFossil = rng.uniform();
+      systemNow[FOSSIL_DEVIATE] = normalQuantile(rng.uniform() + HALF_STEP);
     }
     systemNow[FOSSIL_UNIFORM] = uFossil;
     // Whether this system's outcome can differ between the points (false: point 0's counts hold for all).
@@ -289,7 +290,7 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
 
     for (let r = 0; r < rowCount; r++) {
       const row = rows[r];
-      const u = rng();
+      const u = rng.uniform();
       rowDrawn[r] = 0;
       // Host-mass scaling of the occurrence, capped at 1 per star (a pow only when the row asks).
       const occurrence = row.hostMassSlope === 0 ? row.occurrence : row.occurrence * Math.pow(m1, row.hostMassSlope);
@@ -298,7 +299,7 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
       rowU[r] = u;
       rowOccurrence[r] = occurrence;
       rowDrawThreshold[r] = drawThreshold;
-      drawnCompanion(r, row, rng, track);
+      drawnCompanion(r, row, track);
       if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : insideReach(r, spread.maxReachAU, spread.maxReachOutsideLog10A3)) && !destroyedAtEveryPoint(prepared, points, logs, spread, r)) varies = true;
       if (spread.multiplierVaries && (row.hostMassSlope !== 0 || (u >= spread.minPresent[r] && u < spread.maxPresent[r]))) varies = true;
     }
@@ -429,10 +430,10 @@ function destroyedAtEveryPoint(prepared: PreparedScenario, points: readonly Prep
  * lower bound of log10 a0³, and for track whether the giant engulfs it (with the onset state). A
  * quantity the row draws in log10 form stays in that form until the value is needed.
  */
-function drawnCompanion(r: number, row: PreparedRow, rng: () => number, track: PreparedTrack | null): void {
+function drawnCompanion(r: number, row: PreparedRow, track: PreparedTrack | null): void {
   rowDrawn[r] = 1;
-  const uMass = rng();
-  const uPeriod = rng();
+  const uMass = stream.uniform();
+  const uPeriod = stream.uniform();
   if (row.log10MassTable && !row.massIsRatio) {
     rowLog10Mass[r] = companionLog10MassDraw(row, uMass);
     rowMass[r] = NaN;
