@@ -460,7 +460,11 @@ function drawnCompanion(r: number, row: PreparedRow, track: PreparedTrack | null
   rowCloseGroup[r] = -1;
   if (track) {
     // Beyond the largest critical separation of the whole grid no interpolation engulfs it.
-    const engulfed = rowLog10A3Floor[r] < systemNow[TRACK_OUTSIDE] && commonEnvelopeOnset(track.grid, systemNow[PRIMARY_MASS], companionMassMsun(r), initialSeparationAU(r), onsetOut);
+    let engulfed = false;
+    if (rowLog10A3Floor[r] < systemNow[TRACK_OUTSIDE]) {
+      fillOrbit(r);
+      engulfed = commonEnvelopeOnset(track.grid, systemNow[PRIMARY_MASS], rowMass[r], rowA0[r], onsetOut);
+    }
     rowEngulfed[r] = engulfed ? 1 : 0;
     if (engulfed) {
       rowCoreMass[r] = onsetOut[0];
@@ -471,52 +475,49 @@ function drawnCompanion(r: number, row: PreparedRow, track: PreparedTrack | null
   }
 }
 
-/** Companion r's mass (Msun), 10^log10 taken on first use. */
-function companionMassMsun(r: number): number {
+// The helpers below fill the row arrays (or systemNow) on first use and return nothing: a double
+// returned from, or passed to, a call that V8 does not inline becomes a new heap object.
+
+/** Fills rowMass[r], companion r's mass (Msun): 10^log10 taken on first use. */
+function fillMass(r: number): void {
   if (Number.isNaN(rowMass[r])) rowMass[r] = Math.exp(rowLog10Mass[r] * Math.LN10);
-  return rowMass[r];
 }
 
-/** log10 of companion r's mass (Msun), the logarithm taken on first use. */
-function companionLog10MassMsun(r: number): number {
+/** Fills rowLog10Mass[r], log10 of companion r's mass (Msun): the logarithm taken on first use. */
+function fillLog10Mass(r: number): void {
   if (Number.isNaN(rowLog10Mass[r])) rowLog10Mass[r] = Math.log10(rowMass[r]);
-  return rowLog10Mass[r];
 }
 
-/** Companion r's initial period (days), 10^log10 taken on first use. */
-function companionPeriodDays(r: number): number {
+/** Fills rowA0[r], companion r's initial semi-major axis (AU, Kepler's third law), with the mass and period (days) it needs. */
+function fillOrbit(r: number): void {
+  if (!Number.isNaN(rowA0[r])) return;
+  fillMass(r);
   if (Number.isNaN(rowPeriod[r])) rowPeriod[r] = Math.exp(rowLog10Period[r] * Math.LN10);
-  return rowPeriod[r];
+  rowA0[r] = Math.cbrt(semiMajorAxisCubedAU3(rowPeriod[r], systemNow[PRIMARY_MASS] + rowMass[r])); // = semiMajorAxisAU (kepler.ts)
 }
 
-/** Companion r's initial semi-major axis (AU, Kepler's third law), computed on first use. */
-function initialSeparationAU(r: number): number {
-  if (Number.isNaN(rowA0[r])) rowA0[r] = Math.cbrt(semiMajorAxisCubedAU3(companionPeriodDays(r), systemNow[PRIMARY_MASS] + companionMassMsun(r))); // = semiMajorAxisAU (kepler.ts)
-  return rowA0[r];
+/** Fills rowCompanionRadius[r], companion r's radius (Rsun). */
+function fillRadius(r: number): void {
+  if (!Number.isNaN(rowCompanionRadius[r])) return;
+  fillMass(r);
+  rowCompanionRadius[r] = companionRadiusRsun(rowMass[r]);
 }
 
-/** Companion r's radius (Rsun), computed on first use. */
-function companionRadiusOf(r: number): number {
-  if (Number.isNaN(rowCompanionRadius[r])) rowCompanionRadius[r] = companionRadiusRsun(companionMassMsun(r));
-  return rowCompanionRadius[r];
-}
-
-/** fixedReach: the radius (Rsun) of the white dwarf of the IFMR mass, computed once per system. */
-function finalCoreRadiusRsun(): number {
+/** fixedReach: fills systemNow[FINAL_CORE_RADIUS], the radius (Rsun) of the white dwarf of the IFMR mass, once per system. */
+function fillFinalCoreRadius(): void {
   if (Number.isNaN(systemNow[FINAL_CORE_RADIUS])) systemNow[FINAL_CORE_RADIUS] = whiteDwarfRadiusRsun(systemNow[IFMR_MASS]);
-  return systemNow[FINAL_CORE_RADIUS];
+}
+
+/** Fills systemNow[FIELD_DEVIATE], the current system's field deviate (a standard normal): its quantile taken on first use. */
+function fillFieldDeviate(): void {
+  if (Number.isNaN(systemNow[FIELD_DEVIATE])) systemNow[FIELD_DEVIATE] = normalQuantile(systemNow[FIELD_UNIFORM] + HALF_STEP);
 }
 
 /** a0 < reachAU for companion r; an orbit whose lower bound of log10 a0³ is above outsideLog10A3 is outside without computing a0. */
 function insideReach(r: number, reachAU: number, outsideLog10A3: number): boolean {
   if (rowLog10A3Floor[r] > outsideLog10A3) return false;
-  return initialSeparationAU(r) < reachAU;
-}
-
-/** The current system's field deviate (a standard normal), its quantile taken on first use. */
-function fieldDeviateZ(): number {
-  if (Number.isNaN(systemNow[FIELD_DEVIATE])) systemNow[FIELD_DEVIATE] = normalQuantile(systemNow[FIELD_UNIFORM] + HALF_STEP);
-  return systemNow[FIELD_DEVIATE];
+  fillOrbit(r);
+  return rowA0[r] < reachAU;
 }
 
 /**
@@ -633,7 +634,8 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
     if (out.present[r] === 0) continue;
     const fate = out.fate[r];
     if (rowMassBin[r] < 0) {
-      rowMassBin[r] = binIndex(BINS.log10CompanionMsun, companionLog10MassMsun(r));
+      fillLog10Mass(r);
+      rowMassBin[r] = binIndex(BINS.log10CompanionMsun, rowLog10Mass[r]);
       rowPeriodBin[r] = binIndex(BINS.log10PeriodDays, rowLog10Period[r]);
     }
     tally.companionFates[fate] += sign;
@@ -690,15 +692,17 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: P
   if (fixedReach ? !insideReach(r, point.reachAU, logs.reachOutsideLog10A3) : rowEngulfed[r] === 0) {
     // Only a present companion's separation is tallied.
     if (present && Number.isNaN(rowWideAU[r])) {
-      const m2 = companionMassMsun(r);
-      rowWideAU[r] = widenedSeparationAU(initialSeparationAU(r), m1 + m2, ifmrMass + m2);
+      fillOrbit(r);
+      const m2 = rowMass[r];
+      rowWideAU[r] = widenedSeparationAU(rowA0[r], m1 + m2, ifmrMass + m2);
     }
     survivor(WIDE);
     fateOut[3] = rowWideAU[r];
     return;
   }
-  const m2 = companionMassMsun(r);
-  const a0 = initialSeparationAU(r);
+  fillOrbit(r);
+  const m2 = rowMass[r];
+  const a0 = rowA0[r];
   if (rowEnvelopeReady[r] === 0) {
     if (fixedReach) {
       // fixedReach: the envelope engulfs the companion at R = a0, with the final core and the full envelope.
@@ -711,7 +715,8 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: P
       const tip = rgbTipCoreMassMsun(m1);
       rowHelium[r] = tip !== null && rowCoreMass[r] < tip + HELIUM_CORE_MARGIN_MSUN ? 1 : 0;
     }
-    rowCoreRadius[r] = fixedReach ? finalCoreRadiusRsun() : whiteDwarfRadiusRsun(rowCoreMass[r]);
+    if (fixedReach) fillFinalCoreRadius();
+    rowCoreRadius[r] = fixedReach ? systemNow[FINAL_CORE_RADIUS] : whiteDwarfRadiusRsun(rowCoreMass[r]);
     rowCompanionRadius[r] = NaN;
     rowRocheFraction[r] = NaN;
     rowEnvelopeReady[r] = 1;
@@ -727,7 +732,8 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: P
   const finalRsun = finalAU * RSUN_PER_AU;
   if (finalRsun > coreRadius) {
     if (Number.isNaN(rowRocheFraction[r])) rowRocheFraction[r] = rocheLobeFraction(m2 / coreMass);
-    if (companionRadiusOf(r) < rowRocheFraction[r] * finalRsun) {
+    fillRadius(r);
+    if (rowCompanionRadius[r] < rowRocheFraction[r] * finalRsun) {
       if (Number.isNaN(rowFinalPeriod[r])) rowFinalPeriod[r] = keplerPeriodDays(finalAU, coreMass + m2);
       const finalPeriod = rowFinalPeriod[r];
       survivor(POST_CE);
@@ -738,7 +744,8 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: P
       const close = point.field.closeSurvivor;
       if (prepared.channels.closeSurvivor && finalPeriod < close.maxPeriodDays) {
         if (rowCloseGroup[r] !== point.closeFieldGroup) {
-          rowCloseField[r] = lognormalLog10FieldMG(logs.closeMedian, close.widthDex, fieldDeviateZ());
+          fillFieldDeviate();
+          rowCloseField[r] = lognormalLog10FieldMG(logs.closeMedian, close.widthDex, systemNow[FIELD_DEVIATE]);
           rowCloseGroup[r] = point.closeFieldGroup;
         }
         fateOut[1] = rowCloseField[r];
@@ -764,7 +771,8 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: P
     return;
   }
   if (rowDisruptionGroup[r] !== point.disruptionFieldGroup) {
-    rowDisruptionField[r] = disruptionLog10FieldMG(point, logs, coreMass, coreRadius, r, fieldDeviateZ());
+    fillFieldDeviate();
+    rowDisruptionField[r] = disruptionLog10FieldMG(point, logs, coreMass, coreRadius, r, systemNow[FIELD_DEVIATE]);
     rowDisruptionGroup[r] = point.disruptionFieldGroup;
   }
   fateOut[1] = rowDisruptionField[r];
@@ -777,11 +785,15 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: P
  */
 const disruptionLog10FieldOf = byOption<DisruptionFieldOptions, 'kind', number, [PointLogs, PreparedPoint, number, number, number, number]>('kind', {
   lognormal: (f, logs, _point, _coreMass, _coreRadius, _r, z) => lognormalLog10FieldMG(logs.disruptionMedian, f.widthDex, z),
-  companionScaled: (f, logs, _point, _coreMass, _coreRadius, r, z) => lognormalLog10FieldMG(logs.disruptionMedian + f.slope * companionLog10MassMsun(r), f.widthDex, z),
+  companionScaled: (f, logs, _point, _coreMass, _coreRadius, r, z) => {
+    fillLog10Mass(r);
+    return lognormalLog10FieldMG(logs.disruptionMedian + f.slope * rowLog10Mass[r], f.widthDex, z);
+  },
   accretion: (f, _logs, point, coreMass, coreRadius, r, z) => {
     // The debris disc forms at the companion's tidal radius around the core (η sets it).
-    const m2 = companionMassMsun(r);
-    const tidalRadius = tidalRadiusRsun(point.disruption.eta, companionRadiusOf(r), coreMass, m2);
+    fillRadius(r);
+    const m2 = rowMass[r];
+    const tidalRadius = tidalRadiusRsun(point.disruption.eta, rowCompanionRadius[r], coreMass, m2);
     return lognormalLog10FieldMG(Math.log10(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio)), f.widthDex, z);
   },
 });
