@@ -2,6 +2,7 @@ import { EngineError } from '../errors.ts';
 import { QUANTILE_TABLE_TOLERANCE, tabulateQuantiles } from '../numerics/quantile-table.ts';
 import { sampleImfLog10Msun, type ImfSampler } from '../physics/imf-sampler.ts';
 import { lifetimeAtLog10MassGyr, type PreparedLifetime } from './scenario-physics.ts';
+import { sharedFloat64Array, sharedInt32Array } from '../numerics/shared-arrays.ts';
 
 /** Most cells the primary table may take (a power of two: u · cells and k / cells are exact). */
 const MAX_CELLS = 65536;
@@ -45,7 +46,7 @@ export function buildPrimaryTable(imf: ImfSampler, lifetime: PreparedLifetime): 
     throw new EngineError('primaries', 'imf / lifetime', `a primary mass and lifetime that can be tabulated in ${MAX_CELLS} cells to within ${QUANTILE_TABLE_TOLERANCE} in probability (a lifetime that does not fall with mass, or an extreme IMF piece)`);
   }
   const { cells, values } = tables;
-  const nodes = new Float64Array(PRIMARY_STRIDE * (cells + 1));
+  const nodes = sharedFloat64Array(PRIMARY_STRIDE * (cells + 1));
   for (let k = 0; k <= cells; k++) {
     nodes[PRIMARY_STRIDE * k] = values[0][k];
     nodes[PRIMARY_STRIDE * k + 1] = -values[1][k];
@@ -91,10 +92,10 @@ export function buildWhiteDwarfDraw(primary: PrimaryTable, history: { constant: 
   let first = 0;
   while (first <= cells && !(t(first) < A)) first++;
   const uLowest = first > cells ? 1 : first === 0 ? 0 : (first - 1 + (t(first - 1) - A) / (t(first - 1) - t(first))) / cells;
-  const cumulative = new Float64Array(cells + 1);
+  const cumulative = sharedFloat64Array(cells + 1);
   for (let k = 0; k < cells; k++) cumulative[k + 1] = cumulative[k] + cellWeight(A - t(k), A - t(k + 1));
   const total = cumulative[cells];
-  const guide = new Int32Array(cells * GUIDE_PER_CELL);
+  const guide = sharedInt32Array(cells * GUIDE_PER_CELL);
   let k = 0;
   for (let j = 0; j < guide.length; j++) {
     while (k < cells - 1 && cumulative[k + 1] <= (j / guide.length) * total) k++;

@@ -104,6 +104,21 @@ export function emptyTallyFor(scenarioHash: string): ChunkTally {
   };
 }
 
+/** Sets every count of `tally` to zero and its scenario hash to `scenarioHash`, in place; returns it. */
+export function clearTally(tally: ChunkTally, scenarioHash: string): ChunkTally {
+  tally.scenarioHash = scenarioHash;
+  for (const key of SCALAR_FIELDS) tally[key] = 0;
+  for (const key of ARRAY_FIELDS) tally[key].fill(0);
+  return tally;
+}
+
+/** A copy of `tally` that shares no array with it. */
+export function copyTally(tally: ChunkTally): ChunkTally {
+  const copy = { ...tally };
+  for (const key of ARRAY_FIELDS) copy[key] = tally[key].slice();
+  return copy;
+}
+
 /** Exact element-wise sum of two tallies of the same scenario and engine version (inputs untouched). */
 export function addTally(a: ChunkTally, b: ChunkTally): ChunkTally {
   return addTallyInto(structuredClone(a), b);

@@ -1,3 +1,5 @@
+import { sharedFloat64Array } from './shared-arrays.ts';
+
 /**
  * An inverse CDF tabulated on a uniform grid in u and interpolated linearly: the table form of
  * the inversion method (Devroye 1986, Non-Uniform Random Variate Generation, Springer, §II.2;
@@ -50,7 +52,7 @@ export function tabulateQuantiles(
     const values: Float64Array[] = [];
     let worst = 0;
     for (const quantile of quantiles) {
-      const table = { cells, values: new Float64Array(cells + 1), maxCdfError: 0 };
+      const table = { cells, values: sharedFloat64Array(cells + 1), maxCdfError: 0 };
       for (let k = 0; k <= cells; k++) table.values[k] = quantile(k / cells);
       if (!table.values.every(Number.isFinite)) return null;
       const error = worstCdfError(table, quantile, tolerance);

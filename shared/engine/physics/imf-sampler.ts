@@ -6,6 +6,7 @@ import { KROUPA_2001 } from './imf-kroupa2001.ts';
 import { tableQuantile, tabulateQuantile, type QuantileTable } from '../numerics/quantile-table.ts';
 import { brokenPowerLawPieces, powerLawLog10Quantile, powerLawPieceIntegral, powerLawQuantileTable, type PowerLawQuantileTable } from './imf-power-law.ts';
 import { SALPETER_1955 } from './imf-salpeter1955.ts';
+import { sharedFloat64Array } from '../numerics/shared-arrays.ts';
 
 /**
  * A power-law piece (its exact inverse CDF, and that inverse CDF of log10 M tabulated when the table
@@ -87,7 +88,7 @@ function chabrierPieces(lo: number, hi: number): WeightedPiece[] {
 function tabulateLognormal(lo: number, hi: number): { table: number[]; total: number } {
   const x0 = Math.log10(lo);
   const dx = (Math.log10(hi) - x0) / (CDF_NODES - 1);
-  const cdf = new Float64Array(CDF_NODES);
+  const cdf = sharedFloat64Array(CDF_NODES);
   let previous = chabrierLognormalPerLog(lo);
   for (let j = 1; j < CDF_NODES; j++) {
     const current = chabrierLognormalPerLog(Math.pow(10, x0 + j * dx));
