@@ -92,6 +92,7 @@ export async function main(argv: readonly string[], io: CliIo): Promise<number> 
       scenarioName: argv[0],
       constraintSetName: argv[0],
       parameters: file.parameters.map((p) => p.path),
+      ownerUserId: null,
       implied: null,
       scenarioId: null,
       scenarioVersion: null,

@@ -104,6 +104,8 @@ export const fitSummarySchema = z.object({
   scenarioName: z.string(),
   constraintSetName: z.string(),
   parameters: z.array(z.string()),
+  /** Who queued it: they, or any modeller, may cancel it while it computes (null for `npm run fit`'s output, which has no owner). */
+  ownerUserId: z.string().nullable(),
   /** Set when the fit answers an implied-occurrence question (its page is /implied-occurrence?fit=ID). */
   implied: impliedFitQuestionSchema.nullable(),
 });

@@ -89,6 +89,7 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
       scenarioName: fit.scenarioName,
       constraintSetName: fit.constraintSetName,
       parameters: fit.parameters.map((p) => p.path),
+      ownerUserId: fit.ownerUserId,
       implied: fit.implied ?? null,
     };
   }

@@ -2,21 +2,49 @@ import type { ReactNode } from 'react';
 import type { FitDetail } from '../../../../shared/contracts/fits.ts';
 import { VegaChart } from '../../../components/charts/vega-chart.tsx';
 import { Alert } from '../../../components/ui/alert.tsx';
+import { Badge } from '../../../components/ui/badge.tsx';
+import { formatDateTimeUtc } from '../../../lib/format.ts';
 import { Card } from '../../../components/ui/card.tsx';
 import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
 import { ProgressHeadline } from '../../../components/ui/progress-headline.tsx';
 import { marginalSpec } from '../../../components/charts/marginal-spec.ts';
 import { pairSpec } from './fit-chart-specs.ts';
-import { fitProgressText } from './fit-progress-text.ts';
+import { cancelledFitText, fitProgressText } from './fit-progress-text.ts';
 
 const num = (x: number) => String(Number(x.toPrecision(3)));
 
-/** Progress while the grid computes, then the posterior: marginals with 68/95% shaded, the corner plot, the best point, the sentence. */
-export function FitResults({ fit, scorecard }: { fit: FitDetail; scorecard?: (evaluation: NonNullable<FitDetail['posterior']>['bestPoint']['evaluation']) => ReactNode }) {
+/**
+ * Progress while the grid computes (with `progressActions`, e.g. a way to cancel), then the posterior:
+ * marginals with 68/95% shaded, the corner plot, the best point, the sentence. A cancelled fit says
+ * how far it got and that nothing of it was kept.
+ */
+export function FitResults({
+  fit,
+  scorecard,
+  progressActions,
+}: {
+  fit: FitDetail;
+  scorecard?: (evaluation: NonNullable<FitDetail['posterior']>['bestPoint']['evaluation']) => ReactNode;
+  progressActions?: ReactNode;
+}) {
+  if (fit.status === 'cancelled') {
+    return (
+      <Card title="Cancelled" actions={<Badge tone="warning">Cancelled</Badge>}>
+        <p data-testid="fit-cancelled">
+          {fit.finishedAt ? `Cancelled ${formatDateTimeUtc(fit.finishedAt)}. ` : ''}
+          {cancelledFitText(fit)}
+        </p>
+      </Card>
+    );
+  }
   if (fit.status === 'queued' || fit.status === 'running') {
     const percent = `${(100 * fit.progress).toFixed(1)}%`;
     return (
-      <Card title="Progress" description={`${fit.pointCount.toLocaleString('en-US')} grid points × ${fit.systems.toLocaleString('en-US')} systems, one pass over the same draws.`}>
+      <Card
+        title="Progress"
+        description={`${fit.pointCount.toLocaleString('en-US')} grid points × ${fit.systems.toLocaleString('en-US')} systems, one pass over the same draws.`}
+        actions={progressActions}
+      >
         <div className="flex flex-col gap-3">
           <ProgressHeadline percent={percent} status={fitProgressText(fit)} />
           <ProgressBar
@@ -33,7 +61,7 @@ export function FitResults({ fit, scorecard }: { fit: FitDetail; scorecard?: (ev
       </Card>
     );
   }
-  if (!fit.posterior) return <Alert message={fit.error ?? `The fit ${fit.status === 'cancelled' ? 'was cancelled' : 'has no posterior'}.`} />;
+  if (!fit.posterior) return <Alert message={fit.error ?? 'The fit has no posterior.'} />;
   const post = fit.posterior;
   const n = post.parameters.length;
   return (

@@ -85,7 +85,8 @@ export function SweepProgress({ departmentId, detail, canCancel, scenarioName }:
         onConfirm={() => cancel.mutate(detail.id, { onSuccess: () => setConfirming(false) })}
         onCancel={() => setConfirming(false)}
       >
-        Points still queued or running stop, and their reserved credit is given back. Points that have finished keep their results.
+        The points are computed together in one pass, so every point that has not finished stops. Each one’s reserved credit is given back in full (a refund
+        entry per point in the credit ledger), also for the part already computed, and that part is discarded: a cancelled sweep cannot be resumed.
       </ConfirmDialog>
     </Card>
   );
