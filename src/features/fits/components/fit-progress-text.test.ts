@@ -29,7 +29,9 @@ describe('cancel texts', () => {
   });
 
   it('says how far a cancelled fit got and that nothing of it is kept', () => {
-    expect(cancelledFitText({ chunksDone: 3, chunkCount: 306, costCredits: 8 })).toMatch(/^It was cancelled after 3 of 306 chunks of its one pass \(1\.0%\); those chunks were discarded, so there is no posterior/);
-    expect(cancelledFitText({ chunksDone: 0, chunkCount: 306, costCredits: null })).toMatch(/^It was cancelled before its first chunk was computed, so there is no posterior/);
+    expect(cancelledFitText({ chunksDone: 3, chunkCount: 306, costCredits: 8 }, '5 Dec 2026, 08:18 UTC')).toMatch(
+      /^Cancelled 5 Dec 2026, 08:18 UTC, after 3 of 306 chunks of its one pass \(1\.0%\); those chunks were discarded, so there is no posterior.*the 8 credits reserved for it/,
+    );
+    expect(cancelledFitText({ chunksDone: 0, chunkCount: 306, costCredits: null })).toMatch(/^Cancelled before its first chunk was computed, so there is no posterior/);
   });
 });

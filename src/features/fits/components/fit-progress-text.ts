@@ -36,11 +36,12 @@ export function cancelFitWarning(fit: Pick<FitSummary, 'status'> & { costCredits
   );
 }
 
-/** A cancelled fit in words: how far it got, that nothing of it is kept, and the refund. */
-export function cancelledFitText(fit: Pick<FitSummary, 'chunksDone' | 'chunkCount'> & { costCredits: number | null }): string {
+/** A cancelled fit in words: when, how far it got, that nothing of it is kept, and the refund. `when` is the time already formatted, or null. */
+export function cancelledFitText(fit: Pick<FitSummary, 'chunksDone' | 'chunkCount'> & { costCredits: number | null }, when: string | null = null): string {
+  const at = when ? ` ${when},` : '';
   const reached =
     fit.chunksDone > 0
-      ? `It was cancelled after ${fit.chunksDone.toLocaleString('en-US')} of ${plural(fit.chunkCount, 'chunk')} of its one pass (${((100 * fit.chunksDone) / Math.max(1, fit.chunkCount)).toFixed(1)}%); those chunks were discarded`
-      : 'It was cancelled before its first chunk was computed';
+      ? `Cancelled${at} after ${fit.chunksDone.toLocaleString('en-US')} of ${plural(fit.chunkCount, 'chunk')} of its one pass (${((100 * fit.chunksDone) / Math.max(1, fit.chunkCount)).toFixed(1)}%); those chunks were discarded`
+      : `Cancelled${at} before its first chunk was computed`;
   return `${reached}, so there is no posterior: no intervals, no best point and no methods paragraph. Its whole reservation was given back: ${refundWords(fit.costCredits)}.`;
 }

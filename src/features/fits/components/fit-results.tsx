@@ -30,10 +30,7 @@ export function FitResults({
   if (fit.status === 'cancelled') {
     return (
       <Card title="Cancelled" actions={<Badge tone="warning">Cancelled</Badge>}>
-        <p data-testid="fit-cancelled">
-          {fit.finishedAt ? `Cancelled ${formatDateTimeUtc(fit.finishedAt)}. ` : ''}
-          {cancelledFitText(fit)}
-        </p>
+        <p data-testid="fit-cancelled">{cancelledFitText(fit, fit.finishedAt ? formatDateTimeUtc(fit.finishedAt) : null)}</p>
       </Card>
     );
   }
