@@ -120,6 +120,15 @@ describe('fits', () => {
     expect(methods).toContain('Invented for this test');
     expect(methods).toContain(`${SYSTEMS.toLocaleString('en-US')} primaries`);
     expect(methods).toContain(`engine ${fit.engineVersion}`);
+    // The observation sits inside the range, so no interval is flagged; the model at the best point is
+    // stated in the run paragraph's words (its physics and the scenario hash), not only by name.
+    expect(iv).toMatchObject({ lowerEdge: false, upperEdge: false, flat: false });
+    expect(post.sentence).not.toMatch(/cut by|not constrained/);
+    expect(methods).toContain(`The model at the best grid point (Occurrence multiplier = ${multipliers[best]}): We drew ${SYSTEMS.toLocaleString('en-US')} Monte Carlo primaries`);
+    expect(methods).toMatch(/The scenario document \(SHA-256 [0-9a-f]{64}\)/);
+    expect(methods).toContain('not corrected for the parameters fitted');
+    // The check scenario's IFMR is Kalirai et al. 2008 (tests/fixtures/check-1.json): its full reference is listed.
+    expect(methods).toContain('- Kalirai, J. S., Hansen, B. M. S., Kelson, D. D., et al. 2008, ApJ, 676, 594');
 
     // Listed for the Overview; credit reserved for every grid point (5 × 20,000 systems).
     const list = (await observer.agent.get('/api/fits').expect(200)).body.fits;
@@ -128,6 +137,34 @@ describe('fits', () => {
     const reservation = ledger.find((e: { runId: string | null; kind: string }) => e.runId === fit.runId && e.kind === 'reservation');
     expect(reservation.description).toContain(`${(5 * SYSTEMS).toLocaleString('en-US')} systems`);
   }, 240_000);
+
+  it('says in the sentence, the methods text and the interval flags when the posterior piles at the grid edge', async () => {
+    // None magnetic of 400: the predicted fraction rises with the multiplier, so the likelihood is
+    // highest at the grid's lowest value and the 68% interval's lower end is the grid's, not the data's.
+    const set = await modeller.agent
+      .post('/api/constraint-sets')
+      .send({ name: 'None of four hundred (illustrative)', constraints: [{ kind: 'fraction', magnetic: 0, total: 400, label: 'Illustrative null survey', citation: 'Invented for this test' }] })
+      .expect(201);
+    const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: SYSTEMS, seed: SEED }));
+    const created = await modeller.agent
+      .post('/api/fits')
+      .send({ scenarioId, constraintSetId: set.body.id, parameters: [{ path: 'companions.multiplier', min: 0.5, max: 3, points: 5 }] })
+      .expect(201);
+    const fit = await waitForFit(modeller.agent, created.body.id);
+    expect(fit.status).toBe('succeeded');
+    const post = fit.posterior;
+    // The flag against the likelihood itself: 1-D, uniform prior, so the marginal is ∝ L and its value at
+    // the lower edge relative to its peak is exp(ln L_0 − max ln L) (the 10% rule of grid-posterior.ts).
+    const ll: number[] = post.logLikelihood;
+    const atLowerEdge = Math.exp(ll[0] - Math.max(...ll));
+    const atUpperEdge = Math.exp(ll[4] - Math.max(...ll));
+    expect(atLowerEdge).toBeGreaterThanOrEqual(0.1);
+    expect(post.intervals[0]).toMatchObject({ lowerEdge: true, upperEdge: atUpperEdge >= 0.1, flat: false });
+    expect(post.sentence).toContain("cut by the grid's lower edge (0.5), where the posterior is still high");
+    const methods = (await modeller.agent.get(`/api/fits/${created.body.id}/methods.txt`).expect(200)).text;
+    expect(methods).toMatch(/Occurrence multiplier: [^;]*\(cut by the grid's lower edge \(0\.5\), where the posterior is still high\)/);
+    expect(post.warnings.join(' ')).toMatch(/^The posterior of Occurrence multiplier is still \d+% of its peak at the lower edge/);
+  }, 120_000);
 
   it('refuses a bad grid, naming the field, and lets observers read but not start fits', async () => {
     const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: 2000 }));

@@ -22,7 +22,7 @@ import { runs } from '../runs/runs.table.ts';
 import type { RunRow } from '../runs/runs.repository.ts';
 import type { RunsService } from '../runs/runs.service.ts';
 import type { ScenariosService } from '../scenarios/scenarios.service.ts';
-import { analyseFit, fitMethodsParagraph, fitPoints, parameterWords, type FitDefinition } from './fit-analysis.ts';
+import { analyseFit, bestNodeIndex, fitMethodsParagraph, fitPoints, parameterWords, type FitDefinition } from './fit-analysis.ts';
 import { fits, type FitRow } from './fits.table.ts';
 
 export const fitNotFound = () => notFound('That fit');
@@ -105,7 +105,9 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
     try {
       const definition = definitionOf(fit, scenarios[0]);
       posterior = analyseFit(definition, tallies.length, (i) => buildResult(scenarios[i], tallies[i]));
-      methods = fitMethodsParagraph(definition, posterior, { engineVersion: fit.engineVersion, fitId: fit.id, scenarioName: fit.scenarioName });
+      const best = bestNodeIndex(fit.parameters, posterior);
+      const bestModel = best >= 0 ? { scenario: scenarios[best], result: buildResult(scenarios[best], tallies[best]) } : undefined;
+      methods = fitMethodsParagraph(definition, posterior, { engineVersion: fit.engineVersion, fitId: fit.id, scenarioName: fit.scenarioName, best: bestModel });
     } catch (e) {
       error = e instanceof Error ? e.message : String(e);
       logger.warn({ fitId: fit.id, err: e }, 'fit posterior failed');

@@ -64,6 +64,28 @@ describe('gridPosterior', () => {
     expect(post.warnings.join(' ')).not.toMatch(/lower edge/);
   });
 
+  it('flags the interval whose end the grid sets, names the parameter by its label, and leaves an interior one unflagged', () => {
+    // ln L = 5x on [0.1, 1] under a flat prior: the posterior ∝ e^{5x} is at e^{-4.5} ≈ 1% of its peak
+    // at the lower edge (below the 10% rule) and at its peak at the upper edge (exact arithmetic).
+    const ax = axis({ path: 'envelope.alpha', label: 'α_CE', min: 0.1, max: 1, points: 10 });
+    const [iv] = gridPosterior([ax], gridAxisValues(ax).map((x) => 5 * x)).intervals;
+    expect(iv).toMatchObject({ lowerEdge: false, upperEdge: true, flat: false });
+    expect(gridPosterior([ax], gridAxisValues(ax).map((x) => 5 * x)).warnings[0]).toMatch(/^The posterior of α_CE is still 100% of its peak at the upper edge/);
+    // A Gaussian well inside the range (μ = 0.55, σ = 0.05, edges 9σ away): no flag.
+    const inner = gridPosterior([axis({ min: 0.1, max: 1, points: 181 })], gridAxisValues(axis({ min: 0.1, max: 1, points: 181 })).map((x) => -0.5 * ((x - 0.55) / 0.05) ** 2));
+    expect(inner.intervals[0]).toMatchObject({ lowerEdge: false, upperEdge: false, flat: false });
+  });
+
+  it('a flat likelihood marks the interval as the prior’s and does not also call it piled at the edges', () => {
+    // Constant ln L under a uniform prior: the marginal is uniform, ≥ 10% of its peak at both edges,
+    // but that is the prior, not the data: one flat warning, no edge warnings.
+    const ax = axis({ path: 'giant.reachAU', label: 'Engulfment reach', min: 1, max: 4, points: 7 });
+    const post = gridPosterior([ax], new Array(7).fill(-2));
+    expect(post.intervals[0]).toMatchObject({ flat: true, lowerEdge: true, upperEdge: true });
+    expect(post.warnings).toHaveLength(1);
+    expect(post.warnings[0]).toMatch(/^The likelihood is flat over the grid/);
+  });
+
   it('marginalises a 2-D grid: an independent product likelihood gives each factor back, and a flat axis is named', () => {
     // L(a, b) = N(a; 0.3, 0.05) · const(b): the marginal of a is the 1-D Gaussian, b is unconstrained.
     const a = axis({ path: 'a', min: 0, max: 0.6, points: 121 });
@@ -75,6 +97,7 @@ describe('gridPosterior', () => {
     expect(post.intervals[0].hi68).toBeCloseTo(0.35, 3);
     expect(post.marginals[1].density.every((d) => Math.abs(d - 1) < 1e-12)).toBe(true);
     expect(post.warnings.join(' ')).toMatch(/flat along b/);
+    expect(post.intervals.map((iv) => iv.flat)).toEqual([false, true]);
     expect(post.bestIndex).toBe(60 * 5);
   });
 

@@ -14,7 +14,9 @@ import { EngineError } from '../errors.ts';
  *   quadratic in each cell, inverted exactly). `best` is the marginal's highest grid node.
  * - Warnings say when a marginal is still above 10% of its peak at a range edge (the interval is cut
  *   by the range) and when the likelihood is flat (varies by less than ½ in ln L, i.e. less than a
- *   1σ change for one Gaussian parameter) over the grid or along one parameter.
+ *   1σ change for one Gaussian parameter) over the grid or along one parameter. Each interval
+ *   carries the same findings as flags (`lowerEdge`, `upperEdge`, `flat`), so that a sentence
+ *   quoting it can say that its ends are the grid's, or that it is the prior's.
  *
  * Example: a flat likelihood with a log-uniform prior on [1, 100] gives the quantiles
  * θ_q = 1 · 100^q, so the 68% interval is [100^0.15865, 100^0.84135] = [2.08, 48.0].
@@ -25,6 +27,8 @@ export type GridPrior = 'uniform' | 'logUniform';
 
 export interface GridAxis {
   path: string;
+  /** The parameter's name in warnings (default: its path). */
+  label?: string;
   min: number;
   max: number;
   points: number;
@@ -39,10 +43,24 @@ export interface GridPosterior {
   /** ln of the normalised posterior density at every node (null where L is 0 or unknown). */
   logPosterior: (number | null)[];
   marginals: { path: string; values: number[]; density: number[] }[];
-  intervals: { path: string; best: number; lo68: number; hi68: number; lo95: number; hi95: number }[];
+  intervals: GridInterval[];
   /** Row-major index of the node of highest likelihood. */
   bestIndex: number;
   warnings: string[];
+}
+
+export interface GridInterval {
+  path: string;
+  best: number;
+  lo68: number;
+  hi68: number;
+  lo95: number;
+  hi95: number;
+  /** The marginal is still ≥ 10% of its peak at the range's lower (upper) edge: the interval is cut there by the grid, not by the data. */
+  lowerEdge: boolean;
+  upperEdge: boolean;
+  /** The likelihood does not vary along this parameter (by < ½ in ln L): its marginal is its prior. */
+  flat: boolean;
 }
 
 /** Probability outside a central 68.27% interval on each side: (1 − erf(1/√2)) / 2. */
@@ -147,42 +165,52 @@ export function gridPosterior(axes: readonly GridAxis[], logLikelihood: readonly
     return { path: axis.path, values: values[a], density: density.map((d) => (norm > 0 ? d / norm : 0)) };
   });
 
-  const intervals = marginals.map((m, a) => {
+  // Flat likelihood over the whole grid, or along one parameter (its profile: the best ln L at each of its values).
+  const spread = Math.max(...finiteLl) - Math.min(...finiteLl);
+  const flatEverywhere = spread < FLAT_DELTA_LN_L;
+  const flat = axes.map((_, a) => {
+    if (flatEverywhere || axes.length === 1) return flatEverywhere;
+    const profile = new Array<number>(sizes[a]).fill(-Infinity);
+    logLikelihood.forEach((ll, node) => {
+      if (ll !== null && Number.isFinite(ll)) profile[indexOf(node, a)] = Math.max(profile[indexOf(node, a)], ll);
+    });
+    const finite = profile.filter(Number.isFinite);
+    return finite.length > 0 && Math.max(...finite) - Math.min(...finite) < FLAT_DELTA_LN_L;
+  });
+
+  const intervals = marginals.map((m, a): GridInterval => {
     const x = m.values;
     const d = m.density;
+    const name = axes[a].label ?? m.path;
     const peakAt = d.reduce((best, v, i) => (v > d[best] ? i : best), 0);
-    const interval = {
+    const top = d[peakAt];
+    const lowerEdge = top > 0 && d[0] >= EDGE_FRACTION * top;
+    const upperEdge = top > 0 && d[x.length - 1] >= EDGE_FRACTION * top;
+    // A flat axis is named once as flat; its marginal is the prior, so its edges say nothing about the data.
+    if (lowerEdge && !flat[a]) {
+      warnings.push(`The posterior of ${name} is still ${Math.round((100 * d[0]) / top)}% of its peak at the lower edge of the range (${fmt(axes[a].min)}): the data allow lower values, so widen the range; the intervals are cut by it.`);
+    }
+    if (upperEdge && !flat[a]) {
+      warnings.push(`The posterior of ${name} is still ${Math.round((100 * d[x.length - 1]) / top)}% of its peak at the upper edge of the range (${fmt(axes[a].max)}): the data allow higher values, so widen the range; the intervals are cut by it.`);
+    }
+    return {
       path: m.path,
       best: x[peakAt],
       lo68: quantile(x, d, TAIL_68),
       hi68: quantile(x, d, 1 - TAIL_68),
       lo95: quantile(x, d, TAIL_95),
       hi95: quantile(x, d, 1 - TAIL_95),
+      lowerEdge,
+      upperEdge,
+      flat: flat[a],
     };
-    const top = d[peakAt];
-    if (top > 0 && d[0] >= EDGE_FRACTION * top) {
-      warnings.push(`The posterior of ${m.path} is still ${Math.round((100 * d[0]) / top)}% of its peak at the lower edge of the range (${fmt(axes[a].min)}): the data allow lower values, so widen the range; the intervals are cut by it.`);
-    }
-    if (top > 0 && d[x.length - 1] >= EDGE_FRACTION * top) {
-      warnings.push(`The posterior of ${m.path} is still ${Math.round((100 * d[x.length - 1]) / top)}% of its peak at the upper edge of the range (${fmt(axes[a].max)}): the data allow higher values, so widen the range; the intervals are cut by it.`);
-    }
-    return interval;
   });
 
-  const spread = Math.max(...finiteLl) - Math.min(...finiteLl);
-  if (spread < FLAT_DELTA_LN_L) {
+  if (flatEverywhere) {
     warnings.push(`The likelihood is flat over the grid (ln L varies by ${fmt(spread)} < ${FLAT_DELTA_LN_L}): the constraints do not tell these parameter values apart, so the posterior is the prior.`);
-  } else if (axes.length > 1) {
+  } else {
     axes.forEach((axis, a) => {
-      // Profile likelihood along the axis: the best ln L at each of its values.
-      const profile = new Array<number>(sizes[a]).fill(-Infinity);
-      logLikelihood.forEach((ll, node) => {
-        if (ll !== null && Number.isFinite(ll)) profile[indexOf(node, a)] = Math.max(profile[indexOf(node, a)], ll);
-      });
-      const finite = profile.filter(Number.isFinite);
-      if (finite.length > 0 && Math.max(...finite) - Math.min(...finite) < FLAT_DELTA_LN_L) {
-        warnings.push(`The likelihood is flat along ${axis.path} (its profile varies by less than ${FLAT_DELTA_LN_L} in ln L): the constraints do not constrain it, so its marginal is its prior.`);
-      }
+      if (flat[a]) warnings.push(`The likelihood is flat along ${axis.label ?? axis.path} (its profile varies by less than ${FLAT_DELTA_LN_L} in ln L): the constraints do not constrain it, so its marginal is its prior.`);
     });
   }
 

@@ -1,0 +1,30 @@
+import { describe, expect, it } from 'vitest';
+import { formatGridValue, intervalCaveat } from './fit-interval-words.ts';
+
+const grid = { min: 0.01, max: 2 };
+
+describe('intervalCaveat', () => {
+  it('says nothing of an interval the data bound', () => {
+    expect(intervalCaveat({ lowerEdge: false, upperEdge: false, flat: false }, grid, '')).toBeNull();
+  });
+
+  it('names the edge (or edges) that cut the interval, with its value and unit', () => {
+    expect(intervalCaveat({ lowerEdge: true, upperEdge: false, flat: false }, grid, '')).toBe("cut by the grid's lower edge (0.01), where the posterior is still high");
+    expect(intervalCaveat({ lowerEdge: true, upperEdge: true, flat: false }, { min: 1, max: 4 }, 'AU')).toBe(
+      "cut by the grid's lower edge (1 AU) and upper edge (4 AU), where the posterior is still high",
+    );
+  });
+
+  it('calls a flat parameter unconstrained and its interval the prior’s, whatever its edges', () => {
+    expect(intervalCaveat({ lowerEdge: true, upperEdge: true, flat: true }, grid, '')).toBe("not constrained: the likelihood is flat along it, so the interval is the prior's over the grid's 0.01–2");
+  });
+});
+
+describe('formatGridValue', () => {
+  it('keeps three significant figures and switches to exponent form outside 10^-3 … 10^4', () => {
+    expect(formatGridValue(0.011347)).toBe('0.0113');
+    expect(formatGridValue(2)).toBe('2');
+    expect(formatGridValue(12345)).toBe('1.23e+4');
+    expect(formatGridValue(0.0005)).toBe('5.00e-4');
+  });
+});
