@@ -28,6 +28,20 @@ async function separateRun(overrides: Record<string, unknown>) {
   return (await modeller.agent.get(`/api/runs/${run.body.id}/result`).expect(200)).body;
 }
 
+/** A fit of the check scenario over the multiplier (0.5–3, 5 points) against a one-survey set of k of n; its id and final detail. */
+async function multiplierFit(setName: string, survey: { magnetic: number; total: number; label: string }) {
+  const set = await modeller.agent
+    .post('/api/constraint-sets')
+    .send({ name: setName, constraints: [{ kind: 'fraction', ...survey, citation: 'Invented for this test' }] })
+    .expect(201);
+  const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: SYSTEMS, seed: SEED }));
+  const created = await modeller.agent
+    .post('/api/fits')
+    .send({ scenarioId, constraintSetId: set.body.id, parameters: [{ path: 'companions.multiplier', min: 0.5, max: 3, points: 5 }] })
+    .expect(201);
+  return { id: created.body.id as string, fit: await waitForFit(observer.agent, created.body.id) };
+}
+
 const base = checkScenario();
 const withMultiplier = (m: number) => ({ companions: { ...(base.companions as object), multiplier: m } });
 
@@ -67,16 +81,7 @@ describe('fits', () => {
     const f = separate[2].counts.magnetic / separate[2].counts.whiteDwarfs;
     const total = 400;
     const magnetic = Math.round(f * total);
-    const set = await modeller.agent
-      .post('/api/constraint-sets')
-      .send({ name: 'One survey (illustrative)', constraints: [{ kind: 'fraction', magnetic, total, label: 'Illustrative survey', citation: 'Invented for this test' }] })
-      .expect(201);
-    const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: SYSTEMS, seed: SEED }));
-    const created = await modeller.agent
-      .post('/api/fits')
-      .send({ scenarioId, constraintSetId: set.body.id, parameters: [{ path: 'companions.multiplier', min: 0.5, max: 3, points: 5 }] })
-      .expect(201);
-    const fit = await waitForFit(observer.agent, created.body.id);
+    const { id, fit } = await multiplierFit('One survey (illustrative)', { magnetic, total, label: 'Illustrative survey' });
     expect(fit.status).toBe('succeeded');
     expect(fit.pointCount).toBe(5);
     // One pass of ceil(20,000 / 65,536) = 1 chunk, all done; no time left.
@@ -115,7 +120,7 @@ describe('fits', () => {
     expect(post.bestPoint.values).toEqual({ 'companions.multiplier': multipliers[best] });
     expect(post.bestPoint.evaluation.constraints[0].label).toBe('Illustrative survey');
     expect(post.sentence).toMatch(/^We find Occurrence multiplier between /);
-    const methods = (await observer.agent.get(`/api/fits/${created.body.id}/methods.txt`).expect(200)).text;
+    const methods = (await observer.agent.get(`/api/fits/${id}/methods.txt`).expect(200)).text;
     expect(methods).toContain('5 linearly spaced values from 0.5 to 3 with a uniform prior');
     expect(methods).toContain('Invented for this test');
     expect(methods).toContain(`${SYSTEMS.toLocaleString('en-US')} primaries`);
@@ -132,7 +137,7 @@ describe('fits', () => {
 
     // Listed for the Overview; credit reserved for every grid point (5 × 20,000 systems).
     const list = (await observer.agent.get('/api/fits').expect(200)).body.fits;
-    expect(list[0]).toMatchObject({ id: created.body.id, status: 'succeeded', progress: 1, parameters: ['companions.multiplier'], constraintSetName: 'One survey (illustrative)' });
+    expect(list[0]).toMatchObject({ id, status: 'succeeded', progress: 1, parameters: ['companions.multiplier'], constraintSetName: 'One survey (illustrative)' });
     const ledger = (await owner.agent.get('/api/billing/ledger?pageSize=100').expect(200)).body.entries;
     const reservation = ledger.find((e: { runId: string | null; kind: string }) => e.runId === fit.runId && e.kind === 'reservation');
     expect(reservation.description).toContain(`${(5 * SYSTEMS).toLocaleString('en-US')} systems`);
@@ -141,16 +146,7 @@ describe('fits', () => {
   it('says in the sentence, the methods text and the interval flags when the posterior piles at the grid edge', async () => {
     // None magnetic of 400: the predicted fraction rises with the multiplier, so the likelihood is
     // highest at the grid's lowest value and the 68% interval's lower end is the grid's, not the data's.
-    const set = await modeller.agent
-      .post('/api/constraint-sets')
-      .send({ name: 'None of four hundred (illustrative)', constraints: [{ kind: 'fraction', magnetic: 0, total: 400, label: 'Illustrative null survey', citation: 'Invented for this test' }] })
-      .expect(201);
-    const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: SYSTEMS, seed: SEED }));
-    const created = await modeller.agent
-      .post('/api/fits')
-      .send({ scenarioId, constraintSetId: set.body.id, parameters: [{ path: 'companions.multiplier', min: 0.5, max: 3, points: 5 }] })
-      .expect(201);
-    const fit = await waitForFit(modeller.agent, created.body.id);
+    const { id, fit } = await multiplierFit('None of four hundred (illustrative)', { magnetic: 0, total: 400, label: 'Illustrative null survey' });
     expect(fit.status).toBe('succeeded');
     const post = fit.posterior;
     // The flag against the likelihood itself: 1-D, uniform prior, so the marginal is ∝ L and its value at
@@ -161,7 +157,7 @@ describe('fits', () => {
     expect(atLowerEdge).toBeGreaterThanOrEqual(0.1);
     expect(post.intervals[0]).toMatchObject({ lowerEdge: true, upperEdge: atUpperEdge >= 0.1, flat: false });
     expect(post.sentence).toContain("cut by the grid's lower edge (0.5), where the posterior is still high");
-    const methods = (await modeller.agent.get(`/api/fits/${created.body.id}/methods.txt`).expect(200)).text;
+    const methods = (await modeller.agent.get(`/api/fits/${id}/methods.txt`).expect(200)).text;
     expect(methods).toMatch(/Occurrence multiplier: [^;]*\(cut by the grid's lower edge \(0\.5\), where the posterior is still high\)/);
     expect(post.warnings.join(' ')).toMatch(/^The posterior of Occurrence multiplier is still \d+% of its peak at the lower edge/);
   }, 120_000);
