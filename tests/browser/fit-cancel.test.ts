@@ -1,6 +1,7 @@
 /**
  * Cancelling from the browser: the demo admin starts a fit on the Fits page and cancels it while
- * it computes; the demo observer cancels their own implied-occurrence question. Each time the
+ * it computes; the demo observer cancels their own implied-occurrence question; the admin cancels a
+ * sweep from its page. Each time the
  * confirmation names the credits that come back, the page then says "Cancelled" with no posterior,
  * and the balance the Credits page shows, the ledger and the server's own answers agree: the whole
  * reservation was refunded once. No free allowance here, so every system costs credit.
@@ -122,6 +123,39 @@ describe('cancelling', () => {
       expect(answer).toMatchObject({ status: 'cancelled', confidence: null, credible: null, costCredits: 13 });
       expect((await json(page, '/api/billing/balance')).credits).toBe(before);
       await stack.screenshot(page, 'implied-cancelled');
+    } finally {
+      await context.close();
+    }
+  }, 300_000);
+
+  it('the admin cancels a running sweep from its page: each point’s reservation back, the sweep cancelled', async () => {
+    const { page, context } = await stack.newPage();
+    try {
+      await stack.signIn(page, 'admin');
+      const before = (await json(page, '/api/billing/balance')).credits;
+      const scenario = (await json(page, '/api/scenarios')).scenarios.find((x: { name: string }) => x.name === 'Baseline, fixed engulfment reach');
+      // 2 points × 2×10^7 systems, each point its own run: 2 credits each (one credit per 10^7 systems).
+      const created = await page.request.post('/api/sweeps', {
+        headers: { Origin: stack.baseUrl },
+        data: { scenarioId: scenario.id, systems: 20_000_000, axes: [{ path: 'envelope.alpha', values: [0.2, 0.8] }] },
+      });
+      expect(created.status()).toBe(201);
+      const { id } = await created.json();
+      await page.goto(`/sweeps/${id}`);
+      await page.getByRole('button', { name: 'Cancel the sweep' }).click();
+      const dialog = page.getByRole('dialog', { name: 'Cancel the sweep?' });
+      await dialog.waitFor();
+      expect(await dialog.textContent()).toContain('Each one’s reserved credit is given back in full');
+      await dialog.getByRole('button', { name: 'Cancel the remaining points' }).click();
+      await page.getByText('Cancelled', { exact: true }).first().waitFor({ timeout: 60_000 });
+      const sweep = await json(page, `/api/sweeps/${id}`);
+      expect(sweep.status).toBe('cancelled');
+      const ledger: Entry[] = (await json(page, '/api/billing/ledger?pageSize=100')).entries;
+      for (const point of sweep.points) {
+        expect(ledger.filter((e) => e.runId === point.runId).map((e) => [e.kind, e.credits]).sort()).toEqual([['refund', 2], ['reservation', -2]]);
+      }
+      expect((await json(page, '/api/billing/balance')).credits).toBe(before);
+      await stack.screenshot(page, 'sweep-cancelled');
     } finally {
       await context.close();
     }
