@@ -76,6 +76,21 @@ describe('gridPosterior', () => {
     expect(inner.intervals[0]).toMatchObject({ lowerEdge: false, upperEdge: false, flat: false });
   });
 
+  it('on a log grid judges the edges per unit ln θ: a Gaussian in ln θ 2.56σ inside the lower edge is not piled there', () => {
+    // L = N(ln θ; ln 0.1, 0.9) on a log grid 0.01–2 with a log-uniform prior: the posterior per unit ln θ is
+    // the Gaussian itself, exp(−½ (ln 10 / 0.9)²) = 3.8% of its peak at θ = 0.01 (below the 10% rule) and
+    // exp(−½ (ln 20 / 0.9)²) ≈ 0.05% at θ = 2. Per unit θ (p/θ) the lower edge would read ≥ 38% and be flagged.
+    const ax = axis({ path: 'envelope.alpha', min: 0.01, max: 2, points: 201, scale: 'log', prior: 'logUniform' });
+    const ll = gridAxisValues(ax).map((x) => -0.5 * (Math.log(x / 0.1) / 0.9) ** 2);
+    const post = gridPosterior([ax], ll);
+    expect(post.intervals[0]).toMatchObject({ lowerEdge: false, upperEdge: false, flat: false });
+    expect(post.warnings).toEqual([]);
+    // Centred on the lower edge itself, half the ln θ-Gaussian lies beyond it: flagged, at 100% of the peak.
+    const atEdge = gridPosterior([ax], gridAxisValues(ax).map((x) => -0.5 * (Math.log(x / 0.01) / 0.9) ** 2));
+    expect(atEdge.intervals[0].lowerEdge).toBe(true);
+    expect(atEdge.warnings[0]).toMatch(/still 100% of its peak at the lower edge of the range \(0\.01\)/);
+  });
+
   it('a flat likelihood marks the interval as the prior’s and does not also call it piled at the edges', () => {
     // Constant ln L under a uniform prior: the marginal is uniform, ≥ 10% of its peak at both edges,
     // but that is the prior, not the data: one flat warning, no edge warnings.

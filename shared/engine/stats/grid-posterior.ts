@@ -13,7 +13,7 @@ import { EngineError } from '../errors.ts';
  *   2.5–97.5% (95%) of the marginal, with the density taken linear between grid nodes (the CDF
  *   quadratic in each cell, inverted exactly). `best` is the marginal's highest grid node.
  * - Warnings say when a marginal is still above 10% of its peak at a range edge (the interval is cut
- *   by the range) and when the likelihood is flat (varies by less than ½ in ln L, i.e. less than a
+ *   by the range; on a log grid, the density per unit ln θ) and when the likelihood is flat (varies by less than ½ in ln L, i.e. less than a
  *   1σ change for one Gaussian parameter) over the grid or along one parameter. Each interval
  *   carries the same findings as flags (`lowerEdge`, `upperEdge`, `flat`), so that a sentence
  *   quoting it can say that its ends are the grid's, or that it is the prior's.
@@ -183,15 +183,19 @@ export function gridPosterior(axes: readonly GridAxis[], logLikelihood: readonly
     const d = m.density;
     const name = axes[a].label ?? m.path;
     const peakAt = d.reduce((best, v, i) => (v > d[best] ? i : best), 0);
-    const top = d[peakAt];
-    const lowerEdge = top > 0 && d[0] >= EDGE_FRACTION * top;
-    const upperEdge = top > 0 && d[x.length - 1] >= EDGE_FRACTION * top;
+    // The edge test reads the density per unit of the grid's own coordinate: θ p(θ) per unit ln θ on a
+    // log grid. Per unit θ, the lower edge of a wide log grid looks crowded even when it holds little
+    // probability (and the upper edge the reverse).
+    const e = axes[a].scale === 'log' ? d.map((v, i) => v * x[i]) : d;
+    const top = Math.max(...e);
+    const lowerEdge = top > 0 && e[0] >= EDGE_FRACTION * top;
+    const upperEdge = top > 0 && e[x.length - 1] >= EDGE_FRACTION * top;
     // A flat axis is named once as flat; its marginal is the prior, so its edges say nothing about the data.
     if (lowerEdge && !flat[a]) {
-      warnings.push(`The posterior of ${name} is still ${Math.round((100 * d[0]) / top)}% of its peak at the lower edge of the range (${fmt(axes[a].min)}): the data allow lower values, so widen the range; the intervals are cut by it.`);
+      warnings.push(`The posterior of ${name} is still ${Math.round((100 * e[0]) / top)}% of its peak at the lower edge of the range (${fmt(axes[a].min)}): the data allow lower values, so widen the range; the intervals are cut by it.`);
     }
     if (upperEdge && !flat[a]) {
-      warnings.push(`The posterior of ${name} is still ${Math.round((100 * d[x.length - 1]) / top)}% of its peak at the upper edge of the range (${fmt(axes[a].max)}): the data allow higher values, so widen the range; the intervals are cut by it.`);
+      warnings.push(`The posterior of ${name} is still ${Math.round((100 * e[x.length - 1]) / top)}% of its peak at the upper edge of the range (${fmt(axes[a].max)}): the data allow higher values, so widen the range; the intervals are cut by it.`);
     }
     return {
       path: m.path,
