@@ -66,7 +66,7 @@ export function Component() {
             fitId={fitId}
             progressActions={(a) =>
               a.ownerUserId === me.user.id || roleAtLeast(me.role, 'modeller') ? (
-                <CancelFitControl departmentId={me.department.id} fit={{ id: a.fitId, status: a.status, costCredits: a.costCredits }} label="Cancel the question" />
+                <CancelFitControl departmentId={me.department.id} fit={{ id: a.fitId, status: a.status, progress: a.progress, costCredits: a.costCredits }} label="Cancel the question" />
               ) : null
             }
           />
