@@ -9,14 +9,18 @@ describe('intervalCaveat', () => {
   });
 
   it('names the edge (or edges) that cut the interval, with its value and unit', () => {
-    expect(intervalCaveat({ lowerEdge: true, upperEdge: false, flat: false }, grid, '')).toBe("cut by the grid's lower edge (0.01), where the posterior is still high");
+    expect(intervalCaveat({ lowerEdge: true, upperEdge: false, flat: false }, grid, '')).toBe(
+      "cut by the grid's lower edge (0.01), where the posterior is still high",
+    );
     expect(intervalCaveat({ lowerEdge: true, upperEdge: true, flat: false }, { min: 1, max: 4 }, 'AU')).toBe(
       "cut by the grid's lower edge (1 AU) and upper edge (4 AU), where the posterior is still high",
     );
   });
 
   it('calls a flat parameter unconstrained and its interval the prior’s, whatever its edges', () => {
-    expect(intervalCaveat({ lowerEdge: true, upperEdge: true, flat: true }, grid, '')).toBe("not constrained: the likelihood is flat along it, so the interval is the prior's over the grid's 0.01–2");
+    expect(intervalCaveat({ lowerEdge: true, upperEdge: true, flat: true }, grid, '')).toBe(
+      "not constrained: the likelihood is flat along it, so the interval is the prior's over the grid's 0.01–2",
+    );
   });
 });
 

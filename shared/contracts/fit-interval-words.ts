@@ -1,7 +1,8 @@
 import type { FitParameter, FitPosterior } from './fits.ts';
 
 /** A grid value or interval end in a sentence: three significant figures, exponent form beyond 10^4 and below 10^-3. Example: 0.011347 → "0.0113". */
-export const formatGridValue = (x: number) => (Math.abs(x) >= 1e4 || (Math.abs(x) < 1e-3 && x !== 0) ? x.toExponential(2) : Number(x.toPrecision(3)).toString());
+export const formatGridValue = (x: number) =>
+  Math.abs(x) >= 1e4 || (Math.abs(x) < 1e-3 && x !== 0) ? x.toExponential(2) : Number(x.toPrecision(3)).toString();
 
 /**
  * What an interval is worth, said beside it (the sentence, the methods text and the fit page use
@@ -17,7 +18,10 @@ export function intervalCaveat(
 ): string | null {
   const u = unit ? ` ${unit}` : '';
   const [lo, hi] = [formatGridValue(parameter.min), formatGridValue(parameter.max)];
-  if (iv.flat) return `not constrained: the likelihood is flat along it, so the interval is the prior's over the grid's ${lo}–${hi}${u}`;
-  const edges = [iv.lowerEdge ? `lower edge (${lo}${u})` : null, iv.upperEdge ? `upper edge (${hi}${u})` : null].filter((e) => e !== null);
+  if (iv.flat)
+    return `not constrained: the likelihood is flat along it, so the interval is the prior's over the grid's ${lo}–${hi}${u}`;
+  const edges = [iv.lowerEdge ? `lower edge (${lo}${u})` : null, iv.upperEdge ? `upper edge (${hi}${u})` : null].filter(
+    (e) => e !== null,
+  );
   return edges.length > 0 ? `cut by the grid's ${edges.join(' and ')}, where the posterior is still high` : null;
 }

@@ -28,9 +28,17 @@ const json = async (page: Page, url: string) => {
 async function creditsSeen(page: Page, runId: string) {
   await page.goto('/credits');
   const balance = await json(page, '/api/billing/balance');
-  await expect.poll(() => page.getByTestId('credit-balance').textContent(), { timeout: 20_000 }).toBe(`${balance.credits} credits`);
-  const entries: Entry[] = (await json(page, '/api/billing/ledger?pageSize=100')).entries.filter((e: Entry) => e.runId === runId);
-  return { balance, entries: entries.map((e) => [e.kind, e.credits]).sort(), refund: entries.find((e) => e.kind === 'refund') };
+  await expect
+    .poll(() => page.getByTestId('credit-balance').textContent(), { timeout: 20_000 })
+    .toBe(`${balance.credits} credits`);
+  const entries: Entry[] = (await json(page, '/api/billing/ledger?pageSize=100')).entries.filter(
+    (e: Entry) => e.runId === runId,
+  );
+  return {
+    balance,
+    entries: entries.map((e) => [e.kind, e.credits]).sort(),
+    refund: entries.find((e) => e.kind === 'refund'),
+  };
 }
 
 describe('cancelling', () => {
@@ -39,7 +47,11 @@ describe('cancelling', () => {
     try {
       await stack.signIn(page, 'admin');
       const me = await json(page, '/api/me');
-      await stack.server.tidefield.billing.adjust({ departmentId: me.department.id, credits: START_CREDITS, reason: 'credit for the cancel browser test' });
+      await stack.server.tidefield.billing.adjust({
+        departmentId: me.department.id,
+        credits: START_CREDITS,
+        reason: 'credit for the cancel browser test',
+      });
 
       await page.goto('/fits');
       const form = page.getByRole('form', { name: 'New fit' });
@@ -53,13 +65,19 @@ describe('cancelling', () => {
       await first.getByLabel('To').fill('1');
       await first.getByLabel('Points').fill('3');
       // 3 × 2×10^7 = 6×10^7 systems at one credit per 10^7 systems (the price list) = 6 credits.
-      await expect.poll(() => page.getByTestId('fit-cost').textContent(), { timeout: 20_000 }).toMatch(/3 grid points × 20,000,000 systems, reserved at once as 60,000,000 systems \(at list price 6 credits\)/);
+      await expect
+        .poll(() => page.getByTestId('fit-cost').textContent(), { timeout: 20_000 })
+        .toMatch(
+          /3 grid points × 20,000,000 systems, reserved at once as 60,000,000 systems \(at list price 6 credits\)/,
+        );
       await form.getByRole('button', { name: 'Start the fit' }).click();
       await page.waitForURL(/\/fits\/[A-Za-z0-9_-]{8,}$/);
       const id = new URL(page.url()).pathname.split('/').pop()!;
 
       // Cancel once the one pass is under way (a chunk done), so that there is work to discard.
-      await expect.poll(async () => (await json(page, `/api/fits/${id}`)).chunksDone, { timeout: 120_000, interval: 250 }).toBeGreaterThan(0);
+      await expect
+        .poll(async () => (await json(page, `/api/fits/${id}`)).chunksDone, { timeout: 120_000, interval: 250 })
+        .toBeGreaterThan(0);
       const reserved = await json(page, '/api/billing/balance');
       expect(reserved).toMatchObject({ credits: START_CREDITS - 6, reservedCredits: 6 });
 
@@ -67,7 +85,9 @@ describe('cancelling', () => {
       const dialog = page.getByRole('dialog', { name: 'Cancel the fit?' });
       await dialog.waitFor();
       const warning = await dialog.textContent();
-      expect(warning).toContain('Its whole reservation is given back, also for any chunks already computed: the 6 credits reserved for it');
+      expect(warning).toContain(
+        'Its whole reservation is given back, also for any chunks already computed: the 6 credits reserved for it',
+      );
       expect(warning).toContain('cannot be resumed');
       await stack.screenshot(page, 'fit-cancel-confirm');
       await dialog.getByRole('button', { name: 'Cancel the fit' }).click();
@@ -78,7 +98,9 @@ describe('cancelling', () => {
       expect(fit).toMatchObject({ status: 'cancelled', posterior: null, methods: null, costCredits: 6 });
       expect(fit.chunksDone).toBeGreaterThan(0);
       // The words follow the server's counts; nothing of a posterior is on the page.
-      expect(await cancelled.textContent()).toMatch(new RegExp(`^Cancelled [^,]+, [^,]+ UTC, after ${fit.chunksDone} of ${fit.chunkCount} chunks of its one pass`));
+      expect(await cancelled.textContent()).toMatch(
+        new RegExp(`^Cancelled [^,]+, [^,]+ UTC, after ${fit.chunksDone} of ${fit.chunkCount} chunks of its one pass`),
+      );
       expect(await cancelled.textContent()).toContain('the 6 credits reserved for it');
       expect(await page.getByTestId('fit-intervals').count()).toBe(0);
       expect(await page.getByTestId('fit-sentence').count()).toBe(0);
@@ -88,7 +110,10 @@ describe('cancelling', () => {
       // The Credits page shows the balance the server holds, and the ledger has one reservation and one refund.
       const seen = await creditsSeen(page, fit.runId);
       expect(seen.balance).toMatchObject({ credits: START_CREDITS, reservedCredits: 0 });
-      expect(seen.entries).toEqual([['refund', 6], ['reservation', -6]]);
+      expect(seen.entries).toEqual([
+        ['refund', 6],
+        ['reservation', -6],
+      ]);
       await page.getByRole('rowheader', { name: seen.refund!.description }).first().waitFor({ timeout: 20_000 });
       await stack.screenshot(page, 'fit-cancel-credits');
     } finally {
@@ -96,7 +121,7 @@ describe('cancelling', () => {
     }
   }, 300_000);
 
-  it("the observer cancels their own implied-occurrence question while it computes", async () => {
+  it('the observer cancels their own implied-occurrence question while it computes', async () => {
     const { page, context } = await stack.newPage();
     try {
       await stack.signIn(page, 'observer');
@@ -118,7 +143,9 @@ describe('cancelling', () => {
 
       const cancelled = page.getByTestId('implied-cancelled');
       await cancelled.waitFor({ timeout: 60_000 });
-      expect(await cancelled.textContent()).toMatch(/^Cancelled (after [\d.]+% of its one pass, which was discarded|before its first chunk was computed): there is no answer\. Its whole reservation was given back \(13 credits/);
+      expect(await cancelled.textContent()).toMatch(
+        /^Cancelled (after [\d.]+% of its one pass, which was discarded|before its first chunk was computed): there is no answer\. Its whole reservation was given back \(13 credits/,
+      );
       const answer = await json(page, `/api/implied-occurrence/${fitId}`);
       expect(answer).toMatchObject({ status: 'cancelled', confidence: null, credible: null, costCredits: 13 });
       expect((await json(page, '/api/billing/balance')).credits).toBe(before);
@@ -133,7 +160,9 @@ describe('cancelling', () => {
     try {
       await stack.signIn(page, 'admin');
       const before = (await json(page, '/api/billing/balance')).credits;
-      const scenario = (await json(page, '/api/scenarios')).scenarios.find((x: { name: string }) => x.name === 'Baseline, fixed engulfment reach');
+      const scenario = (await json(page, '/api/scenarios')).scenarios.find(
+        (x: { name: string }) => x.name === 'Baseline, fixed engulfment reach',
+      );
       // 2 points × 2×10^7 systems, each point its own run: 2 credits each (one credit per 10^7 systems).
       const created = await page.request.post('/api/sweeps', {
         headers: { Origin: stack.baseUrl },
@@ -152,7 +181,15 @@ describe('cancelling', () => {
       expect(sweep.status).toBe('cancelled');
       const ledger: Entry[] = (await json(page, '/api/billing/ledger?pageSize=100')).entries;
       for (const point of sweep.points) {
-        expect(ledger.filter((e) => e.runId === point.runId).map((e) => [e.kind, e.credits]).sort()).toEqual([['refund', 2], ['reservation', -2]]);
+        expect(
+          ledger
+            .filter((e) => e.runId === point.runId)
+            .map((e) => [e.kind, e.credits])
+            .sort(),
+        ).toEqual([
+          ['refund', 2],
+          ['reservation', -2],
+        ]);
       }
       expect((await json(page, '/api/billing/balance')).credits).toBe(before);
       await stack.screenshot(page, 'sweep-cancelled');

@@ -19,7 +19,16 @@ export interface ConfirmedActionProps {
 }
 
 /** A danger button that asks first: the dialog says what happens, and keeps the server's refusal in view. */
-export function ConfirmedAction({ label, title, confirmLabel, cancelLabel, size, action, onConfirm, children }: ConfirmedActionProps) {
+export function ConfirmedAction({
+  label,
+  title,
+  confirmLabel,
+  cancelLabel,
+  size,
+  action,
+  onConfirm,
+  children,
+}: ConfirmedActionProps) {
   const [open, setOpen] = useState(false);
   return (
     <>
