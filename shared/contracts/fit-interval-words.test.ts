@@ -5,20 +5,29 @@ const grid = { min: 0.01, max: 2 };
 
 describe('intervalCaveat', () => {
   it('says nothing of an interval the data bound', () => {
-    expect(intervalCaveat({ lowerEdge: false, upperEdge: false, flat: false }, grid, '')).toBeNull();
+    expect(intervalCaveat({ lowerEdge: false, upperEdge: false, lowerLimit: false, upperLimit: false, flat: false }, grid, '')).toBeNull();
   });
 
   it('names the edge (or edges) that cut the interval, with its value and unit', () => {
-    expect(intervalCaveat({ lowerEdge: true, upperEdge: false, flat: false }, grid, '')).toBe(
+    expect(intervalCaveat({ lowerEdge: true, upperEdge: false, lowerLimit: false, upperLimit: false, flat: false }, grid, '')).toBe(
       "cut by the grid's lower edge (0.01), where the posterior is still high",
     );
-    expect(intervalCaveat({ lowerEdge: true, upperEdge: true, flat: false }, { min: 1, max: 4 }, 'AU')).toBe(
+    expect(intervalCaveat({ lowerEdge: true, upperEdge: true, lowerLimit: false, upperLimit: false, flat: false }, { min: 1, max: 4 }, 'AU')).toBe(
       "cut by the grid's lower edge (1 AU) and upper edge (4 AU), where the posterior is still high",
     );
   });
 
+  it('says when an end is the parameter’s own limit, so that the interval is in effect one-sided', () => {
+    expect(intervalCaveat({ lowerEdge: false, upperEdge: false, lowerLimit: true, upperLimit: false, flat: false }, { min: 0, max: 4.35 }, '')).toBe(
+      'its lower end is the lowest value the parameter can take (0): in effect an upper limit',
+    );
+    expect(intervalCaveat({ lowerEdge: true, upperEdge: false, lowerLimit: false, upperLimit: true, flat: false }, { min: 0.5, max: 4.35 }, '')).toBe(
+      "cut by the grid's lower edge (0.5), where the posterior is still high; its upper end is the highest value the parameter can take (4.35): in effect a lower limit",
+    );
+  });
+
   it('calls a flat parameter unconstrained and its interval the prior’s, whatever its edges', () => {
-    expect(intervalCaveat({ lowerEdge: true, upperEdge: true, flat: true }, grid, '')).toBe(
+    expect(intervalCaveat({ lowerEdge: true, upperEdge: true, lowerLimit: false, upperLimit: false, flat: true }, grid, '')).toBe(
       "not constrained: the likelihood is flat along it, so the interval is the prior's over the grid's 0.01–2",
     );
   });

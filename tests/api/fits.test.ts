@@ -2,6 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type request from 'supertest';
 import { addMember, createTestApp, signUp, type TestContext } from '../support/test-app.ts';
 import { checkScenario, createScenario, waitForFit, waitForRun } from '../support/runs.ts';
+import { parseScenario } from '../../shared/contracts/scenario.ts';
+import { rangeLimits } from '../../server/modules/fits/fit-analysis.ts';
 import { jStat } from '../../shared/engine/stats/testing/jstat-reference.ts';
 
 let ctx: TestContext;
@@ -29,7 +31,7 @@ async function separateRun(overrides: Record<string, unknown>) {
 }
 
 /** A fit of the check scenario over the multiplier (0.5–3, 5 points) against a one-survey set of k of n; its id and final detail. */
-async function multiplierFit(setName: string, survey: { magnetic: number; total: number; label: string }) {
+async function multiplierFit(setName: string, survey: { magnetic: number; total: number; label: string }, min = 0.5) {
   const set = await modeller.agent
     .post('/api/constraint-sets')
     .send({ name: setName, constraints: [{ kind: 'fraction', ...survey, citation: 'Invented for this test' }] })
@@ -37,7 +39,7 @@ async function multiplierFit(setName: string, survey: { magnetic: number; total:
   const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: SYSTEMS, seed: SEED }));
   const created = await modeller.agent
     .post('/api/fits')
-    .send({ scenarioId, constraintSetId: set.body.id, parameters: [{ path: 'companions.multiplier', min: 0.5, max: 3, points: 5 }] })
+    .send({ scenarioId, constraintSetId: set.body.id, parameters: [{ path: 'companions.multiplier', min, max: 3, points: 5 }] })
     .expect(201);
   return { id: created.body.id as string, fit: await waitForFit(observer.agent, created.body.id) };
 }
@@ -160,7 +162,24 @@ describe('fits', () => {
     const methods = (await modeller.agent.get(`/api/fits/${id}/methods.txt`).expect(200)).text;
     expect(methods).toMatch(/Occurrence multiplier: [^;]*\(cut by the grid's lower edge \(0\.5\), where the posterior is still high\)/);
     expect(post.warnings.join(' ')).toMatch(/^The posterior of Occurrence multiplier is still \d+% of its peak at the lower edge/);
+
+    // From m = 0, the lowest multiplier there is: the same data make the interval an upper limit, and no
+    // warning asks for a wider range below 0.
+    const fromZero = (await multiplierFit('None of four hundred, from zero (illustrative)', { magnetic: 0, total: 400, label: 'Illustrative null survey' }, 0)).fit.posterior;
+    expect(fromZero.intervals[0]).toMatchObject({ lowerEdge: false, lowerLimit: true, flat: false });
+    expect(fromZero.sentence).toContain('its lower end is the lowest value the parameter can take (0): in effect an upper limit');
+    expect(fromZero.warnings.join(' ')).not.toMatch(/widen the range/);
   }, 120_000);
+
+  it('knows which ends of a range are the parameter’s own limits (the scenario schema’s bounds, the rows’ largest multiplier)', () => {
+    // The check scenario: one planet row of occurrence 0.3 (tests/fixtures/check-1.json), so m ≤ 1/0.3;
+    // α_CE is allowed from 0.01 to 10 (shared/contracts/scenario.ts).
+    const scenario = parseScenario(checkScenario());
+    expect(rangeLimits(scenario, { path: 'companions.multiplier', min: 0, max: 1 / 0.3 })).toEqual({ lower: true, upper: true });
+    expect(rangeLimits(scenario, { path: 'companions.multiplier', min: 0.5, max: 3 })).toEqual({ lower: false, upper: false });
+    expect(rangeLimits(scenario, { path: 'envelope.alpha', min: 0.01, max: 10 })).toEqual({ lower: true, upper: true });
+    expect(rangeLimits(scenario, { path: 'envelope.alpha', min: 0.02, max: 2 })).toEqual({ lower: false, upper: false });
+  });
 
   it('refuses a bad grid, naming the field, and lets observers read but not start fits', async () => {
     const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: 2000 }));

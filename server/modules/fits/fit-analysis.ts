@@ -1,7 +1,8 @@
 import type { Evaluation } from '../../../shared/contracts/constraints.ts';
 import type { FitParameter, FitPosterior } from '../../../shared/contracts/fits.ts';
 import { formatGridValue, intervalCaveat } from '../../../shared/contracts/fit-interval-words.ts';
-import { SWEEPABLE_PARAMETERS, type Scenario } from '../../../shared/contracts/scenario.ts';
+import { SWEEPABLE_PARAMETERS, ScenarioValidationError, withParameter, type Scenario } from '../../../shared/contracts/scenario.ts';
+import { multiplierMaxFor } from '../../../shared/engine/kernel/scenario-physics.ts';
 import type { PointValues } from '../../../shared/engine/kernel/run-points.ts';
 import { formatPValue, formatSigma } from '../../../shared/engine/stats/format.ts';
 import { gridNodes, gridPosterior } from '../../../shared/engine/stats/grid-posterior.ts';
@@ -44,6 +45,26 @@ export const FIT_METHOD =
   'and its goodness of fit is Fisher\'s combination of the per-constraint p-values there, not corrected for the parameters fitted (so it overstates the agreement).';
 
 /**
+ * Whether each end of a parameter's range is the parameter's own limit: the scenario's schema allows
+ * nothing beyond it (α_CE below its floor, a negative multiplier), or for the multiplier the largest
+ * value its rows allow (1 / the largest row occurrence). A step of 1e-9 relative probes just beyond.
+ */
+export function rangeLimits(scenario: Scenario, p: Pick<FitParameter, 'path' | 'min' | 'max'>): { lower: boolean; upper: boolean } {
+  const outside = (x: number) => {
+    try {
+      withParameter(scenario, p.path, x);
+      return false;
+    } catch (error) {
+      if (error instanceof ScenarioValidationError) return true;
+      throw error;
+    }
+  };
+  const step = (x: number) => Math.max(Math.abs(x), 1e-12) * 1e-9;
+  const multiplierTop = p.path === 'companions.multiplier' && p.max >= multiplierMaxFor(scenario.companions.rows ?? []) * (1 - 1e-12);
+  return { lower: outside(p.min - step(p.min)), upper: multiplierTop || outside(p.max + step(p.max)) };
+}
+
+/**
  * The posterior of a fit from the prediction at every grid node: each node's result is scored
  * against the constraint set (the joint log-likelihood of evaluateConstraints), then the grid
  * posterior gives marginals, intervals and warnings. `resultAt(i)` is asked once per node, so
@@ -64,7 +85,10 @@ export function analyseFit(definition: FitDefinition, pointCount: number, result
     const reasons = evaluation.constraints.map((c) => `"${c.label}": ${c.verdict}`).join('; ');
     throw new Error(`No grid point could be scored against the constraint set "${constraintSet.name}" (${reasons}).`);
   }
-  const grid = gridPosterior(parameters.map((p) => ({ ...p, label: parameterWords(p.path).label })), logLikelihood);
+  const grid = gridPosterior(
+    parameters.map((p) => ({ ...p, label: parameterWords(p.path).label, limits: rangeLimits(definition.scenario, p) })),
+    logLikelihood,
+  );
   const node = gridNodes(parameters)[best.index];
   const values = Object.fromEntries(parameters.map((p, i) => [p.path, node[i]]));
   const mcLimited = best.evaluation.constraints.filter((c) => c.status === 'scored' && c.mcLimited).map((c) => c.label);

@@ -29,6 +29,8 @@ export interface GridAxis {
   path: string;
   /** The parameter's name in warnings (default: its path). */
   label?: string;
+  /** The range's lower (upper) end is the parameter's own limit (e.g. a multiplier of 0): nothing lies beyond it, so a posterior piled there is bounded by the parameter, not cut by the grid. */
+  limits?: { lower: boolean; upper: boolean };
   min: number;
   max: number;
   points: number;
@@ -59,6 +61,9 @@ export interface GridInterval {
   /** The marginal is still ≥ 10% of its peak at the range's lower (upper) edge: the interval is cut there by the grid, not by the data. */
   lowerEdge: boolean;
   upperEdge: boolean;
+  /** The same, at an edge that is the parameter's own limit: that end of the interval is the limit, so the interval is in effect one-sided. */
+  lowerLimit: boolean;
+  upperLimit: boolean;
   /** The likelihood does not vary along this parameter (by < ½ in ln L): its marginal is its prior. */
   flat: boolean;
 }
@@ -188,14 +193,23 @@ export function gridPosterior(axes: readonly GridAxis[], logLikelihood: readonly
     // probability (and the upper edge the reverse).
     const e = axes[a].scale === 'log' ? d.map((v, i) => v * x[i]) : d;
     const top = Math.max(...e);
-    const lowerEdge = top > 0 && e[0] >= EDGE_FRACTION * top;
-    const upperEdge = top > 0 && e[x.length - 1] >= EDGE_FRACTION * top;
+    const limits = axes[a].limits ?? { lower: false, upper: false };
+    const piledLow = top > 0 && e[0] >= EDGE_FRACTION * top && !flat[a];
+    const piledHigh = top > 0 && e[x.length - 1] >= EDGE_FRACTION * top && !flat[a];
     // A flat axis is named once as flat; its marginal is the prior, so its edges say nothing about the data.
-    if (lowerEdge && !flat[a]) {
-      warnings.push(`The posterior of ${name} is still ${Math.round((100 * e[0]) / top)}% of its peak at the lower edge of the range (${fmt(axes[a].min)}): the data allow lower values, so widen the range; the intervals are cut by it.`);
+    if (piledLow) {
+      warnings.push(
+        limits.lower
+          ? `The posterior of ${name} is still ${Math.round((100 * e[0]) / top)}% of its peak at ${fmt(axes[a].min)}, the lowest value it can take: the data favour that limit, so the interval's lower end is the limit itself (in effect an upper limit on ${name}).`
+          : `The posterior of ${name} is still ${Math.round((100 * e[0]) / top)}% of its peak at the lower edge of the range (${fmt(axes[a].min)}): the data allow lower values, so widen the range; the intervals are cut by it.`,
+      );
     }
-    if (upperEdge && !flat[a]) {
-      warnings.push(`The posterior of ${name} is still ${Math.round((100 * e[x.length - 1]) / top)}% of its peak at the upper edge of the range (${fmt(axes[a].max)}): the data allow higher values, so widen the range; the intervals are cut by it.`);
+    if (piledHigh) {
+      warnings.push(
+        limits.upper
+          ? `The posterior of ${name} is still ${Math.round((100 * e[x.length - 1]) / top)}% of its peak at ${fmt(axes[a].max)}, the highest value it can take: the data favour that limit, so the interval's upper end is the limit itself (in effect a lower limit on ${name}).`
+          : `The posterior of ${name} is still ${Math.round((100 * e[x.length - 1]) / top)}% of its peak at the upper edge of the range (${fmt(axes[a].max)}): the data allow higher values, so widen the range; the intervals are cut by it.`,
+      );
     }
     return {
       path: m.path,
@@ -204,8 +218,10 @@ export function gridPosterior(axes: readonly GridAxis[], logLikelihood: readonly
       hi68: quantile(x, d, 1 - TAIL_68),
       lo95: quantile(x, d, TAIL_95),
       hi95: quantile(x, d, 1 - TAIL_95),
-      lowerEdge,
-      upperEdge,
+      lowerEdge: piledLow && !limits.lower,
+      upperEdge: piledHigh && !limits.upper,
+      lowerLimit: piledLow && limits.lower,
+      upperLimit: piledHigh && limits.upper,
       flat: flat[a],
     };
   });
