@@ -8,7 +8,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { chooseOption, startBrowserStack, type BrowserStack } from '../support/browser.ts';
+import { chooseOption, fillFitForm, startBrowserStack, type BrowserStack } from '../support/browser.ts';
 
 let stack: BrowserStack;
 const START_CREDITS = 50;
@@ -53,17 +53,12 @@ describe('cancelling', () => {
         reason: 'credit for the cancel browser test',
       });
 
-      await page.goto('/fits');
-      const form = page.getByRole('form', { name: 'New fit' });
-      await form.waitFor({ timeout: 30_000 });
-      await chooseOption(form.getByLabel('Scenario'), 'Baseline, fixed engulfment reach');
-      await chooseOption(form.getByLabel('Constraint set'), 'library');
-      await form.getByLabel('Systems per grid point').fill('20000000');
-      const first = form.getByRole('group', { name: 'Parameter 1' });
-      await first.getByLabel('Parameter 1').selectOption('envelope.alpha');
-      await first.getByLabel('From').fill('0.1');
-      await first.getByLabel('To').fill('1');
-      await first.getByLabel('Points').fill('3');
+      const form = await fillFitForm(page, {
+        scenario: 'Baseline, fixed engulfment reach',
+        constraintSet: 'library',
+        systems: 20_000_000,
+        parameters: [{ path: 'envelope.alpha', from: 0.1, to: 1, points: 3 }],
+      });
       // 3 × 2×10^7 = 6×10^7 systems at one credit per 10^7 systems (the price list) = 6 credits.
       await expect
         .poll(() => page.getByTestId('fit-cost').textContent(), { timeout: 20_000 })
