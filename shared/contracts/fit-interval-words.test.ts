@@ -17,12 +17,12 @@ describe('intervalCaveat', () => {
     );
   });
 
-  it('says when an end is the parameter’s own limit, so that the interval is in effect one-sided', () => {
+  it('says when the posterior piles at the parameter’s own limit, so that the result is in effect one-sided', () => {
     expect(intervalCaveat({ lowerEdge: false, upperEdge: false, lowerLimit: true, upperLimit: false, flat: false }, { min: 0, max: 4.35 }, '')).toBe(
-      'its lower end is the lowest value the parameter can take (0): in effect an upper limit',
+      'the posterior piles up at the lowest value the parameter can take (0): read it as an upper limit',
     );
     expect(intervalCaveat({ lowerEdge: true, upperEdge: false, lowerLimit: false, upperLimit: true, flat: false }, { min: 0.5, max: 4.35 }, '')).toBe(
-      "cut by the grid's lower edge (0.5), where the posterior is still high; its upper end is the highest value the parameter can take (4.35): in effect a lower limit",
+      "cut by the grid's lower edge (0.5), where the posterior is still high; the posterior piles up at the highest value the parameter can take (4.35): read it as a lower limit",
     );
   });
 

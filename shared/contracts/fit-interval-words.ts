@@ -7,8 +7,8 @@ export const formatGridValue = (x: number) =>
 /**
  * What an interval is worth, said beside it (the sentence, the methods text and the fit page use
  * the same words): nothing when the data bound it; "cut by the grid's lower edge (0.01)" when the
- * posterior is still high there, so that end is the grid's and not the data's; that an end is the
- * parameter's own limit (a multiplier of 0), so the interval is in effect one-sided; and for a flat
+ * posterior is still high there, so that end is the grid's and not the data's; that the posterior
+ * piles at the parameter's own limit (a multiplier of 0), so the result is in effect one-sided; and for a flat
  * likelihood, that the interval is the prior's.
  * Example: lowerEdge on a grid from 0.01 to 2 → "cut by the grid's lower edge (0.01), where the posterior is still high".
  */
@@ -23,8 +23,8 @@ export function intervalCaveat(
   const edges = [iv.lowerEdge ? `lower edge (${lo}${u})` : null, iv.upperEdge ? `upper edge (${hi}${u})` : null].filter((e) => e !== null);
   const words = [
     edges.length > 0 ? `cut by the grid's ${edges.join(' and ')}, where the posterior is still high` : null,
-    iv.lowerLimit ? `its lower end is the lowest value the parameter can take (${lo}${u}): in effect an upper limit` : null,
-    iv.upperLimit ? `its upper end is the highest value the parameter can take (${hi}${u}): in effect a lower limit` : null,
+    iv.lowerLimit ? `the posterior piles up at the lowest value the parameter can take (${lo}${u}): read it as an upper limit` : null,
+    iv.upperLimit ? `the posterior piles up at the highest value the parameter can take (${hi}${u}): read it as a lower limit` : null,
   ].filter((w) => w !== null);
   return words.length > 0 ? words.join('; ') : null;
 }

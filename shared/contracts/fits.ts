@@ -84,7 +84,7 @@ export const fitPosteriorSchema = z.object({
       /** The posterior is still ≥ 10% of its peak at the grid's lower (upper) edge: the interval is cut there by the grid, not by the data (false in fits stored before the flag existed). */
       lowerEdge: z.boolean().default(false),
       upperEdge: z.boolean().default(false),
-      /** The same at an edge that is the parameter's own limit (e.g. a multiplier of 0): that end is the limit, so the interval is in effect one-sided. */
+      /** The same at an edge that is the parameter's own limit (e.g. a multiplier of 0): the posterior piles at the limit, so the result is in effect one-sided. */
       lowerLimit: z.boolean().default(false),
       upperLimit: z.boolean().default(false),
       /** The likelihood is flat along this parameter: the interval is the prior's. */

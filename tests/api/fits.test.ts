@@ -167,7 +167,7 @@ describe('fits', () => {
     // warning asks for a wider range below 0.
     const fromZero = (await multiplierFit('None of four hundred, from zero (illustrative)', { magnetic: 0, total: 400, label: 'Illustrative null survey' }, 0)).fit.posterior;
     expect(fromZero.intervals[0]).toMatchObject({ lowerEdge: false, lowerLimit: true, flat: false });
-    expect(fromZero.sentence).toContain('its lower end is the lowest value the parameter can take (0): in effect an upper limit');
+    expect(fromZero.sentence).toContain('the posterior piles up at the lowest value the parameter can take (0): read it as an upper limit');
     expect(fromZero.warnings.join(' ')).not.toMatch(/widen the range/);
   }, 120_000);
 

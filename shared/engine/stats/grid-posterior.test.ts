@@ -91,14 +91,14 @@ describe('gridPosterior', () => {
     expect(atEdge.warnings[0]).toMatch(/still 100% of its peak at the lower edge of the range \(0\.01\)/);
   });
 
-  it('at an edge that is the parameter’s own limit says "in effect an upper limit" instead of "widen the range"', () => {
+  it('at an edge that is the parameter’s own limit says "read it as an upper limit" instead of "widen the range"', () => {
     // Zero magnetic of 400 against a fraction proportional to the multiplier m, f = 0.1 m on m ∈ [0, 4]:
     // L = (1 − 0.1 m)^400 peaks at m = 0, which no multiplier can go below.
     const ax = axis({ path: 'companions.multiplier', label: 'Occurrence multiplier', min: 0, max: 4, points: 129, limits: { lower: true, upper: false } });
     const post = gridPosterior([ax], gridAxisValues(ax).map((m) => 400 * Math.log1p(-0.1 * m)));
     expect(post.intervals[0]).toMatchObject({ lowerEdge: false, lowerLimit: true, upperEdge: false, upperLimit: false });
     expect(post.warnings).toEqual([
-      'The posterior of Occurrence multiplier is still 100% of its peak at 0, the lowest value it can take: the data favour that limit, so the interval\'s lower end is the limit itself (in effect an upper limit on Occurrence multiplier).',
+      'The posterior of Occurrence multiplier is still 100% of its peak at 0, the lowest value it can take: the data favour that limit, so read the result as an upper limit on Occurrence multiplier; the central interval\'s lower end is not a measurement.',
     ]);
     // The same grid whose lower end is not a limit: cut by the grid.
     const cut = gridPosterior([{ ...ax, limits: undefined }], gridAxisValues(ax).map((m) => 400 * Math.log1p(-0.1 * m)));

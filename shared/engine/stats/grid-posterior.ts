@@ -61,7 +61,7 @@ export interface GridInterval {
   /** The marginal is still ≥ 10% of its peak at the range's lower (upper) edge: the interval is cut there by the grid, not by the data. */
   lowerEdge: boolean;
   upperEdge: boolean;
-  /** The same, at an edge that is the parameter's own limit: that end of the interval is the limit, so the interval is in effect one-sided. */
+  /** The same, at an edge that is the parameter's own limit: the posterior piles at the limit, so the result is in effect one-sided. */
   lowerLimit: boolean;
   upperLimit: boolean;
   /** The likelihood does not vary along this parameter (by < ½ in ln L): its marginal is its prior. */
@@ -200,14 +200,14 @@ export function gridPosterior(axes: readonly GridAxis[], logLikelihood: readonly
     if (piledLow) {
       warnings.push(
         limits.lower
-          ? `The posterior of ${name} is still ${Math.round((100 * e[0]) / top)}% of its peak at ${fmt(axes[a].min)}, the lowest value it can take: the data favour that limit, so the interval's lower end is the limit itself (in effect an upper limit on ${name}).`
+          ? `The posterior of ${name} is still ${Math.round((100 * e[0]) / top)}% of its peak at ${fmt(axes[a].min)}, the lowest value it can take: the data favour that limit, so read the result as an upper limit on ${name}; the central interval's lower end is not a measurement.`
           : `The posterior of ${name} is still ${Math.round((100 * e[0]) / top)}% of its peak at the lower edge of the range (${fmt(axes[a].min)}): the data allow lower values, so widen the range; the intervals are cut by it.`,
       );
     }
     if (piledHigh) {
       warnings.push(
         limits.upper
-          ? `The posterior of ${name} is still ${Math.round((100 * e[x.length - 1]) / top)}% of its peak at ${fmt(axes[a].max)}, the highest value it can take: the data favour that limit, so the interval's upper end is the limit itself (in effect a lower limit on ${name}).`
+          ? `The posterior of ${name} is still ${Math.round((100 * e[x.length - 1]) / top)}% of its peak at ${fmt(axes[a].max)}, the highest value it can take: the data favour that limit, so read the result as a lower limit on ${name}; the central interval's upper end is not a measurement.`
           : `The posterior of ${name} is still ${Math.round((100 * e[x.length - 1]) / top)}% of its peak at the upper edge of the range (${fmt(axes[a].max)}): the data allow higher values, so widen the range; the intervals are cut by it.`,
       );
     }
