@@ -4,15 +4,15 @@ import { scenarioAtPoint } from '../../shared/contracts/point-scenario.ts';
 import { parseScenario, ScenarioValidationError, withParameter } from '../../shared/contracts/scenario.ts';
 import { planChunks } from '../../shared/engine/kernel/chunks.ts';
 import { scenarioHash } from '../../shared/engine/kernel/scenario-hash.ts';
-import { addTallyInto, emptyTallyFor } from '../../shared/engine/kernel/tally.ts';
+import { addPackedIntoAll } from '../../shared/engine/kernel/packed-tally.ts';
+import { emptyTallyFor } from '../../shared/engine/kernel/tally.ts';
 import { EngineError } from '../../shared/engine/errors.ts';
-import { buildResult } from '../../shared/engine/result/build-result.ts';
 import { ENGINE_VERSION } from '../../shared/engine/version.ts';
 import { createEnginePool, defaultWorkerCount } from '../engine-pool/engine-pool.ts';
 import { createPoolExecutor } from '../engine-pool/pool-executor.ts';
 import { AppError } from '../lib/errors.ts';
 import { checkConstraints, resolveConstraints } from '../modules/constraints/constraint-sets.service.ts';
-import { analyseFit, bestNodeIndex, fitMethodsParagraph, fitPoints, parameterWords, type FitDefinition } from '../modules/fits/fit-analysis.ts';
+import { analyseFit, bestNodeIndex, fitMethodsParagraph, fitPoints, nodeResult, parameterWords, type FitDefinition } from '../modules/fits/fit-analysis.ts';
 import { readScenarioDocument, resolveTable, type CliIo } from './synth.ts';
 
 const USAGE = 'usage: npm run fit -- <fit.json>   (fit.json: { "scenario": {…}, "constraints": […], "parameters": […], "systems"?, "seed"?, "workers"? })';
@@ -64,7 +64,7 @@ export async function main(argv: readonly string[], io: CliIo): Promise<number> 
       let done = 0;
       let lastReport = 0;
       for await (const batch of executor.execute({ runId: 'local', scenario: scenarios[0], pending, signal: new AbortController().signal, points })) {
-        batch.pointTallies!.forEach((tally, p) => addTallyInto(totals[p], tally));
+        addPackedIntoAll(totals, batch.pointTallies!);
         done += batch.chunks.length;
         const now = performance.now();
         if (done === chunkCount || now - lastReport > 1000) {
@@ -76,9 +76,9 @@ export async function main(argv: readonly string[], io: CliIo): Promise<number> 
       await pool.destroy();
     }
     const definition: FitDefinition = { scenario: scenarios[0], parameters: file.parameters, constraints, constraintSet: { id: 'file', name: argv[0], version: null } };
-    const posterior = analyseFit(definition, points.length, (i) => buildResult(scenarios[i], totals[i]));
+    const posterior = analyseFit(definition, points.length, (i) => nodeResult(scenarios[i], totals[i]));
     const best = bestNodeIndex(file.parameters, posterior);
-    const bestModel = best >= 0 ? { scenario: scenarios[best], result: buildResult(scenarios[best], totals[best]) } : undefined;
+    const bestModel = best >= 0 ? { scenario: scenarios[best], result: nodeResult(scenarios[best], totals[best]) } : undefined;
     const methods = fitMethodsParagraph(definition, posterior, { engineVersion: ENGINE_VERSION, fitId: null, scenarioName: argv[0], best: bestModel });
     io.stderr(`done: ${points.length} grid points × ${base.systems} systems in ${((performance.now() - started) / 1000).toFixed(2)} s\n${posterior.sentence}\n`);
     const now = new Date().toISOString();

@@ -1,5 +1,6 @@
 import type { Scenario } from '../../shared/contracts/scenario.ts';
 import type { PointValues } from '../../shared/engine/kernel/run-points.ts';
+import type { PackedTallies } from '../../shared/engine/kernel/packed-tally.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
 import type { WorkerStatus } from '../../shared/contracts/workers.ts';
 
@@ -10,8 +11,11 @@ export interface BatchDone {
   chunks: number[];
   /** The summed tally (of the first point, for a multi-point job). */
   tally: ChunkTally;
-  /** A multi-point job: one summed tally per point, in the request's order (tally === pointTallies[0]). */
-  pointTallies?: ChunkTally[];
+  /**
+   * A multi-point job: one summed tally per point, in the request's order, packed (tally is point
+   * 0's, unpacked); add them with addPackedIntoAll (packed-tally.ts), never one object per point.
+   */
+  pointTallies?: PackedTallies;
 }
 
 export interface ExecuteRequest {

@@ -4,6 +4,7 @@ import type { Scenario } from '../../shared/contracts/scenario.ts';
 import type { EngulfmentGrid } from '../../shared/engine/kernel/engulfment.ts';
 import { prepareScenario, type PreparedScenario } from '../../shared/engine/kernel/prepare.ts';
 import { scenarioHash } from '../../shared/engine/kernel/scenario-hash.ts';
+import { unpackTally, type PackedTallies } from '../../shared/engine/kernel/packed-tally.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
 import { BATCH_RETRIES, BatchFailedError, pendingBatches, RunAbortedError, type BatchDone, type ChunkExecutor, type ExecuteRequest } from './chunk-executor.ts';
 import type { ChunkBatchTask } from './chunk-task.ts';
@@ -39,11 +40,11 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
   let jobsDone = 0;
   let activeJobs = 0;
 
-  async function runBatch(task: ChunkBatchTask, signal: AbortSignal): Promise<ChunkTally | ChunkTally[]> {
+  async function runBatch(task: ChunkBatchTask, signal: AbortSignal): Promise<ChunkTally | PackedTallies> {
     for (let attempt = 0; ; attempt++) {
       activeJobs++;
       try {
-        const tally = (await pool.run(task, { signal })) as ChunkTally | ChunkTally[];
+        const tally = (await pool.run(task, { signal })) as ChunkTally | PackedTallies; // packed: a multi-point task
         jobsDone++;
         return tally;
       } catch (error) {
@@ -86,8 +87,8 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
       while (next < batches.length || inFlight.size > 0) {
         while (inFlight.size < threads * 2 && next < batches.length) {
           const { batch, chunks } = batches[next++];
-          const done = runBatch({ prepared, chunks, passes }, local.signal).then((tally): BatchDone =>
-            Array.isArray(tally) ? { batch, chunks, tally: tally[0], pointTallies: tally } : { batch, chunks, tally },
+          const done = runBatch({ prepared, chunks, passes, packed: true }, local.signal).then((tally): BatchDone =>
+            'counts' in tally ? { batch, chunks, tally: unpackTally(tally, 0), pointTallies: tally } : { batch, chunks, tally },
           );
           done.catch(() => {}); // observed by the race below; a late rejection after a failure is expected
           inFlight.set(batch, done);

@@ -7,11 +7,12 @@ import type { Scenario } from '../../shared/contracts/scenario.ts';
 import { engulfmentGridInputFor, type EngulfmentGrid } from '../../shared/engine/kernel/engulfment.ts';
 import { prepareScenario, type PreparedScenario } from '../../shared/engine/kernel/prepare.ts';
 import { scenarioHash } from '../../shared/engine/kernel/scenario-hash.ts';
+import { unpackTally, type PackedTallies } from '../../shared/engine/kernel/packed-tally.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
 import { engulfmentGridKey } from '../../shared/engine/physics/engulfment-grid.ts';
 import { preparePointPasses, type PointPass } from '../engine-pool/point-passes.ts';
 import { poolThreads } from '../engine-pool/pool-executor.ts';
-import { cancelChannel, cancelledKey, redisConnection, workerKeyPrefix, type ChunkJobData, type ChunkJobResult, type WorkerHeartbeat } from './queue-names.ts';
+import { cancelChannel, cancelledKey, encodePackedTallies, redisConnection, workerKeyPrefix, type ChunkJobData, type ChunkJobResult, type WorkerHeartbeat } from './queue-names.ts';
 
 export interface ChunkWorkerOptions {
   url: string;
@@ -98,9 +99,9 @@ export function createChunkWorker(options: ChunkWorkerOptions) {
           passesOfRun.set(runId, passes);
           if (passesOfRun.size > PREPARED_CACHE) passesOfRun.delete(passesOfRun.keys().next().value!);
         }
-        const tallies = (await pool.run({ prepared: base, chunks, passes: await passes }, { signal })) as ChunkTally[];
+        const packed = (await pool.run({ prepared: base, chunks, passes: await passes, packed: true }, { signal })) as PackedTallies;
         jobsDone++;
-        return { chunks, tally: tallies[0], tallies };
+        return { chunks, tally: unpackTally(packed, 0), packed: encodePackedTallies(packed) };
       }
       const tally = (await pool.run({ prepared: base, chunks }, { signal })) as ChunkTally;
       jobsDone++;

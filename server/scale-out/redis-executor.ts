@@ -1,9 +1,11 @@
 import { Queue, QueueEvents, type Job } from 'bullmq';
 import type { Logger } from 'pino';
+import { packTallies } from '../../shared/engine/kernel/packed-tally.ts';
 import { BATCH_RETRIES, BatchFailedError, pendingBatches, RunAbortedError, type BatchDone, type ChunkExecutor, type ExecuteRequest } from '../engine-pool/chunk-executor.ts';
 import {
   cancelChannel,
   cancelledKey,
+  decodePackedTallies,
   jobIdOf,
   redisConnection,
   workerKeyPrefix,
@@ -78,7 +80,8 @@ export function createRedisExecutor(options: RedisExecutorOptions): ChunkExecuto
       if (request.signal.aborted) throw new RunAbortedError(request.signal.reason);
       throw new BatchFailedError(chunks, BATCH_RETRIES + 1, error);
     }
-    return { batch, chunks: result.chunks, tally: result.tally, ...(result.tallies ? { pointTallies: result.tallies } : {}) };
+    const pointTallies = result.packed ? decodePackedTallies(result.packed) : result.tallies ? packTallies(result.tallies) : undefined;
+    return { batch, chunks: result.chunks, tally: result.tally, ...(pointTallies ? { pointTallies } : {}) };
   }
 
   async function* execute(request: ExecuteRequest): AsyncGenerator<BatchDone> {

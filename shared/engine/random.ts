@@ -16,3 +16,14 @@ export function chunkUniform(seed: string, chunkIndex: number): Uniform {
   const gen = seedrandom.xor4096(`${seed}#${chunkIndex}`);
   return () => gen();
 }
+
+/**
+ * The same generator as chunkUniform, as its raw 32-bit integers: u = (i >>> 0) · 2^-32 is exactly
+ * chunkUniform's uniform. The kernel converts inline, so a draw's double never leaves registers.
+ */
+export function chunkInt32(seed: string, chunkIndex: number): () => number {
+  return seedrandom.xor4096(`${seed}#${chunkIndex}`).int32;
+}
+
+/** 2^-32: (int32 >>> 0) · UNIFORM_SCALE is the uniform in [0, 1) of chunkUniform. */
+export const UNIFORM_SCALE = 2 ** -32;

@@ -6,7 +6,7 @@
 export const CHUNK_SYSTEMS = 65536;
 
 /** Version of the engine's numbers: bump on any change to physics, draw order or chunking. */
-export const ENGINE_VERSION = `2.1.0+chunk${CHUNK_SYSTEMS}`;
+export const ENGINE_VERSION = `2.2.0+chunk${CHUNK_SYSTEMS}`;
 
 /**
  * Major version of ENGINE_VERSION (engine 2: common-envelope onset state, the literature's

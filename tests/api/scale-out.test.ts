@@ -15,7 +15,7 @@ import type { BatchDone, ChunkExecutor, ExecuteRequest } from '../../server/engi
 import { createEnginePool } from '../../server/engine-pool/engine-pool.ts';
 import { createPoolExecutor } from '../../server/engine-pool/pool-executor.ts';
 import { jobIdOf, redisConnection, type ChunkJobData, type ChunkJobResult } from '../../server/scale-out/queue-names.ts';
-import { checkScenario, createScenario, waitForRun } from '../support/runs.ts';
+import { checkScenario, createScenario, waitForFit, waitForRun } from '../support/runs.ts';
 import { createTestApp, GOOD_PASSWORD, restartApp, signUp, type TestContext } from '../support/test-app.ts';
 
 const WORKER_MAIN = fileURLToPath(new URL('../../server/scale-out/worker-main.ts', import.meta.url));
@@ -123,6 +123,33 @@ describe('runs on BullMQ workers over Redis', () => {
     expect(await resultOf(admin.agent, run.body.id)).toEqual(reference);
     await expect.poll(jobsDoneTotal, { timeout: 5000 }).toBe(before + JOBS);
   }, 180_000);
+
+  it('a fit\'s packed per-node tallies come back through Redis: the embedded pool\'s likelihood at every node', async () => {
+    const fitOn = async (agent: request.Agent) => {
+      const set = await agent
+        .post('/api/constraint-sets')
+        .send({ name: 'Scale-out fit (illustrative)', constraints: [{ kind: 'fraction', magnetic: 12, total: 400, label: 'Illustrative survey', citation: 'Invented for this test' }] })
+        .expect(201);
+      // Three chunks: two jobs of up to BATCH_CHUNKS chunks, each returning 144 packed tallies.
+      const id = await createScenario(agent, checkScenario({ systems: 2 * 65_536 + 5000 }));
+      const parameters = [
+        { path: 'companions.multiplier', min: 0.5, max: 3, points: 12 },
+        { path: 'envelope.alpha', min: 0.05, max: 2, points: 12 },
+      ];
+      const created = await agent.post('/api/fits').send({ scenarioId: id, constraintSetId: set.body.id, seed: 'scale-out-fit', parameters }).expect(201);
+      return waitForFit(agent, created.body.id, 180_000);
+    };
+    const local = await fitOn((await signUp(embedded.app)).agent);
+    const before = await jobsDoneTotal();
+    const remote = await fitOn(admin.agent);
+    // Two jobs (chunks 0–1 and 2), each counted once the workers' heartbeats catch up (the next tests count jobs).
+    await expect.poll(jobsDoneTotal, { timeout: 5000 }).toBe(before + 2);
+    expect([local.status, remote.status]).toEqual(['succeeded', 'succeeded']);
+    expect(remote.posterior.logLikelihood).toEqual(local.posterior.logLikelihood);
+    expect(remote.posterior.intervals).toEqual(local.posterior.intervals);
+    // The nodes differ (so the comparison could fail).
+    expect(new Set(local.posterior.logLikelihood).size).toBeGreaterThan(10);
+  }, 240_000);
 
   it('a job replayed (the same id enqueued twice) is counted once', async () => {
     const before = await jobsDoneTotal();

@@ -1,9 +1,12 @@
 import type { Evaluation } from '../../../shared/contracts/constraints.ts';
+import type { ScenarioResult } from '../../../shared/contracts/result.ts';
 import type { FitParameter, FitPosterior } from '../../../shared/contracts/fits.ts';
 import { formatGridValue, intervalCaveat } from '../../../shared/contracts/fit-interval-words.ts';
 import { SWEEPABLE_PARAMETERS, ScenarioValidationError, withParameter, type Scenario } from '../../../shared/contracts/scenario.ts';
 import { multiplierMaxFor } from '../../../shared/engine/kernel/scenario-physics.ts';
 import type { PointValues } from '../../../shared/engine/kernel/run-points.ts';
+import type { ChunkTally } from '../../../shared/engine/kernel/tally.ts';
+import { buildResult } from '../../../shared/engine/result/build-result.ts';
 import { formatPValue, formatSigma } from '../../../shared/engine/stats/format.ts';
 import { gridNodes, gridPosterior } from '../../../shared/engine/stats/grid-posterior.ts';
 import { methodsParagraph, paragraphCitations, type ParagraphResult } from '../../../shared/engine/result/methods-paragraph.ts';
@@ -62,6 +65,14 @@ export function rangeLimits(scenario: Scenario, p: Pick<FitParameter, 'path' | '
   const step = (x: number) => Math.max(Math.abs(x), 1e-12) * 1e-9;
   const multiplierTop = p.path === 'companions.multiplier' && p.max >= multiplierMaxFor(scenario.companions.rows ?? []) * (1 - 1e-12);
   return { lower: outside(p.min - step(p.min)), upper: multiplierTop || outside(p.max + step(p.max)) };
+}
+
+/**
+ * A grid node's result as the fit scores it and as the best point's methods paragraph reads it (no
+ * comparison with the scenario's own observed counts: neither reads it).
+ */
+export function nodeResult(scenario: Scenario, tally: ChunkTally): ScenarioResult {
+  return buildResult(scenario, tally, { compareObserved: false });
 }
 
 /**

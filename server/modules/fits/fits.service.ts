@@ -7,7 +7,6 @@ import { roleAtLeast } from '../../../shared/contracts/roles.ts';
 import { scenarioAtPoint } from '../../../shared/contracts/point-scenario.ts';
 import { multiplierMaxFor } from '../../../shared/engine/kernel/scenario-physics.ts';
 import type { ChunkTally } from '../../../shared/engine/kernel/tally.ts';
-import { buildResult } from '../../../shared/engine/result/build-result.ts';
 import { ENGINE_VERSION } from '../../../shared/engine/version.ts';
 import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
@@ -22,7 +21,7 @@ import { runs } from '../runs/runs.table.ts';
 import type { RunRow } from '../runs/runs.repository.ts';
 import type { RunsService } from '../runs/runs.service.ts';
 import type { ScenariosService } from '../scenarios/scenarios.service.ts';
-import { analyseFit, bestNodeIndex, fitMethodsParagraph, fitPoints, parameterWords, type FitDefinition } from './fit-analysis.ts';
+import { analyseFit, bestNodeIndex, fitMethodsParagraph, fitPoints, nodeResult, parameterWords, type FitDefinition } from './fit-analysis.ts';
 import { fits, type FitRow } from './fits.table.ts';
 
 export const fitNotFound = () => notFound('That fit');
@@ -104,9 +103,9 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
     let methods: string | null = null;
     try {
       const definition = definitionOf(fit, scenarios[0]);
-      posterior = analyseFit(definition, tallies.length, (i) => buildResult(scenarios[i], tallies[i]));
+      posterior = analyseFit(definition, tallies.length, (i) => nodeResult(scenarios[i], tallies[i]));
       const best = bestNodeIndex(fit.parameters, posterior);
-      const bestModel = best >= 0 ? { scenario: scenarios[best], result: buildResult(scenarios[best], tallies[best]) } : undefined;
+      const bestModel = best >= 0 ? { scenario: scenarios[best], result: nodeResult(scenarios[best], tallies[best]) } : undefined;
       methods = fitMethodsParagraph(definition, posterior, { engineVersion: fit.engineVersion, fitId: fit.id, scenarioName: fit.scenarioName, best: bestModel });
     } catch (e) {
       error = e instanceof Error ? e.message : String(e);

@@ -3,6 +3,7 @@ import type { RunProgressEvent, RunStatus } from '../../../shared/contracts/runs
 import { scenarioAtPoint } from '../../../shared/contracts/point-scenario.ts';
 import type { Scenario } from '../../../shared/contracts/scenario.ts';
 import { scenarioHash } from '../../../shared/engine/kernel/scenario-hash.ts';
+import { addPackedIntoAll } from '../../../shared/engine/kernel/packed-tally.ts';
 import { addTallyInto, emptyTallyFor, type ChunkTally } from '../../../shared/engine/kernel/tally.ts';
 import { buildResult } from '../../../shared/engine/result/build-result.ts';
 import { RunAbortedError, type ChunkExecutor } from '../../engine-pool/chunk-executor.ts';
@@ -209,8 +210,8 @@ export function createRunScheduler(deps: {
         // A batch delivered twice (a replayed job) is counted once.
         if (batch.chunks.some((chunk) => done.has(chunk))) continue;
         if (job) {
-          if (batch.pointTallies?.length !== totals.length) throw new Error(`a batch of a ${totals.length}-point job came back with ${batch.pointTallies?.length ?? 0} point tallies`);
-          batch.pointTallies.forEach((tally, p) => addTallyInto(totals[p], tally));
+          if (!batch.pointTallies) throw new Error(`a batch of a ${totals.length}-point job came back without its point tallies`);
+          addPackedIntoAll(totals, batch.pointTallies);
         } else addTallyInto(total, batch.tally);
         for (const chunk of batch.chunks) done.add(chunk);
         dirty = true;

@@ -31,8 +31,8 @@ describe('logBinIndex', () => {
   });
 
   it('puts zero, tiny and huge values in the first or last bin, as binIndex does', () => {
-    const bins = BINS.log10FieldMG;
-    const lookup = LOG_BIN_LOOKUPS.log10FieldMG;
+    const bins = BINS.log10SeparationAU;
+    const lookup = LOG_BIN_LOOKUPS.log10SeparationAU;
     for (const x of [0, Number.MIN_VALUE, 1e-300, 1e300, Infinity]) expect(logBinIndex(lookup, x)).toBe(binIndex(bins, Math.log10(x)));
   });
 

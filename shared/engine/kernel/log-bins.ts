@@ -78,8 +78,5 @@ export function logBinIndex(lookup: LogBinLookup, x: number): number {
 export const LOG_BIN_LOOKUPS = {
   log10CoolingAgeGyr: buildLogBinLookup(BINS.log10CoolingAgeGyr),
   log10PostCEPeriodDays: buildLogBinLookup(BINS.log10PostCEPeriodDays),
-  log10FieldMG: buildLogBinLookup(BINS.log10FieldMG),
-  log10CompanionMsun: buildLogBinLookup(BINS.log10CompanionMsun),
-  log10PeriodDays: buildLogBinLookup(BINS.log10PeriodDays),
   log10SeparationAU: buildLogBinLookup(BINS.log10SeparationAU),
 };

@@ -13,7 +13,7 @@ import { opticalFlux } from '../physics/selection-magnitude-limited.ts';
 import { ENGINE_VERSION } from '../version.ts';
 import { planChunks } from './chunks.ts';
 import { buildTrackGiant, type EngulfmentGrid, type PreparedTrack } from './engulfment.ts';
-import { buildFormationScreen, type FormationScreen } from './formation-screen.ts';
+import { buildPrimaryTable, buildWhiteDwarfDraw, type PrimaryTable, type WhiteDwarfDraw } from './primary-table.ts';
 import { scenarioHash } from './scenario-hash.ts';
 import {
   heaviestWhiteDwarfMsun,
@@ -88,8 +88,10 @@ export interface PreparedScenario {
   constantHistory: boolean;
   ageGyr: number;
   lifetime: PreparedLifetime;
-  /** Lower bounds of t_MS over cells of the primary-mass uniform (rejects most non-white-dwarfs without a pow). */
-  formationScreen: FormationScreen;
+  /** The primary's mass and main-sequence lifetime tabulated over its mass uniform (primary-table.ts). */
+  primary: PrimaryTable;
+  /** How many of a chunk's primaries are white dwarfs today, and how each is drawn (primary-table.ts). */
+  whiteDwarfs: WhiteDwarfDraw;
   ifmr: IfmrSegments;
   rows: PreparedRow[];
   multiplier: number;
@@ -121,12 +123,9 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
   const lifetime = preparedLifetime(scenario);
   const maxOccurrence = rows.reduce((m, r) => Math.max(m, r.occurrence), 0);
   const multiplierMax = multiplierMaxFor(rows);
-  // occurrence × multiplier ≤ 1 is the contract's rule (scenario.ts checks it when the document is
-  // parsed, the one place); prepareRow still caps presence at the draw threshold.
-  const multiplier = scenario.companions.multiplier;
-  const preparedRows = rows.map((row) => prepareRow(row, maxOccurrence, multiplierMax, multiplier));
-  const fossil = scenario.channels.fossil;
   const imf = buildImfSampler(p.imf, p.massRangeMsun);
+  const primary = buildPrimaryTable(imf, lifetime);
+  const constantHistory = isConstantHistory(p.history);
   return {
     engineVersion: ENGINE_VERSION,
     scenarioHash: scenarioHash(scenario),
@@ -135,15 +134,52 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
     chunkCount,
     imf,
     massRangeMsun: [p.massRangeMsun[0], p.massRangeMsun[1]],
-    constantHistory: isConstantHistory(p.history),
+    constantHistory,
     ageGyr: p.history.ageGyr,
     lifetime,
-    formationScreen: buildFormationScreen(imf, lifetime),
+    primary,
+    whiteDwarfs: buildWhiteDwarfDraw(primary, { constant: constantHistory, ageGyr: p.history.ageGyr }),
     ifmr,
-    rows: preparedRows,
-    multiplier,
     multiplierMax,
-    giant: preparedGiant(scenario.giant, scenario, options.engulfmentGrid),
+    selection: preparedSelection(scenario.selection, scenario, lifetime, ifmr),
+    ...drawFreeParts(
+      scenario,
+      rows.map((row) => prepareRow(row, maxOccurrence, multiplierMax)),
+      preparedGiant(scenario.giant, scenario, options.engulfmentGrid),
+    ),
+  };
+}
+
+/**
+ * The preparation of `scenario`, which must differ from the scenario `prepared` was made from only
+ * in draw-free values (run-points.ts: DRAW_FREE_PATHS): `prepared` with its scenario hash and the
+ * parts those values decide (drawFreeParts) replaced, everything the draws need (quantile tables,
+ * the primary table and white-dwarf draw, a track's grid) shared. Equal to prepareScenario(scenario) at a fraction of
+ * its cost (run-points.test.ts checks every path); the caller checks that only draw-free paths differ.
+ */
+export function withDrawFreeValues(prepared: PreparedScenario, scenario: Scenario): PreparedScenario {
+  return { ...prepared, scenarioHash: scenarioHash(scenario), ...drawFreeParts(scenario, prepared.rows, prepared.giant) };
+}
+
+type DrawnRow = Omit<PreparedRow, 'presentThreshold'>;
+type DrawFreeParts = Pick<PreparedScenario, 'multiplier' | 'rows' | 'giant' | 'envelope' | 'disruption' | 'field' | 'channels'>;
+
+/**
+ * What the draw-free parameters decide, from the scenario and the rows and giant that its draws
+ * fix: the multiplier and each row's presence threshold, the reach of `fixedReach` (a track giant
+ * is kept: none of its options is draw-free), α_CE and λ, η and the dissolution mass, the field
+ * options, and the channels (the fossil fraction and main-sequence field).
+ */
+function drawFreeParts(scenario: Scenario, rows: readonly DrawnRow[], giant: PreparedGiant): DrawFreeParts {
+  // occurrence × multiplier ≤ 1 is the contract's rule (scenario.ts checks it when the document is
+  // parsed, the one place); presence is still capped at the draw threshold, so that rounding never
+  // lets "present" exceed "drawn".
+  const multiplier = scenario.companions.multiplier;
+  const fossil = scenario.channels.fossil;
+  return {
+    multiplier,
+    rows: rows.map((row) => ({ ...row, presentThreshold: Math.min(row.drawThreshold, row.occurrence * multiplier) })),
+    giant: giant.kind === 'track' ? giant : preparedGiant(scenario.giant, scenario, undefined),
     envelope: { alpha: scenario.envelope.alpha, lambda: scenario.envelope.lambda },
     disruption: {
       eta: scenario.disruption.eta,
@@ -160,7 +196,6 @@ export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: 
         msField: { medianKG: fossil.msField.medianKG, widthDex: fossil.msField.widthDex },
       },
     },
-    selection: preparedSelection(scenario.selection, scenario, lifetime, ifmr),
   };
 }
 
@@ -177,17 +212,16 @@ const dissolutionBelowMsun = byOption<DissolutionOptions, 'kind', number>('kind'
   belowMass: (dissolution) => dissolution.massMJup * MJUP_MSUN,
 });
 
-function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: number, multiplier: number): PreparedRow {
-  // The most frequent row is always drawn; rounding must never let "present" exceed "drawn".
+/** A row's draw numbers (its presence threshold is drawFreeParts'). */
+function prepareRow(row: CompanionRow, maxOccurrence: number, multiplierMax: number): DrawnRow {
+  // The most frequent row is always drawn.
   const drawThreshold = row.occurrence === maxOccurrence ? 1 : Math.min(1, row.occurrence * multiplierMax);
-  const presentThreshold = Math.min(drawThreshold, row.occurrence * multiplier);
   const [massLo, massHi] = row.massRatio ?? (row.massMsun ? row.massMsun : [row.massMJup![0] * MJUP_MSUN, row.massMJup![1] * MJUP_MSUN]);
   const [periodLoDays, periodHiDays] = row.periodDays;
   const base = {
     occurrence: row.occurrence,
     hostMassSlope: row.hostMassSlope ?? 0,
     drawThreshold,
-    presentThreshold,
     massIsRatio: row.massRatio !== undefined,
     massLo,
     massHi,

@@ -1,16 +1,15 @@
 import { byOption } from '../../contracts/method-option.ts';
 import type { DisruptionFieldOptions } from '../../contracts/scenario.ts';
-import { RSUN_PER_AU } from '../constants.ts';
+import { GAUSS_K, RSUN_PER_AU } from '../constants.ts';
 import { normalQuantile } from '../numerics/normal-quantile.ts';
 import { postCommonEnvelopeSeparationAU } from '../physics/common-envelope-webbink1984.ts';
 import { companionRadiusRsun } from '../physics/companion-radius.ts';
 import { commonEnvelopeOnset } from '../physics/engulfment-grid.ts';
 import { accretionFieldMG } from '../physics/field-accretion.ts';
-import { companionScaledMedianMG } from '../physics/field-companion-scaled.ts';
-import { lognormalFieldMG } from '../physics/field-lognormal.ts';
+import { companionScaledLog10ZeroPoint } from '../physics/field-companion-scaled.ts';
+import { lognormalFieldMG, lognormalLog10FieldMG } from '../physics/field-lognormal.ts';
 import { fossilFieldMG } from '../physics/fossil-field.ts';
 import { finalMassMsun } from '../physics/ifmr-piecewise.ts';
-import { sampleImfLog10Msun } from '../physics/imf-sampler.ts';
 import { periodDays as keplerPeriodDays, semiMajorAxisCubedAU3 } from '../physics/kepler.ts';
 import { mainSequenceRadiusRsun } from '../physics/main-sequence-radius-demircan1991.ts';
 import { widenedSeparationAU } from '../physics/orbit-mass-loss.ts';
@@ -19,15 +18,15 @@ import { rocheLobeFraction } from '../physics/roche-lobe-eggleton1983.ts';
 import { magnitudeLimitedAcceptance } from '../physics/selection-magnitude-limited.ts';
 import { tidalRadiusRsun } from '../physics/tidal-disruption.ts';
 import { whiteDwarfRadiusRsun } from '../physics/white-dwarf-radius-nauenberg1972.ts';
-import { chunkUniform } from '../random.ts';
+import { chunkInt32, UNIFORM_SCALE } from '../random.ts';
 import { CHUNK_SYSTEMS } from '../version.ts';
 import { BINS, binIndex } from './bins.ts';
 import { LOG_BIN_LOOKUPS, logBinIndex } from './log-bins.ts';
-import { companionMassDraw, companionPeriodDaysDraw } from './companion-draws.ts';
-import { surelyNotWhiteDwarf } from './formation-screen.ts';
+import { companionLog10MassDraw, companionLog10PeriodDraw, companionMassDraw, companionPeriodDaysDraw } from './companion-draws.ts';
+import { PRIMARY_STRIDE, whiteDwarfPosition } from './primary-table.ts';
+import { binomialQuantile } from '../stats/binomial-quantile.ts';
 import type { PreparedTrack } from './engulfment.ts';
-import type { PreparedFossil, PreparedScenario } from './prepare.ts';
-import { lifetimeAtLog10MassGyr } from './scenario-physics.ts';
+import type { PreparedFossil, PreparedRow, PreparedScenario } from './prepare.ts';
 import { addCountsInto, emptyTallyFor, type ChunkTally } from './tally.ts';
 
 // Fate codes (index into FATES).
@@ -50,12 +49,16 @@ const HALF_STEP = 2 ** -33;
 const MAX_ROWS = 32;
 /** An onset core mass this close above the red-giant tip still counts as a red-giant-branch ejection (the tables' interpolation smears the tip). */
 const HELIUM_CORE_MARGIN_MSUN = 0.005;
+/** log10 of a field (MG) that does not exist. */
+const NO_FIELD = -Infinity;
+/** 2 log10(k / 2π), k Gauss's constant: log10 a³ (AU³) = log10 M (Msun) + this + 2 log10 P (days), Kepler's third law (kepler.ts). */
+const LOG10_KEPLER = 2 * Math.log10(GAUSS_K / (2 * Math.PI));
 /**
- * a^3 above reach^3 by this relative margin is outside the reach without a cube root: the margin
- * (a^3 ≥ reach^3 (1 + 1e-9) gives a ≥ reach (1 + 3e-10)) is far above the ~1e-16 rounding of
- * Math.cbrt and of reach^3, so the test agrees exactly with a0 < reach.
+ * A lower bound of log10 a0³ this far (dex) above 3 log10 reach puts the orbit outside the reach
+ * without computing a0: far above the ~1e-15 rounding of the logarithms and of a0³ itself, so the
+ * test agrees exactly with a0 < reach.
  */
-const OUTSIDE_REACH_MARGIN = 1 + 1e-9;
+const OUTSIDE_REACH_MARGIN_DEX = 1e-9;
 
 /**
  * What the kernel needs of one parameter point: the values of the draw-free parameters (see
@@ -98,7 +101,7 @@ export function preparedPoint(prepared: PreparedScenario, groups: Pick<PreparedP
 
 /**
  * Scratch written by companionFate (one companion at a time), allocated once per module:
- * the kernel never allocates per system. Index: 0 fate, 1 field (MG, 0 = none), 2 channel,
+ * the kernel never allocates per system. Index: 0 fate, 1 log10 field (MG; NO_FIELD = none), 2 channel,
  * 3 final separation (AU, survivors), 4 white-dwarf mass if this companion ends the giant's
  * evolution (post-CE survivor; else 0), 5 final period (days, post-CE survivors), 6 helium core (1/0).
  */
@@ -111,13 +114,17 @@ const rowDrawn = new Uint8Array(MAX_ROWS);
 const rowU = new Float64Array(MAX_ROWS);
 const rowOccurrence = new Float64Array(MAX_ROWS);
 const rowDrawThreshold = new Float64Array(MAX_ROWS);
+/** Mass (Msun) and initial period (days), and their log10: the draw sets one of each pair, the other is derived on first use. */
 const rowMass = new Float64Array(MAX_ROWS);
+const rowLog10Mass = new Float64Array(MAX_ROWS);
 const rowPeriod = new Float64Array(MAX_ROWS);
+const rowLog10Period = new Float64Array(MAX_ROWS);
+/** A lower bound of log10 a0³ (AU³) from log10 P and the primary's table node (no logarithm, no power). */
+const rowLog10A3Floor = new Float64Array(MAX_ROWS);
 /** Fate-map bins of mass and initial period (computed on first use). */
 const rowMassBin = new Int32Array(MAX_ROWS);
 const rowPeriodBin = new Int32Array(MAX_ROWS);
-/** Initial semi-major axis cubed (AU^3); the axis itself (AU, NaN until needed) and the widened one of a wide survivor. */
-const rowA0Cubed = new Float64Array(MAX_ROWS);
+/** Initial semi-major axis (AU, NaN until needed) and the widened one of a wide survivor. */
 const rowA0 = new Float64Array(MAX_ROWS);
 const rowWideAU = new Float64Array(MAX_ROWS);
 /** track: 1 iff the giant engulfs the companion (then the onset state below is set at the draw). */
@@ -137,15 +144,37 @@ const rowRocheFraction = new Float64Array(MAX_ROWS);
 const rowEnvelopeGroup = new Int32Array(MAX_ROWS);
 const rowFinalAU = new Float64Array(MAX_ROWS);
 const rowFinalPeriod = new Float64Array(MAX_ROWS);
-/** Fields (MG) of a destroyed / close surviving companion, for the point group in the group array. */
+/** log10 fields (MG) of a destroyed / close surviving companion, for the point group in the group array. */
 const rowDisruptionGroup = new Int32Array(MAX_ROWS);
 const rowDisruptionField = new Float64Array(MAX_ROWS);
 const rowCloseGroup = new Int32Array(MAX_ROWS);
 const rowCloseField = new Float64Array(MAX_ROWS);
 
-/** The current system's field uniform and its normal deviate (NaN until a field needs it: a quantile only where a field is made). */
-let fieldUniform = 0;
-let fieldDeviate = NaN;
+/**
+ * The current system's scalars (and a few of the chunk's), in a typed array rather than module
+ * variables or function arguments: a double stored in a module variable or passed to a call that
+ * is not inlined becomes a new heap object each time, which was a large part of the kernel's cost.
+ * The field uniform's normal deviate is NaN until a field needs it (a quantile only where a field
+ * is made).
+ */
+const systemNow = new Float64Array(12);
+const PRIMARY_MASS = 0;
+const PRIMARY_LOG10_MASS_FLOOR = 1;
+const FIELD_UNIFORM = 2;
+const FIELD_DEVIATE = 3;
+/** fixedReach: radius (Rsun) of the white dwarf of the IFMR mass, the core in every common envelope of the system (NaN until needed). */
+const FINAL_CORE_RADIUS = 4;
+/** The white-dwarf mass of the IFMR (Msun) and the cooling age (Gyr). */
+const IFMR_MASS = 5;
+const COOLING = 6;
+/** The fossil channel's uniform and normal deviate (1 and 0 when the channel is off). */
+const FOSSIL_UNIFORM = 7;
+const FOSSIL_DEVIATE = 8;
+/** The chunk's constants: multiplier-tally bins per unit multiplier; track: log10 a0³ above which nothing is engulfed. */
+const MULTIPLIER_SCALE = 9;
+const TRACK_OUTSIDE = 10;
+/** Scratch for the white dwarf's position in the primary table (primary-table.ts). */
+const POSITION = 11;
 
 /** One system's outcome at one point: what the tallies count. */
 class Outcome {
@@ -205,8 +234,11 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
   }
   if (points.length === 0) throw new RangeError('points must hold at least one parameter point');
   const tallies = points.map((point) => emptyTallyFor(point.scenarioHash));
-  const rng = chunkUniform(prepared.seed, chunkIndex);
-  const { imf, lifetime, ifmr, rows, formationScreen } = prepared;
+  const logs = points.map(pointLogs);
+  const nextInt32 = chunkInt32(prepared.seed, chunkIndex);
+  const rng = () => (nextInt32() >>> 0) * UNIFORM_SCALE; // = chunkUniform(prepared.seed, chunkIndex)()
+  const { ifmr, rows } = prepared;
+  const { cells, nodes } = prepared.primary;
   const fossil = prepared.channels.fossil;
   const [fossilLoMsun, fossilHiMsun] = fossil.massRangeMsun;
   const constantHistory = prepared.constantHistory;
@@ -214,32 +246,44 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
   const rowCount = rows.length;
   const magnitudeLimited = prepared.selection.kind === 'magnitudeLimited';
   const track = prepared.giant.kind === 'track' ? prepared.giant : null;
+  systemNow[TRACK_OUTSIDE] = track ? outsideReachLog10A3(Math.exp(Math.max(...track.grid.logCriticalSeparationAU))) : NaN;
   const pointCount = points.length;
-  const multiplierScale = BINS.multiplierBins / prepared.multiplierMax;
-  const spread = pointSpread(points, rowCount);
+  systemNow[MULTIPLIER_SCALE] = BINS.multiplierBins / prepared.multiplierMax;
+  const spread = pointSpread(points, logs, rowCount);
 
-  let whiteDwarfsFormed = 0;
-  for (let s = 0; s < n; s++) {
-    const uPrimary = rng();
-    const age = constantHistory ? ageGyr * rng() : ageGyr;
-    if (surelyNotWhiteDwarf(formationScreen, uPrimary, age)) continue; // exact: t_MS ≥ its cell's floor ≥ age
-    const log10M1 = sampleImfLog10Msun(imf, uPrimary);
-    const m1 = Math.exp(log10M1 * Math.LN10);
-    const tms = lifetimeAtLog10MassGyr(lifetime, log10M1);
-    if (!(tms < age)) continue;
-    whiteDwarfsFormed++;
+  // The chunk's white dwarfs, drawn directly (primary-table.ts): their number, then each one's
+  // mass uniform (its position in the primary table) and, for constant star formation, birth time.
+  const whiteDwarfs = prepared.whiteDwarfs;
+  const whiteDwarfsFormed = binomialQuantile(rng(), n, whiteDwarfs.probability);
+  for (let s = 0; s < whiteDwarfsFormed; s++) {
+    if (constantHistory) whiteDwarfPosition(whiteDwarfs, prepared.primary, rng, systemNow, POSITION);
+    else systemNow[POSITION] = (whiteDwarfs.uLowest + (1 - whiteDwarfs.uLowest) * rng()) * cells;
+    const position = systemNow[POSITION];
+    const k = Math.min(position | 0, cells - 1);
+    const at = PRIMARY_STRIDE * k;
+    const w = position - k;
+    const tms = nodes[at + 1] + w * (nodes[at + PRIMARY_STRIDE + 1] - nodes[at + 1]);
+    const m1 = nodes[at] + w * (nodes[at + PRIMARY_STRIDE] - nodes[at]);
+    systemNow[PRIMARY_MASS] = m1;
+    systemNow[PRIMARY_LOG10_MASS_FLOOR] = nodes[at + 2];
     const ifmrMass = finalMassMsun(ifmr, m1);
-    const cooling = age - tms;
+    // Rounding can put t̃ a hair above the age at the edge of the white-dwarf region: cooling age 0 there.
+    const youngest = ageGyr - tms > 0 ? ageGyr - tms : 0;
+    const cooling = constantHistory ? youngest * rng() : youngest;
+    systemNow[IFMR_MASS] = ifmrMass;
+    systemNow[COOLING] = cooling;
     const uSelect = magnitudeLimited ? rng() : 0;
-    fieldUniform = rng();
-    fieldDeviate = NaN;
+    systemNow[FIELD_UNIFORM] = rng();
+    systemNow[FIELD_DEVIATE] = NaN;
+    systemNow[FINAL_CORE_RADIUS] = NaN;
 
     let uFossil = 1;
-    let zFossil = 0;
+    systemNow[FOSSIL_DEVIATE] = 0;
     if (fossil.enabled) {
       uFossil = rng();
-      zFossil = normalQuantile(rng() + HALF_STEP);
+      systemNow[FOSSIL_DEVIATE] = normalQuantile(rng() + HALF_STEP);
     }
+    systemNow[FOSSIL_UNIFORM] = uFossil;
     // Whether this system's outcome can differ between the points (false: point 0's counts hold for all).
     let varies = spread.fossilVaries && uFossil < spread.maxFossilFraction && m1 >= fossilLoMsun && m1 <= fossilHiMsun;
 
@@ -251,13 +295,11 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
       const occurrence = row.hostMassSlope === 0 ? row.occurrence : row.occurrence * Math.pow(m1, row.hostMassSlope);
       const drawThreshold = row.hostMassSlope === 0 ? row.drawThreshold : Math.min(1, occurrence * prepared.multiplierMax);
       if (!(u < drawThreshold)) continue;
-      const uMass = rng();
-      const uPeriod = rng();
-      let m2 = companionMassDraw(row, uMass);
-      if (row.massIsRatio) m2 *= m1;
-      const periodDays = companionPeriodDaysDraw(row, uPeriod);
-      drawnCompanion(r, u, occurrence, drawThreshold, m1, m2, periodDays, track);
-      if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : insideReach(r, spread.maxReachAU))) varies = true;
+      rowU[r] = u;
+      rowOccurrence[r] = occurrence;
+      rowDrawThreshold[r] = drawThreshold;
+      drawnCompanion(r, row, rng, track);
+      if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : insideReach(r, spread.maxReachAU, spread.maxReachOutsideLog10A3))) varies = true;
       if (spread.multiplierVaries && (row.hostMassSlope !== 0 || (u >= spread.minPresent[r] && u < spread.maxPresent[r]))) varies = true;
     }
     const pointsToEvaluate = varies ? pointCount : 1;
@@ -266,7 +308,7 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
     let acceptanceAtIfmr = NaN;
     for (let p = 0; p < pointsToEvaluate; p++) {
       const out = p === 0 ? reference : current;
-      evaluatePoint(prepared, points[p], out, m1, ifmrMass, cooling, uFossil, zFossil);
+      evaluatePoint(prepared, points[p], logs[p], out);
       if (out.accepted && magnitudeLimited) {
         const selection = prepared.selection as Extract<PreparedScenario['selection'], { kind: 'magnitudeLimited' }>;
         let accept: number;
@@ -276,10 +318,10 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
         } else accept = magnitudeLimitedAcceptance(out.mwd, cooling, selection.coolingAgeFloorGyr, selection.wavelengthNm, selection.referenceFlux);
         out.accepted = uSelect < accept;
       }
-      if (p === 0) tallyOutcome(tallies[0], reference, 1, rowCount, cooling, multiplierScale);
+      if (p === 0) tallyOutcome(tallies[0], reference, 1, rowCount);
       else if (!sameOutcome(reference, current, rowCount)) {
-        tallyOutcome(tallies[p], current, 1, rowCount, cooling, multiplierScale);
-        tallyOutcome(tallies[p], reference, -1, rowCount, cooling, multiplierScale);
+        tallyOutcome(tallies[p], current, 1, rowCount);
+        tallyOutcome(tallies[p], reference, -1, rowCount);
       }
     }
   }
@@ -294,6 +336,32 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
   return tallies;
 }
 
+/** A point's numbers in the kernel's log10 form, derived once per chunk. */
+interface PointLogs {
+  /** log10 of the field threshold (MG). */
+  threshold: number;
+  /** fixedReach: log10 a0³ above which an orbit is surely outside the reach; NaN for track. */
+  reachOutsideLog10A3: number;
+  /** log10 of the disruption field's median (MG) for lognormal; the zero point at 1 Msun for companionScaled; unused for accretion. */
+  disruptionMedian: number;
+  /** log10 of the close survivors' median field (MG). */
+  closeMedian: number;
+}
+
+function pointLogs(point: PreparedPoint): PointLogs {
+  return {
+    threshold: Math.log10(point.field.thresholdMG),
+    reachOutsideLog10A3: outsideReachLog10A3(point.reachAU),
+    disruptionMedian: disruptionLog10MedianOf(point.field.disruption),
+    closeMedian: Math.log10(point.field.closeSurvivor.medianMG),
+  };
+}
+
+/** The bound above which log10 a0³ is surely outside a reach of reachAU (NaN stays NaN: nothing is surely outside). */
+function outsideReachLog10A3(reachAU: number): number {
+  return 3 * Math.log10(reachAU) + OUTSIDE_REACH_MARGIN_DEX;
+}
+
 /**
  * What differs between the points, for the kernel's test of whether a system's outcome can
  * differ: presence (the multiplier; per row the lowest and highest presence threshold), the
@@ -302,18 +370,18 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
  * threshold; up to the largest fossil fraction). A system without a companion or fossil field
  * that any of these can touch has point 0's outcome at every point.
  */
-function pointSpread(points: readonly PreparedPoint[], rowCount: number) {
+function pointSpread(points: readonly PreparedPoint[], logs: readonly PointLogs[], rowCount: number) {
   const first = points[0];
   const minPresent = first.presentThresholds.slice(0, rowCount);
   const maxPresent = first.presentThresholds.slice(0, rowCount);
-  let maxReachAU = first.reachAU;
+  let maxReach = 0;
   let maxFossilFraction = first.fossil.fraction;
   let multiplierVaries = false;
   let fateVaries = false;
   let fossilVaries = false;
   const fieldKey = (p: PreparedPoint) => JSON.stringify([p.disruption, p.field.disruption, p.field.closeSurvivor, p.field.emergenceDelayGyr]);
   const firstFieldKey = fieldKey(first);
-  for (const p of points) {
+  points.forEach((p, i) => {
     for (let r = 0; r < rowCount; r++) {
       minPresent[r] = Math.min(minPresent[r], p.presentThresholds[r]);
       maxPresent[r] = Math.max(maxPresent[r], p.presentThresholds[r]);
@@ -322,31 +390,51 @@ function pointSpread(points: readonly PreparedPoint[], rowCount: number) {
     const thresholdVaries = p.field.thresholdMG !== first.field.thresholdMG;
     if (thresholdVaries || !Object.is(p.reachAU, first.reachAU) || p.envelope.alpha !== first.envelope.alpha || p.envelope.lambda !== first.envelope.lambda || fieldKey(p) !== firstFieldKey) fateVaries = true;
     if (thresholdVaries || p.fossil.fraction !== first.fossil.fraction || p.fossil.msField.medianKG !== first.fossil.msField.medianKG || p.fossil.msField.widthDex !== first.fossil.msField.widthDex) fossilVaries = true;
-    if (p.reachAU > maxReachAU) maxReachAU = p.reachAU;
+    if (p.reachAU > points[maxReach].reachAU) maxReach = i;
     if (p.fossil.fraction > maxFossilFraction) maxFossilFraction = p.fossil.fraction;
-  }
-  return { minPresent, maxPresent, maxReachAU, maxFossilFraction, multiplierVaries, fateVaries, fossilVaries };
+  });
+  const maxReachAU = points[maxReach].reachAU;
+  const maxReachOutsideLog10A3 = logs[maxReach].reachOutsideLog10A3;
+  return { minPresent, maxPresent, maxReachAU, maxReachOutsideLog10A3, maxFossilFraction, multiplierVaries, fateVaries, fossilVaries };
 }
 
-/** Records drawn companion r and what follows from its draws alone (Kepler; the onset state for track). */
-function drawnCompanion(r: number, u: number, occurrence: number, drawThreshold: number, m1: number, m2: number, periodDays: number, track: PreparedTrack | null): void {
+/**
+ * Draws companion r's mass and period (the next two uniforms; its presence uniform, occurrence and
+ * draw threshold are already in the row arrays) and records what follows from the draws alone: a
+ * lower bound of log10 a0³, and for track whether the giant engulfs it (with the onset state). A
+ * quantity the row draws in log10 form stays in that form until the value is needed.
+ */
+function drawnCompanion(r: number, row: PreparedRow, rng: () => number, track: PreparedTrack | null): void {
   rowDrawn[r] = 1;
-  rowU[r] = u;
-  rowOccurrence[r] = occurrence;
-  rowDrawThreshold[r] = drawThreshold;
-  rowMass[r] = m2;
-  rowPeriod[r] = periodDays;
+  const uMass = rng();
+  const uPeriod = rng();
+  if (row.log10MassTable && !row.massIsRatio) {
+    rowLog10Mass[r] = companionLog10MassDraw(row, uMass);
+    rowMass[r] = NaN;
+  } else {
+    const drawn = row.log10MassTable ? Math.exp(companionLog10MassDraw(row, uMass) * Math.LN10) : companionMassDraw(row, uMass);
+    rowMass[r] = row.massIsRatio ? drawn * systemNow[PRIMARY_MASS] : drawn;
+    rowLog10Mass[r] = NaN;
+  }
+  if (row.log10PeriodTable) {
+    rowLog10Period[r] = companionLog10PeriodDraw(row, uPeriod);
+    rowPeriod[r] = NaN;
+  } else {
+    rowPeriod[r] = companionPeriodDaysDraw(row, uPeriod);
+    rowLog10Period[r] = Math.log10(rowPeriod[r]);
+  }
+  // a0³ = (M1 + m2) (k P / 2π)² ≥ M1 (k P / 2π)², and M1 is at least its table node's mass.
+  rowLog10A3Floor[r] = systemNow[PRIMARY_LOG10_MASS_FLOOR] + LOG10_KEPLER + 2 * rowLog10Period[r];
   rowMassBin[r] = -1;
+  rowA0[r] = NaN;
   rowWideAU[r] = NaN;
   rowEnvelopeReady[r] = 0;
   rowEnvelopeGroup[r] = -1;
   rowDisruptionGroup[r] = -1;
   rowCloseGroup[r] = -1;
-  rowA0Cubed[r] = semiMajorAxisCubedAU3(periodDays, m1 + m2);
-  rowA0[r] = NaN;
   if (track) {
-    const a0 = initialSeparationAU(r);
-    const engulfed = commonEnvelopeOnset(track.grid, m1, m2, a0, onsetOut);
+    // Beyond the largest critical separation of the whole grid no interpolation engulfs it.
+    const engulfed = rowLog10A3Floor[r] < systemNow[TRACK_OUTSIDE] && commonEnvelopeOnset(track.grid, systemNow[PRIMARY_MASS], companionMassMsun(r), initialSeparationAU(r), onsetOut);
     rowEngulfed[r] = engulfed ? 1 : 0;
     if (engulfed) {
       rowCoreMass[r] = onsetOut[0];
@@ -357,36 +445,70 @@ function drawnCompanion(r: number, u: number, occurrence: number, drawThreshold:
   }
 }
 
-/** Companion r's initial semi-major axis (AU), its cube root taken on first use. */
+/** Companion r's mass (Msun), 10^log10 taken on first use. */
+function companionMassMsun(r: number): number {
+  if (Number.isNaN(rowMass[r])) rowMass[r] = Math.exp(rowLog10Mass[r] * Math.LN10);
+  return rowMass[r];
+}
+
+/** log10 of companion r's mass (Msun), the logarithm taken on first use. */
+function companionLog10MassMsun(r: number): number {
+  if (Number.isNaN(rowLog10Mass[r])) rowLog10Mass[r] = Math.log10(rowMass[r]);
+  return rowLog10Mass[r];
+}
+
+/** Companion r's initial period (days), 10^log10 taken on first use. */
+function companionPeriodDays(r: number): number {
+  if (Number.isNaN(rowPeriod[r])) rowPeriod[r] = Math.exp(rowLog10Period[r] * Math.LN10);
+  return rowPeriod[r];
+}
+
+/** Companion r's initial semi-major axis (AU, Kepler's third law), computed on first use. */
 function initialSeparationAU(r: number): number {
-  if (Number.isNaN(rowA0[r])) rowA0[r] = Math.cbrt(rowA0Cubed[r]); // = semiMajorAxisAU (kepler.ts)
+  if (Number.isNaN(rowA0[r])) rowA0[r] = Math.cbrt(semiMajorAxisCubedAU3(companionPeriodDays(r), systemNow[PRIMARY_MASS] + companionMassMsun(r))); // = semiMajorAxisAU (kepler.ts)
   return rowA0[r];
 }
 
-/** a0 < reachAU for companion r, without the cube root for orbits well outside the reach. */
-function insideReach(r: number, reachAU: number): boolean {
-  if (rowA0Cubed[r] > reachAU * reachAU * reachAU * OUTSIDE_REACH_MARGIN) return false;
+/** Companion r's radius (Rsun), computed on first use. */
+function companionRadiusOf(r: number): number {
+  if (Number.isNaN(rowCompanionRadius[r])) rowCompanionRadius[r] = companionRadiusRsun(companionMassMsun(r));
+  return rowCompanionRadius[r];
+}
+
+/** fixedReach: the radius (Rsun) of the white dwarf of the IFMR mass, computed once per system. */
+function finalCoreRadiusRsun(): number {
+  if (Number.isNaN(systemNow[FINAL_CORE_RADIUS])) systemNow[FINAL_CORE_RADIUS] = whiteDwarfRadiusRsun(systemNow[IFMR_MASS]);
+  return systemNow[FINAL_CORE_RADIUS];
+}
+
+/** a0 < reachAU for companion r; an orbit whose lower bound of log10 a0³ is above outsideLog10A3 is outside without computing a0. */
+function insideReach(r: number, reachAU: number, outsideLog10A3: number): boolean {
+  if (rowLog10A3Floor[r] > outsideLog10A3) return false;
   return initialSeparationAU(r) < reachAU;
 }
 
 /** The current system's field deviate (a standard normal), its quantile taken on first use. */
 function fieldDeviateZ(): number {
-  if (Number.isNaN(fieldDeviate)) fieldDeviate = normalQuantile(fieldUniform + HALF_STEP);
-  return fieldDeviate;
+  if (Number.isNaN(systemNow[FIELD_DEVIATE])) systemNow[FIELD_DEVIATE] = normalQuantile(systemNow[FIELD_UNIFORM] + HALF_STEP);
+  return systemNow[FIELD_DEVIATE];
 }
 
 /**
  * The current system's outcome at one point, before the magnitude-limited selection (`accepted`
  * is true here; the caller applies the selection with out.mwd).
  */
-function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, out: Outcome, m1: number, ifmrMass: number, cooling: number, uFossil: number, zFossil: number): void {
+function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, logs: PointLogs, out: Outcome): void {
+  const m1 = systemNow[PRIMARY_MASS];
+  const ifmrMass = systemNow[IFMR_MASS];
+  const cooling = systemNow[COOLING];
   const rows = prepared.rows;
-  const threshold = point.field.thresholdMG;
+  const track = prepared.giant.kind === 'track';
+  const threshold = logs.threshold;
   const fieldsEmerged = cooling >= point.field.emergenceDelayGyr;
   let mwd = ifmrMass;
   let helium = false;
   let setting = SINGLE;
-  let bestField = 0;
+  let bestField = NO_FIELD;
   let bestChannel = -1;
   let smallestMultiplier = Infinity;
   let closestPostCEPeriod = Infinity;
@@ -396,9 +518,11 @@ function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, out: Ou
     const u = rowU[r];
     const occurrence = rowOccurrence[r];
     const present = u < (rows[r].hostMassSlope === 0 ? point.presentThresholds[r] : Math.min(rowDrawThreshold[r], occurrence * point.multiplier));
-    companionFate(prepared, point, r, m1, ifmrMass, present);
+    // An absent companion outside the giant's reach neither counts nor makes a field.
+    if (!present && (track ? rowEngulfed[r] === 0 : rowLog10A3Floor[r] > logs.reachOutsideLog10A3)) continue;
+    companionFate(prepared, point, logs, r, present);
     const fate = fateOut[0];
-    const companionField = fieldsEmerged ? fateOut[1] : 0;
+    const companionField = fieldsEmerged ? fateOut[1] : NO_FIELD;
     if (companionField >= threshold) {
       const m = u / occurrence;
       if (m < smallestMultiplier) smallestMultiplier = m;
@@ -422,8 +546,8 @@ function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, out: Ou
   }
 
   const fossil = prepared.channels.fossil;
-  if (fossil.enabled && uFossil < point.fossil.fraction && m1 >= fossil.massRangeMsun[0] && m1 <= fossil.massRangeMsun[1]) {
-    const fossilField = fossilFieldMG(lognormalFieldMG(point.fossil.msField.medianKG, point.fossil.msField.widthDex, zFossil), mainSequenceRadiusRsun(m1), whiteDwarfRadiusRsun(mwd));
+  if (fossil.enabled && systemNow[FOSSIL_UNIFORM] < point.fossil.fraction && m1 >= fossil.massRangeMsun[0] && m1 <= fossil.massRangeMsun[1]) {
+    const fossilField = Math.log10(fossilFieldMG(lognormalFieldMG(point.fossil.msField.medianKG, point.fossil.msField.widthDex, systemNow[FOSSIL_DEVIATE]), mainSequenceRadiusRsun(m1), whiteDwarfRadiusRsun(mwd)));
     if (fossilField >= threshold) smallestMultiplier = 0;
     if (fossilField > bestField) {
       bestField = fossilField;
@@ -467,8 +591,9 @@ function sameOutcome(a: Outcome, b: Outcome, rowCount: number): boolean {
 }
 
 /** Adds (sign = 1) or takes away (sign = -1) one system's outcome to the tally's counts. */
-function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: number, cooling: number, multiplierScale: number): void {
+function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: number): void {
   if (!out.accepted) return;
+  const cooling = systemNow[COOLING];
   const massBins = BINS.log10CompanionMsun.count;
   const periodBins = BINS.log10PeriodDays.count;
   const separationBins = BINS.log10SeparationAU.count;
@@ -482,8 +607,8 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
     if (out.present[r] === 0) continue;
     const fate = out.fate[r];
     if (rowMassBin[r] < 0) {
-      rowMassBin[r] = logBinIndex(LOG_BIN_LOOKUPS.log10CompanionMsun, rowMass[r]);
-      rowPeriodBin[r] = logBinIndex(LOG_BIN_LOOKUPS.log10PeriodDays, rowPeriod[r]);
+      rowMassBin[r] = binIndex(BINS.log10CompanionMsun, companionLog10MassMsun(r));
+      rowPeriodBin[r] = binIndex(BINS.log10PeriodDays, rowLog10Period[r]);
     }
     tally.companionFates[fate] += sign;
     tally.fateMap[(fate * massBins + rowMassBin[r]) * periodBins + rowPeriodBin[r]] += sign;
@@ -495,8 +620,8 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
   tally.settingWhiteDwarfs[setting] += sign;
   const massBin = binIndex(BINS.wdMassMsun, out.mwd);
   const coolingBin = logBinIndex(LOG_BIN_LOOKUPS.log10CoolingAgeGyr, cooling);
-  if (out.bestField > 0) {
-    const fieldBin = logBinIndex(LOG_BIN_LOOKUPS.log10FieldMG, out.bestField);
+  if (out.bestField > NO_FIELD) {
+    const fieldBin = binIndex(BINS.log10FieldMG, out.bestField);
     tally.logField[fieldBin] += sign;
     tally.logFieldByChannel[bestChannel * fieldBins + fieldBin] += sign;
   }
@@ -516,7 +641,7 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
   const smallestMultiplier = out.smallestMultiplier;
   if (smallestMultiplier === 0) tally.multiplierFossil += sign;
   else if (smallestMultiplier < Infinity) {
-    const bin = Math.floor(smallestMultiplier * multiplierScale);
+    const bin = Math.floor(smallestMultiplier * systemNow[MULTIPLIER_SCALE]);
     tally.multiplierBins[bin < BINS.multiplierBins ? bin : BINS.multiplierBins - 1] += sign;
   }
 }
@@ -532,14 +657,21 @@ function tallyOutcome(tally: ChunkTally, out: Outcome, sign: number, rowCount: n
  * gets a field iff that channel is on. What does not depend on the point is computed once per
  * companion and kept in the row arrays.
  */
-function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: number, m1: number, ifmrMass: number, present: boolean): void {
-  const m2 = rowMass[r];
+function companionFate(prepared: PreparedScenario, point: PreparedPoint, logs: PointLogs, r: number, present: boolean): void {
+  const m1 = systemNow[PRIMARY_MASS];
+  const ifmrMass = systemNow[IFMR_MASS];
   const fixedReach = prepared.giant.kind === 'fixedReach';
-  if (fixedReach ? !insideReach(r, point.reachAU) : rowEngulfed[r] === 0) {
+  if (fixedReach ? !insideReach(r, point.reachAU, logs.reachOutsideLog10A3) : rowEngulfed[r] === 0) {
     // Only a present companion's separation is tallied.
-    if (present && Number.isNaN(rowWideAU[r])) rowWideAU[r] = widenedSeparationAU(initialSeparationAU(r), m1 + m2, ifmrMass + m2);
-    return survivor(WIDE, rowWideAU[r]);
+    if (present && Number.isNaN(rowWideAU[r])) {
+      const m2 = companionMassMsun(r);
+      rowWideAU[r] = widenedSeparationAU(initialSeparationAU(r), m1 + m2, ifmrMass + m2);
+    }
+    survivor(WIDE);
+    fateOut[3] = rowWideAU[r];
+    return;
   }
+  const m2 = companionMassMsun(r);
   const a0 = initialSeparationAU(r);
   if (rowEnvelopeReady[r] === 0) {
     if (fixedReach) {
@@ -553,14 +685,13 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: numb
       const tip = rgbTipCoreMassMsun(m1);
       rowHelium[r] = tip !== null && rowCoreMass[r] < tip + HELIUM_CORE_MARGIN_MSUN ? 1 : 0;
     }
-    rowCoreRadius[r] = whiteDwarfRadiusRsun(rowCoreMass[r]);
-    rowCompanionRadius[r] = companionRadiusRsun(m2);
+    rowCoreRadius[r] = fixedReach ? finalCoreRadiusRsun() : whiteDwarfRadiusRsun(rowCoreMass[r]);
+    rowCompanionRadius[r] = NaN;
     rowRocheFraction[r] = NaN;
     rowEnvelopeReady[r] = 1;
   }
   const coreMass = rowCoreMass[r];
   const coreRadius = rowCoreRadius[r];
-  const r2 = rowCompanionRadius[r];
   if (rowEnvelopeGroup[r] !== point.envelopeGroup) {
     rowFinalAU[r] = postCommonEnvelopeSeparationAU(rowOnsetAU[r], rowRadiusAU[r], rowGiantMass[r], coreMass, m2, point.envelope.alpha, point.envelope.lambda);
     rowFinalPeriod[r] = NaN;
@@ -570,17 +701,18 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: numb
   const finalRsun = finalAU * RSUN_PER_AU;
   if (finalRsun > coreRadius) {
     if (Number.isNaN(rowRocheFraction[r])) rowRocheFraction[r] = rocheLobeFraction(m2 / coreMass);
-    if (r2 < rowRocheFraction[r] * finalRsun) {
+    if (companionRadiusOf(r) < rowRocheFraction[r] * finalRsun) {
       if (Number.isNaN(rowFinalPeriod[r])) rowFinalPeriod[r] = keplerPeriodDays(finalAU, coreMass + m2);
       const finalPeriod = rowFinalPeriod[r];
-      survivor(POST_CE, finalAU);
+      survivor(POST_CE);
+      fateOut[3] = finalAU;
       fateOut[4] = coreMass;
       fateOut[5] = finalPeriod;
       fateOut[6] = rowHelium[r];
       const close = point.field.closeSurvivor;
       if (prepared.channels.closeSurvivor && finalPeriod < close.maxPeriodDays) {
         if (rowCloseGroup[r] !== point.closeFieldGroup) {
-          rowCloseField[r] = lognormalFieldMG(close.medianMG, close.widthDex, fieldDeviateZ());
+          rowCloseField[r] = lognormalLog10FieldMG(logs.closeMedian, close.widthDex, fieldDeviateZ());
           rowCloseGroup[r] = point.closeFieldGroup;
         }
         fateOut[1] = rowCloseField[r];
@@ -595,43 +727,55 @@ function companionFate(prepared: PreparedScenario, point: PreparedPoint, r: numb
   fateOut[6] = 0;
   if (m2 < point.disruption.dissolutionBelowMsun) {
     fateOut[0] = DISSOLVED;
-    fateOut[1] = 0;
+    fateOut[1] = NO_FIELD;
     fateOut[2] = -1;
     return;
   }
   fateOut[0] = DISRUPTED;
   fateOut[2] = DISRUPTION;
   if (!prepared.channels.disruption) {
-    fateOut[1] = 0;
+    fateOut[1] = NO_FIELD;
     return;
   }
   if (rowDisruptionGroup[r] !== point.disruptionFieldGroup) {
-    rowDisruptionField[r] = disruptionFieldMG(point, coreMass, coreRadius, m2, r2, fieldDeviateZ());
+    rowDisruptionField[r] = disruptionLog10FieldMG(point, logs, coreMass, coreRadius, r, fieldDeviateZ());
     rowDisruptionGroup[r] = point.disruptionFieldGroup;
   }
   fateOut[1] = rowDisruptionField[r];
 }
 
-/** Field (MG) of a white dwarf whose companion of mass m2 (radius r2) was shredded near the core, per option of DISRUPTION_FIELD_CHOICE. */
-const disruptionFieldOf = byOption<DisruptionFieldOptions, 'kind', number, [PreparedPoint, number, number, number, number, number]>('kind', {
-  lognormal: (f, _point, _coreMass, _coreRadius, _m2, _r2, z) => lognormalFieldMG(f.medianMG, f.widthDex, z),
-  companionScaled: (f, _point, _coreMass, _coreRadius, m2, _r2, z) => lognormalFieldMG(companionScaledMedianMG(m2, f.referenceMG, f.referenceMassMJup, f.slope), f.widthDex, z),
-  accretion: (f, point, coreMass, coreRadius, m2, r2, z) => {
+/**
+ * log10 of the field (MG) of a white dwarf whose companion r was shredded near the
+ * core, per option of DISRUPTION_FIELD_CHOICE: the log-normal of field-lognormal.ts around each
+ * option's median, added in log10 form (no power, no exponential).
+ */
+const disruptionLog10FieldOf = byOption<DisruptionFieldOptions, 'kind', number, [PointLogs, PreparedPoint, number, number, number, number]>('kind', {
+  lognormal: (f, logs, _point, _coreMass, _coreRadius, _r, z) => lognormalLog10FieldMG(logs.disruptionMedian, f.widthDex, z),
+  companionScaled: (f, logs, _point, _coreMass, _coreRadius, r, z) => lognormalLog10FieldMG(logs.disruptionMedian + f.slope * companionLog10MassMsun(r), f.widthDex, z),
+  accretion: (f, _logs, point, coreMass, coreRadius, r, z) => {
     // The debris disc forms at the companion's tidal radius around the core (η sets it).
-    const tidalRadius = tidalRadiusRsun(point.disruption.eta, r2, coreMass, m2);
-    return lognormalFieldMG(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio), f.widthDex, z);
+    const m2 = companionMassMsun(r);
+    const tidalRadius = tidalRadiusRsun(point.disruption.eta, companionRadiusOf(r), coreMass, m2);
+    return lognormalLog10FieldMG(Math.log10(accretionFieldMG(coreMass, coreRadius, f.discMassFraction * m2, tidalRadius, f.alpha, f.aspectRatio)), f.widthDex, z);
   },
 });
 
-function disruptionFieldMG(point: PreparedPoint, coreMass: number, coreRadius: number, m2: number, r2: number, z: number): number {
-  return disruptionFieldOf(point.field.disruption, point, coreMass, coreRadius, m2, r2, z);
+function disruptionLog10FieldMG(point: PreparedPoint, logs: PointLogs, coreMass: number, coreRadius: number, r: number, z: number): number {
+  return disruptionLog10FieldOf(point.field.disruption, logs, point, coreMass, coreRadius, r, z);
 }
 
-function survivor(fate: number, separationAU: number): void {
+/** log10 of the disruption field's median (lognormal) or its zero point at 1 Msun (companionScaled); accretion has neither. */
+const disruptionLog10MedianOf = byOption<DisruptionFieldOptions, 'kind', number>('kind', {
+  lognormal: (f) => Math.log10(f.medianMG),
+  companionScaled: (f) => companionScaledLog10ZeroPoint(f.referenceMG, f.referenceMassMJup, f.slope),
+  accretion: () => NaN,
+});
+
+/** Writes a surviving companion's fate without a field (the caller writes its separation, fateOut[3]). */
+function survivor(fate: number): void {
   fateOut[0] = fate;
-  fateOut[1] = 0;
+  fateOut[1] = NO_FIELD;
   fateOut[2] = -1;
-  fateOut[3] = separationAU;
   fateOut[4] = 0;
   fateOut[5] = 0;
   fateOut[6] = 0;

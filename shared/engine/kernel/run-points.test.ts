@@ -3,7 +3,7 @@ import { parseScenario, type Scenario } from '../../contracts/scenario.ts';
 import { EngineError } from '../errors.ts';
 import { buildEngulfmentGrid, type EngulfmentGrid } from '../physics/engulfment-grid.ts';
 import { engulfmentGridInputFor } from './engulfment.ts';
-import { prepareScenario } from './prepare.ts';
+import { prepareScenario, withDrawFreeValues } from './prepare.ts';
 import { runChunk } from './run-chunk.ts';
 import { DRAW_FREE_PATHS, isDrawFreePath, preparePoints, runChunkPoints, type PointValues } from './run-points.ts';
 import type { ChunkTally } from './tally.ts';
@@ -149,6 +149,21 @@ describe('multi-point kernel: each point equals a separate run', { timeout: 120_
     expect(a.scenarioHash).toBe(prepared.scenarioHash);
     expect(b.scenarioHash).toBe(prepareScenario(parseScenario(withValues(base, { 'envelope.alpha': 2 }))).scenarioHash);
   });
+});
+
+describe('withDrawFreeValues (how preparePoints derives each point from the shared preparation)', () => {
+  it('equals the full preparation of the point\'s document for every draw-free path and value', () => {
+    for (const [name, doc, paths] of CASES) {
+      const scenario = parseScenario(doc);
+      const prepared = prepareScenario(scenario, { engulfmentGrid: gridFor(scenario) });
+      for (const path of paths) {
+        for (const value of VALUES[path]) {
+          const point = parseScenario(withValues(doc, { [path]: value }));
+          expect(withDrawFreeValues(prepared, point), `${name}: ${path} = ${value}`).toEqual(prepareScenario(point, { engulfmentGrid: gridFor(point) }));
+        }
+      }
+    }
+  }, 120_000);
 });
 
 describe('preparePoints validation', () => {

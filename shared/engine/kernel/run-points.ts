@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { parseScenario, scenarioSchema, ScenarioValidationError, type Scenario } from '../../contracts/scenario.ts';
 import { EngineError } from '../errors.ts';
-import { prepareScenario, type PreparedScenario } from './prepare.ts';
+import { prepareScenario, withDrawFreeValues, type PreparedScenario } from './prepare.ts';
 import { preparedPoint, runChunkForPoints, type PreparedPoint } from './run-chunk.ts';
 import type { ChunkTally } from './tally.ts';
 
@@ -83,28 +83,33 @@ export interface PreparedPoints {
 /**
  * Checks the points against the scenario and prepares them: every path must be draw-free and
  * present in this scenario, every value inside the contract's range (and the multiplier at most
- * 1 / the largest row occurrence); each point's scenario is prepared by prepareScenario itself
- * (so its values and scenarioHash are those of a separate run). `prepared` must be
- * prepareScenario(scenario) (a track grid is reused, not rebuilt). Memory: the pass returns one
- * tally (≈ 2,700 numbers) per point per chunk.
+ * 1 / the largest row occurrence). Each point's scenario is validated like any document and its
+ * preparation derived from `prepared` (withDrawFreeValues: only the draw-free parts and the hash
+ * are its own: well under a millisecond a point, where a full preparation takes ≈ 14 ms); the first and the
+ * last point are also prepared in full and must agree (an internal check of DRAW_FREE_PATHS).
+ * `prepared` must be prepareScenario(scenario) (a track grid is reused, not rebuilt). Memory: the
+ * pass returns one tally (≈ 2,700 numbers) per point per chunk.
  */
 export function preparePoints(scenario: Scenario, prepared: PreparedScenario, points: readonly PointValues[]): PreparedPoints {
   if (points.length === 0) throw new EngineError('points', [], 'at least one parameter point');
   const engulfmentGrid = prepared.giant.kind === 'track' ? prepared.giant.grid : undefined;
   const preparedPoints: PreparedPoint[] = [];
-  const envelopeKeys: string[] = [];
-  const disruptionKeys: string[] = [];
-  const closeKeys: string[] = [];
-  for (const values of points) {
+  const envelopeKeys = new Map<string, number>();
+  const disruptionKeys = new Map<string, number>();
+  const closeKeys = new Map<string, number>();
+  points.forEach((values, i) => {
     const pointScenario = scenarioWith(scenario, values);
-    const pointPrepared = prepareScenario(pointScenario, { engulfmentGrid });
-    assertSameDraws(prepared, pointPrepared);
-    const point = preparedPoint(pointPrepared);
+    const point = preparedPoint(withDrawFreeValues(prepared, pointScenario));
+    if (i === 0 || i === points.length - 1) {
+      const full = prepareScenario(pointScenario, { engulfmentGrid });
+      assertSameDraws(prepared, full);
+      if (JSON.stringify(preparedPoint(full)) !== JSON.stringify(point)) throw new Error('a point prepared from the shared draws differs from its full preparation (DRAW_FREE_PATHS is wrong)');
+    }
     point.envelopeGroup = groupOf(envelopeKeys, JSON.stringify(point.envelope));
     point.disruptionFieldGroup = groupOf(disruptionKeys, JSON.stringify([point.disruption.eta, point.field.disruption]));
     point.closeFieldGroup = groupOf(closeKeys, JSON.stringify(point.field.closeSurvivor));
     preparedPoints.push(point);
-  }
+  });
   return { baseScenarioHash: prepared.scenarioHash, points: preparedPoints };
 }
 
@@ -119,12 +124,11 @@ export function runChunkPoints(prepared: PreparedScenario, points: PreparedPoint
   return runChunkForPoints(prepared, points.points, chunkIndex);
 }
 
-/** The index of the first equal key (appending a new one): points with equal values share work. */
-function groupOf(keys: string[], key: string): number {
-  const i = keys.indexOf(key);
-  if (i >= 0) return i;
-  keys.push(key);
-  return keys.length - 1;
+/** The number of the first equal key (numbering a new one): points with equal values share work. */
+function groupOf(keys: Map<string, number>, key: string): number {
+  let group = keys.get(key);
+  if (group === undefined) keys.set(key, (group = keys.size));
+  return group;
 }
 
 /** The scenario with the point's values, validated like any scenario document. */

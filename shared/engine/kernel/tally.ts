@@ -52,7 +52,8 @@ export interface ChunkTally {
   multiplierBins: number[];
 }
 
-const ARRAY_FIELDS = [
+/** The array fields of a tally, in a fixed order (the packed layout of packed-tally.ts follows it). */
+export const ARRAY_FIELDS = [
   'byChannel',
   'settingWhiteDwarfs',
   'settingMagnetic',
@@ -69,7 +70,8 @@ const ARRAY_FIELDS = [
   'survivorSeparation',
   'multiplierBins',
 ] as const;
-const SCALAR_FIELDS = ['chunks', 'systems', 'whiteDwarfsFormed', 'whiteDwarfs', 'magnetic', 'heliumWhiteDwarfs', 'multiplierFossil'] as const;
+/** The scalar counts of a tally, in a fixed order. */
+export const SCALAR_FIELDS = ['chunks', 'systems', 'whiteDwarfsFormed', 'whiteDwarfs', 'magnetic', 'heliumWhiteDwarfs', 'multiplierFossil'] as const;
 
 /** An all-zero tally for the scenario with this hash. */
 export function emptyTallyFor(scenarioHash: string): ChunkTally {

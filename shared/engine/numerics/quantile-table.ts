@@ -30,29 +30,56 @@ const MAX_CELLS = 16384;
 export const QUANTILE_TABLE_TOLERANCE = 1e-7;
 
 export function tabulateQuantile(quantile: (u: number) => number, tolerance = QUANTILE_TABLE_TOLERANCE): QuantileTable | null {
-  for (let cells = MIN_CELLS; cells <= MAX_CELLS; cells *= 2) {
-    const values = new Float64Array(cells + 1);
-    for (let k = 0; k <= cells; k++) values[k] = quantile(k / cells);
-    if (!values.every(Number.isFinite)) return null;
-    const table = { cells, values, maxCdfError: 0 };
+  const tables = tabulateQuantiles([quantile], tolerance);
+  return tables && { cells: tables.cells, values: tables.values[0], maxCdfError: tables.maxCdfError };
+}
+
+/**
+ * Several functions of the same uniform tabulated on one grid (so that one cell index serves them
+ * all), each under the accuracy rule above: the grid doubles from 512 cells up to `maxCells` until
+ * every function meets `tolerance`; null if one of them is not finite and non-decreasing or
+ * misses it even then. Example: the primary's mass and (negated) main-sequence lifetime as
+ * functions of the mass uniform (kernel/primary-table.ts).
+ */
+export function tabulateQuantiles(
+  quantiles: readonly ((u: number) => number)[],
+  tolerance = QUANTILE_TABLE_TOLERANCE,
+  maxCells = MAX_CELLS,
+): { cells: number; values: Float64Array[]; maxCdfError: number } | null {
+  for (let cells = MIN_CELLS; cells <= maxCells; cells *= 2) {
+    const values: Float64Array[] = [];
     let worst = 0;
-    for (let k = 0; k < cells && worst <= tolerance; k++) {
-      const slope = (values[k + 1] - values[k]) * cells; // dx/du across the cell
-      if (!(slope >= 0)) return null;
-      for (const t of [0.25, 0.5, 0.75]) {
-        const u = (k + t) / cells;
-        const error = Math.abs(tableQuantile(table, u) - quantile(u));
-        // Secant-slope conversion to u units; a flat cell (slope 0) with an error is a failure.
-        const cdfError = error === 0 ? 0 : slope > 0 ? error / slope : Infinity;
-        if (cdfError > worst) worst = cdfError;
-      }
+    for (const quantile of quantiles) {
+      const table = { cells, values: new Float64Array(cells + 1), maxCdfError: 0 };
+      for (let k = 0; k <= cells; k++) table.values[k] = quantile(k / cells);
+      if (!table.values.every(Number.isFinite)) return null;
+      const error = worstCdfError(table, quantile, tolerance);
+      if (error === null) return null;
+      worst = Math.max(worst, error);
+      if (worst > tolerance) break;
+      values.push(table.values);
     }
-    if (worst <= tolerance) {
-      table.maxCdfError = worst;
-      return table;
-    }
+    if (worst <= tolerance) return { cells, values, maxCdfError: worst };
   }
   return null;
+}
+
+/** Largest |u' − u| of the table at the quarter points of its cells (stops early past `stopAbove`); null if the quantile falls. */
+function worstCdfError(table: QuantileTable, quantile: (u: number) => number, stopAbove: number): number | null {
+  const { cells, values } = table;
+  let worst = 0;
+  for (let k = 0; k < cells && worst <= stopAbove; k++) {
+    const slope = (values[k + 1] - values[k]) * cells; // dx/du across the cell
+    if (!(slope >= 0)) return null;
+    for (const t of [0.25, 0.5, 0.75]) {
+      const u = (k + t) / cells;
+      const error = Math.abs(tableQuantile(table, u) - quantile(u));
+      // Secant-slope conversion to u units; a flat cell (slope 0) with an error is a failure.
+      const cdfError = error === 0 ? 0 : slope > 0 ? error / slope : Infinity;
+      if (cdfError > worst) worst = cdfError;
+    }
+  }
+  return worst;
 }
 
 /** The tabulated quantile at u in [0, 1]. */

@@ -15,3 +15,14 @@ import { MJUP_MSUN } from '../constants.ts';
 export function companionScaledMedianMG(companionMassMsun: number, referenceMG: number, referenceMassMJup: number, slope: number): number {
   return referenceMG * Math.pow(companionMassMsun / (referenceMassMJup * MJUP_MSUN), slope);
 }
+
+/**
+ * The same law in log10 form, split so that the kernel adds instead of calling a power: the
+ * zero point log10 B_median at M2 = 1 Msun, log10 referenceMG − slope · log10(referenceMassMJup in
+ * Msun); then log10 B_median = zeroPoint + slope · log10(M2 / Msun).
+ * Example: 100 MG at 100 MJup (0.0955 Msun), slope 0.6 → zero point 2 − 0.6 · log10(0.0955) ≈ 2.612;
+ * at M2 = 1 MJup (log10 M2 ≈ −3.020) 2.612 − 0.6 · 3.020 = 0.800, i.e. 10^0.8 ≈ 6.31 MG as above.
+ */
+export function companionScaledLog10ZeroPoint(referenceMG: number, referenceMassMJup: number, slope: number): number {
+  return Math.log10(referenceMG) - slope * Math.log10(referenceMassMJup * MJUP_MSUN);
+}

@@ -7,3 +7,8 @@
 export function lognormalFieldMG(medianMG: number, widthDex: number, z: number): number {
   return medianMG * Math.exp(widthDex * z * Math.LN10); // = median · 10^(width z), without Math.pow's cost
 }
+
+/** The same prescription in the kernel's form: log10 B (MG) from log10 of the median. Example: log10 50, 0.5 dex, z = −1 → 1.199 (15.8 MG). */
+export function lognormalLog10FieldMG(log10MedianMG: number, widthDex: number, z: number): number {
+  return log10MedianMG + widthDex * z;
+}

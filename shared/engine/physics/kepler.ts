@@ -20,5 +20,5 @@ export function semiMajorAxisCubedAU3(periodDays: number, totalMassMsun: number)
 
 /** Inverse of semiMajorAxisAU: the orbital period in days for a in AU and M in Msun. */
 export function periodDays(semiMajorAxisAu: number, totalMassMsun: number): number {
-  return (TWO_PI / GAUSS_K) * Math.sqrt((semiMajorAxisAu ** 3) / totalMassMsun);
+  return (TWO_PI / GAUSS_K) * Math.sqrt((semiMajorAxisAu * semiMajorAxisAu * semiMajorAxisAu) / totalMassMsun);
 }

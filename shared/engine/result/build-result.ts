@@ -15,9 +15,12 @@ import { methodsUsed } from './methods.ts';
 
 /**
  * The result document from a scenario and the sum of its chunk tallies (any subset of chunks:
- * `complete` says whether all were summed). `meta.prepared` avoids recomputing the hash.
+ * `complete` says whether all were summed). `meta.prepared` avoids recomputing the hash;
+ * `meta.compareObserved: false` leaves out the comparison with the scenario's own observed counts
+ * and the implied occurrence (an exact test inversion, most of the cost of a result: a fit scores
+ * its 10^4 nodes against its constraint set and never reads them).
  */
-export function buildResult(scenario: Scenario, tally: ChunkTally, meta: { prepared?: PreparedScenario } = {}): ScenarioResult {
+export function buildResult(scenario: Scenario, tally: ChunkTally, meta: { prepared?: PreparedScenario; compareObserved?: boolean } = {}): ScenarioResult {
   const hash = meta.prepared?.scenarioHash ?? scenarioHash(scenario);
   if (tally.scenarioHash !== hash) throw new Error(`tally belongs to scenario ${tally.scenarioHash}, not ${hash}`);
   if (tally.engineVersion !== ENGINE_VERSION) throw new Error(`tally was made by engine ${tally.engineVersion}, this is ${ENGINE_VERSION}`);
@@ -102,7 +105,7 @@ export function buildResult(scenario: Scenario, tally: ChunkTally, meta: { prepa
     assumptions: assumptionsFor(scenario),
     methods: methodsUsed(scenario),
   };
-  if (scenario.observed && fraction.value !== null && fraction.se !== null) {
+  if (scenario.observed && meta.compareObserved !== false && fraction.value !== null && fraction.se !== null) {
     const observed = { magnetic: scenario.observed.magnetic, total: scenario.observed.total };
     result.comparison = compareWithObserved({ value: fraction.value, se: fraction.se }, observed);
     if (n > 0) result.impliedOccurrence = impliedMultiplier({ whiteDwarfs: n, multiplierEdges, magneticAt }, observed);

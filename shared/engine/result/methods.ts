@@ -13,14 +13,17 @@ export function methodsUsed(scenario: Scenario): MethodEntry[] {
   const add = (topic: string, method: string, reference: string) => out.push({ topic, method, reference });
   const p = scenario.primaries;
 
+  // Engine 2.2 draws every distribution by table (numerics/quantile-table.ts, kernel/primary-table.ts).
+  const sampling = 'inverse-CDF sampling by table (Kolmogorov distance ≤ 1e-7 to the exact distribution)';
   const imf = p.imf;
-  if (imf.law === 'salpeter1955') add('Initial mass function', 'Salpeter power law dN/dM ∝ M^-2.35, exact inverse-CDF sampling', `${REF.salpeter}; ${REF.press}`);
-  else if (imf.law === 'kroupa2001') add('Initial mass function', 'Kroupa broken power law (slopes 0.3, 1.3, 2.3; breaks 0.08, 0.5 Msun), exact inverse-CDF sampling', `${REF.kroupa}; ${REF.press}`);
-  else if (imf.law === 'chabrier2003') add('Initial mass function', 'Chabrier single-star IMF: log-normal below 1 Msun (tabulated CDF), power law above (exact inverse CDF)', `${REF.chabrier}, Table 1`);
-  else if (imf.law === 'powerlaw') add('Initial mass function', `power law dN/dM ∝ M^-${imf.slope}, exact inverse-CDF sampling`, REF.press);
-  else add('Initial mass function', `broken power law (slopes ${imf.slopes.join(', ')}; breaks ${imf.breaksMsun.join(', ')} Msun), exact inverse-CDF sampling`, REF.press);
+  if (imf.law === 'salpeter1955') add('Initial mass function', `Salpeter power law dN/dM ∝ M^-2.35, ${sampling}`, `${REF.salpeter}; ${REF.press}`);
+  else if (imf.law === 'kroupa2001') add('Initial mass function', `Kroupa broken power law (slopes 0.3, 1.3, 2.3; breaks 0.08, 0.5 Msun), ${sampling}`, `${REF.kroupa}; ${REF.press}`);
+  else if (imf.law === 'chabrier2003') add('Initial mass function', `Chabrier single-star IMF: log-normal below 1 Msun (tabulated CDF), power law above; ${sampling}`, `${REF.chabrier}, Table 1`);
+  else if (imf.law === 'powerlaw') add('Initial mass function', `power law dN/dM ∝ M^-${imf.slope}, ${sampling}`, REF.press);
+  else add('Initial mass function', `broken power law (slopes ${imf.slopes.join(', ')}; breaks ${imf.breaksMsun.join(', ')} Msun), ${sampling}`, REF.press);
 
   add('Star formation', p.history.kind === 'burst' ? `single burst ${p.history.ageGyr} Gyr ago` : `constant star formation over ${p.history.ageGyr} Gyr`, 'definition');
+  add('White dwarfs drawn', 'the number of white dwarfs among each chunk\'s primaries is binomial with the white-dwarf probability; each white dwarf\'s mass and birth time are drawn from their distribution given t_MS < age (the same counts as drawing every primary and keeping the white dwarfs)', 'definition');
   if (p.lifetime.kind === 'scaling') add('Main-sequence lifetime', `t_MS = ${p.lifetime.t0Gyr} Gyr (M/Msun)^-${p.lifetime.exponent}`, REF.hansen);
   else add('Main-sequence lifetime', `user table of ${p.lifetime.points.length} points, log-log interpolation`, 'user supplied');
   const ifmr = p.ifmr;
@@ -32,7 +35,7 @@ export function methodsUsed(scenario: Scenario): MethodEntry[] {
   }
 
   const rows = scenario.companions.rows ?? [];
-  if (rows.some((r) => r.shape.kind === 'powerlaw')) add('Companion distribution', 'power law in ln M and ln P (dN ∝ M^a P^b dlnM dlnP), exact inverse-CDF sampling', REF.cumming);
+  if (rows.some((r) => r.shape.kind === 'powerlaw')) add('Companion distribution', `power law in ln M and ln P (dN ∝ M^a P^b dlnM dlnP), ${sampling}`, REF.cumming);
   if (rows.some((r) => r.shape.kind === 'lognormalPeriod')) add('Companion distribution', 'log-normal period distribution truncated to the row, flat in mass', `${REF.raghavan}; ${REF.duquennoy}`);
   rows.forEach((r, i) => {
     if (r.source) add(`Occurrence row ${i + 1}${r.label ? ` (${r.label})` : ''}`, `${CLASS_WORDS[r.class]}, occurrence ${r.occurrence}`, r.source);
