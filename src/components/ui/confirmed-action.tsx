@@ -3,32 +3,40 @@ import { Button, type ButtonSize } from './button.tsx';
 import { ConfirmDialog } from './confirm-dialog.tsx';
 import { errorMessage } from './error-state.tsx';
 
-export interface ConfirmedActionProps {
+export interface ConfirmedActionProps<T> {
   /** The button's words, e.g. "Cancel the fit". */
   label: string;
   title: string;
   confirmLabel: string;
   cancelLabel: string;
   size?: ButtonSize;
-  /** The mutation behind it: pending spins the confirm button, an error (e.g. the server's 409) shows in the dialog. */
-  action: { isPending: boolean; isError: boolean; error: unknown; reset(): void };
-  /** Starts the action; call `close` when it has succeeded. */
-  onConfirm: (close: () => void) => void;
+  /**
+   * The mutation behind it, run on `input` when confirmed; the dialog closes once it has succeeded.
+   * Pending spins the confirm button, an error (e.g. the server's 409) shows in the dialog.
+   */
+  action: {
+    mutate(input: T, options: { onSuccess: () => void }): void;
+    isPending: boolean;
+    isError: boolean;
+    error: unknown;
+    reset(): void;
+  };
+  input: T;
   /** What will happen, in plain words. */
   children: ReactNode;
 }
 
 /** A danger button that asks first: the dialog says what happens, and keeps the server's refusal in view. */
-export function ConfirmedAction({
+export function ConfirmedAction<T>({
   label,
   title,
   confirmLabel,
   cancelLabel,
   size,
   action,
-  onConfirm,
+  input,
   children,
-}: ConfirmedActionProps) {
+}: ConfirmedActionProps<T>) {
   const [open, setOpen] = useState(false);
   return (
     <>
@@ -50,7 +58,7 @@ export function ConfirmedAction({
         tone="danger"
         pending={action.isPending}
         error={action.isError ? errorMessage(action.error) : undefined}
-        onConfirm={() => onConfirm(() => setOpen(false))}
+        onConfirm={() => action.mutate(input, { onSuccess: () => setOpen(false) })}
         onCancel={() => setOpen(false)}
       >
         {children}

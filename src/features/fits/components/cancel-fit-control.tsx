@@ -26,7 +26,7 @@ export function CancelFitControl({
       cancelLabel="Keep it running"
       size="sm"
       action={cancel}
-      onConfirm={(close) => cancel.mutate(fit.id, { onSuccess: close })}
+      input={fit.id}
     >
       {cancelFitWarning(fit)}
     </ConfirmedAction>

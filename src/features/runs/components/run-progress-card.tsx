@@ -40,7 +40,7 @@ export function RunProgressCard({ departmentId, run, source, canCancel }: RunPro
             confirmLabel="Cancel the run"
             cancelLabel="Keep it running"
             action={cancel}
-            onConfirm={(close) => cancel.mutate(run.id, { onSuccess: close })}
+            input={run.id}
           >
             A cancelled run keeps no result; the credits and free systems reserved for it are given back. It stays in the list as cancelled.
           </ConfirmedAction>

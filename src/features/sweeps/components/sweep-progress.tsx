@@ -37,7 +37,7 @@ export function SweepProgress({ departmentId, detail, canCancel, scenarioName }:
             cancelLabel="Keep it running"
             size="sm"
             action={cancel}
-            onConfirm={(close) => cancel.mutate(detail.id, { onSuccess: close })}
+            input={detail.id}
           >
             The points are computed together in one pass, so every point that has not finished stops. Each one’s reserved credit is given back in full (a
             refund entry per point in the credit ledger), also for the part already computed, and that part is discarded: a cancelled sweep cannot be resumed.
