@@ -8,7 +8,7 @@ import type { Page } from 'playwright-core';
 import { ensureChromium } from '../scripts/chromium.ts';
 import { buildClientIfStale } from '../scripts/client-build.ts';
 import { PROJECT_ROOT, ensureMariaDb, findFreePort, stopMariaDb } from '../scripts/mariadb.ts';
-import { chooseOption, launchBrowserDriver } from '../tests/support/browser-driver.ts';
+import { fillFitForm, launchBrowserDriver } from '../tests/support/browser-driver.ts';
 
 /**
  * `npm run bench:fit-browser`: issue 14's demonstration of a fit from the browser. It starts the
@@ -72,22 +72,12 @@ async function startApp(db: object): Promise<{ url: string; stop(): Promise<numb
 }
 
 async function fillForm(page: Page): Promise<void> {
-  await page.goto('/fits');
-  const form = page.getByRole('form', { name: 'New fit' });
-  await form.waitFor({ timeout: 30_000 });
-  await chooseOption(form.getByLabel('Scenario'), 'Baseline, analytic giant track');
-  await chooseOption(form.getByLabel('Constraint set'), 'library');
-  await form.getByLabel('Systems per grid point').fill(String(SYSTEMS));
-  for (const [i, p] of GRID.entries()) {
-    if (i > 0) await form.getByRole('button', { name: 'Add a parameter' }).click();
-    const group = form.getByRole('group', { name: `Parameter ${i + 1}` });
-    await group.getByLabel(`Parameter ${i + 1}`).selectOption(p.path);
-    await group.getByLabel('From').fill(String(p.from));
-    await group.getByLabel('To').fill(String(p.to));
-    await group.getByLabel('Points').fill(String(POINTS));
-    await group.getByLabel('Spacing').selectOption('log');
-    await group.getByLabel('Prior').selectOption('logUniform');
-  }
+  await fillFitForm(page, {
+    scenario: 'Baseline, analytic giant track',
+    constraintSet: 'library',
+    systems: SYSTEMS,
+    parameters: GRID.map((p) => ({ ...p, points: POINTS, spacing: 'log', prior: 'logUniform' })),
+  });
 }
 
 async function main() {

@@ -1,5 +1,5 @@
 import type { Server } from 'node:http';
-import { createApp } from './app.ts';
+import { createApp, type TidefieldApp } from './app.ts';
 import type { Config } from './config.ts';
 import { connectDatabase, migrateDatabase, type Database } from './db/client.ts';
 import { createLogger } from './logger.ts';
@@ -9,6 +9,8 @@ export interface RunningServer {
   url: string;
   server: Server;
   database: Database;
+  /** The wired app (tests reach the credit ledger's operator calls through it, as ctx.tidefield in the API tests). */
+  tidefield: TidefieldApp;
   stop(): Promise<void>;
 }
 
@@ -33,6 +35,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
     url,
     server,
     database,
+    tidefield,
     stop() {
       stopping ??= (async () => {
         const closed = new Promise<void>((resolve) => server.close(() => resolve()));

@@ -12,7 +12,7 @@ import { createEnginePool, defaultWorkerCount } from '../engine-pool/engine-pool
 import { createPoolExecutor } from '../engine-pool/pool-executor.ts';
 import { AppError } from '../lib/errors.ts';
 import { checkConstraints, resolveConstraints } from '../modules/constraints/constraint-sets.service.ts';
-import { analyseFit, fitMethodsParagraph, fitPoints, nodeResult, parameterWords, type FitDefinition } from '../modules/fits/fit-analysis.ts';
+import { analyseFit, bestNodeIndex, fitMethodsParagraph, fitPoints, nodeResult, parameterWords, type FitDefinition } from '../modules/fits/fit-analysis.ts';
 import { readScenarioDocument, resolveTable, type CliIo } from './synth.ts';
 
 const USAGE = 'usage: npm run fit -- <fit.json>   (fit.json: { "scenario": {…}, "constraints": […], "parameters": […], "systems"?, "seed"?, "workers"? })';
@@ -77,7 +77,9 @@ export async function main(argv: readonly string[], io: CliIo): Promise<number> 
     }
     const definition: FitDefinition = { scenario: scenarios[0], parameters: file.parameters, constraints, constraintSet: { id: 'file', name: argv[0], version: null } };
     const posterior = analyseFit(definition, points.length, (i) => nodeResult(scenarios[i], totals[i]));
-    const methods = fitMethodsParagraph(definition, posterior, { engineVersion: ENGINE_VERSION, fitId: null, scenarioName: argv[0] });
+    const best = bestNodeIndex(file.parameters, posterior);
+    const bestModel = best >= 0 ? { scenario: scenarios[best], result: nodeResult(scenarios[best], totals[best]) } : undefined;
+    const methods = fitMethodsParagraph(definition, posterior, { engineVersion: ENGINE_VERSION, fitId: null, scenarioName: argv[0], best: bestModel });
     io.stderr(`done: ${points.length} grid points × ${base.systems} systems in ${((performance.now() - started) / 1000).toFixed(2)} s\n${posterior.sentence}\n`);
     const now = new Date().toISOString();
     const output: FitDetail = {
@@ -92,6 +94,7 @@ export async function main(argv: readonly string[], io: CliIo): Promise<number> 
       scenarioName: argv[0],
       constraintSetName: argv[0],
       parameters: file.parameters.map((p) => p.path),
+      ownerUserId: null,
       implied: null,
       scenarioId: null,
       scenarioVersion: null,

@@ -73,7 +73,24 @@ export const fitPosteriorSchema = z.object({
   /** ln L of the constraint set at every grid node, row-major (the last parameter varies fastest); null where it could not be scored. */
   logLikelihood: z.array(z.number().nullable()),
   marginals: z.array(z.object({ path: z.string(), values: z.array(z.number()), density: z.array(z.number()) })),
-  intervals: z.array(z.object({ path: z.string(), best: z.number(), lo68: z.number(), hi68: z.number(), lo95: z.number(), hi95: z.number() })),
+  intervals: z.array(
+    z.object({
+      path: z.string(),
+      best: z.number(),
+      lo68: z.number(),
+      hi68: z.number(),
+      lo95: z.number(),
+      hi95: z.number(),
+      /** The posterior is still ≥ 10% of its peak at the grid's lower (upper) edge: the interval is cut there by the grid, not by the data (false in fits stored before the flag existed). */
+      lowerEdge: z.boolean().default(false),
+      upperEdge: z.boolean().default(false),
+      /** The same at an edge that is the parameter's own limit (e.g. a multiplier of 0): the posterior piles at the limit, so the result is in effect one-sided. */
+      lowerLimit: z.boolean().default(false),
+      upperLimit: z.boolean().default(false),
+      /** The likelihood is flat along this parameter: the interval is the prior's. */
+      flat: z.boolean().default(false),
+    }),
+  ),
   bestPoint: z.object({
     values: z.record(z.string(), z.number()),
     logLikelihood: z.number().nullable(),
@@ -104,6 +121,8 @@ export const fitSummarySchema = z.object({
   scenarioName: z.string(),
   constraintSetName: z.string(),
   parameters: z.array(z.string()),
+  /** Who queued it: they, or any modeller, may cancel it while it computes (null for `npm run fit`'s output, which has no owner). */
+  ownerUserId: z.string().nullable(),
   /** Set when the fit answers an implied-occurrence question (its page is /implied-occurrence?fit=ID). */
   implied: impliedFitQuestionSchema.nullable(),
 });

@@ -79,6 +79,8 @@ export type ImpliedCredible = z.output<typeof impliedCredibleSchema>;
 export const impliedOccurrenceAnswerSchema = z.object({
   fitId: z.string(),
   runId: z.string(),
+  /** Who asked: they, or any modeller, may cancel the fit while it computes. */
+  ownerUserId: z.string().nullable(),
   status: runStatusSchema,
   progress: z.number(),
   error: z.string().nullable(),

@@ -2,6 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type request from 'supertest';
 import { addMember, createTestApp, signUp, type TestContext } from '../support/test-app.ts';
 import { checkScenario, createScenario, waitForFit, waitForRun } from '../support/runs.ts';
+import { parseScenario } from '../../shared/contracts/scenario.ts';
+import { rangeLimits } from '../../server/modules/fits/fit-analysis.ts';
 import { jStat } from '../../shared/engine/stats/testing/jstat-reference.ts';
 
 let ctx: TestContext;
@@ -26,6 +28,20 @@ async function separateRun(overrides: Record<string, unknown>) {
   const run = await modeller.agent.post('/api/runs').send({ scenarioId }).expect(201);
   expect((await waitForRun(modeller.agent, run.body.id, 60_000)).status).toBe('succeeded');
   return (await modeller.agent.get(`/api/runs/${run.body.id}/result`).expect(200)).body;
+}
+
+/** A fit of the check scenario over the multiplier (0.5–3, 5 points) against a one-survey set of k of n; its id and final detail. */
+async function multiplierFit(setName: string, survey: { magnetic: number; total: number; label: string }, min = 0.5) {
+  const set = await modeller.agent
+    .post('/api/constraint-sets')
+    .send({ name: setName, constraints: [{ kind: 'fraction', ...survey, citation: 'Invented for this test' }] })
+    .expect(201);
+  const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: SYSTEMS, seed: SEED }));
+  const created = await modeller.agent
+    .post('/api/fits')
+    .send({ scenarioId, constraintSetId: set.body.id, parameters: [{ path: 'companions.multiplier', min, max: 3, points: 5 }] })
+    .expect(201);
+  return { id: created.body.id as string, fit: await waitForFit(observer.agent, created.body.id) };
 }
 
 const base = checkScenario();
@@ -67,16 +83,7 @@ describe('fits', () => {
     const f = separate[2].counts.magnetic / separate[2].counts.whiteDwarfs;
     const total = 400;
     const magnetic = Math.round(f * total);
-    const set = await modeller.agent
-      .post('/api/constraint-sets')
-      .send({ name: 'One survey (illustrative)', constraints: [{ kind: 'fraction', magnetic, total, label: 'Illustrative survey', citation: 'Invented for this test' }] })
-      .expect(201);
-    const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: SYSTEMS, seed: SEED }));
-    const created = await modeller.agent
-      .post('/api/fits')
-      .send({ scenarioId, constraintSetId: set.body.id, parameters: [{ path: 'companions.multiplier', min: 0.5, max: 3, points: 5 }] })
-      .expect(201);
-    const fit = await waitForFit(observer.agent, created.body.id);
+    const { id, fit } = await multiplierFit('One survey (illustrative)', { magnetic, total, label: 'Illustrative survey' });
     expect(fit.status).toBe('succeeded');
     expect(fit.pointCount).toBe(5);
     // One pass of ceil(20,000 / 65,536) = 1 chunk, all done; no time left.
@@ -115,19 +122,64 @@ describe('fits', () => {
     expect(post.bestPoint.values).toEqual({ 'companions.multiplier': multipliers[best] });
     expect(post.bestPoint.evaluation.constraints[0].label).toBe('Illustrative survey');
     expect(post.sentence).toMatch(/^We find Occurrence multiplier between /);
-    const methods = (await observer.agent.get(`/api/fits/${created.body.id}/methods.txt`).expect(200)).text;
+    const methods = (await observer.agent.get(`/api/fits/${id}/methods.txt`).expect(200)).text;
     expect(methods).toContain('5 linearly spaced values from 0.5 to 3 with a uniform prior');
     expect(methods).toContain('Invented for this test');
     expect(methods).toContain(`${SYSTEMS.toLocaleString('en-US')} primaries`);
     expect(methods).toContain(`engine ${fit.engineVersion}`);
+    // The observation sits inside the range, so no interval is flagged; the model at the best point is
+    // stated in the run paragraph's words (its physics and the scenario hash), not only by name.
+    expect(iv).toMatchObject({ lowerEdge: false, upperEdge: false, flat: false });
+    expect(post.sentence).not.toMatch(/cut by|not constrained/);
+    expect(methods).toContain(`The model at the best grid point (Occurrence multiplier = ${multipliers[best]}): We drew ${SYSTEMS.toLocaleString('en-US')} Monte Carlo primaries`);
+    expect(methods).toMatch(/The scenario document \(SHA-256 [0-9a-f]{64}\)/);
+    expect(methods).toContain('not corrected for the parameters fitted');
+    // The check scenario's IFMR is Kalirai et al. 2008 (tests/fixtures/check-1.json): its full reference is listed.
+    expect(methods).toContain('- Kalirai, J. S., Hansen, B. M. S., Kelson, D. D., et al. 2008, ApJ, 676, 594');
 
     // Listed for the Overview; credit reserved for every grid point (5 × 20,000 systems).
     const list = (await observer.agent.get('/api/fits').expect(200)).body.fits;
-    expect(list[0]).toMatchObject({ id: created.body.id, status: 'succeeded', progress: 1, parameters: ['companions.multiplier'], constraintSetName: 'One survey (illustrative)' });
+    expect(list[0]).toMatchObject({ id, status: 'succeeded', progress: 1, parameters: ['companions.multiplier'], constraintSetName: 'One survey (illustrative)' });
     const ledger = (await owner.agent.get('/api/billing/ledger?pageSize=100').expect(200)).body.entries;
     const reservation = ledger.find((e: { runId: string | null; kind: string }) => e.runId === fit.runId && e.kind === 'reservation');
     expect(reservation.description).toContain(`${(5 * SYSTEMS).toLocaleString('en-US')} systems`);
   }, 240_000);
+
+  it('says in the sentence, the methods text and the interval flags when the posterior piles at the grid edge', async () => {
+    // None magnetic of 400: the predicted fraction rises with the multiplier, so the likelihood is
+    // highest at the grid's lowest value and the 68% interval's lower end is the grid's, not the data's.
+    const { id, fit } = await multiplierFit('None of four hundred (illustrative)', { magnetic: 0, total: 400, label: 'Illustrative null survey' });
+    expect(fit.status).toBe('succeeded');
+    const post = fit.posterior;
+    // The flag against the likelihood itself: 1-D, uniform prior, so the marginal is ∝ L and its value at
+    // the lower edge relative to its peak is exp(ln L_0 − max ln L) (the 10% rule of grid-posterior.ts).
+    const ll: number[] = post.logLikelihood;
+    const atLowerEdge = Math.exp(ll[0] - Math.max(...ll));
+    const atUpperEdge = Math.exp(ll[4] - Math.max(...ll));
+    expect(atLowerEdge).toBeGreaterThanOrEqual(0.1);
+    expect(post.intervals[0]).toMatchObject({ lowerEdge: true, upperEdge: atUpperEdge >= 0.1, flat: false });
+    expect(post.sentence).toContain("cut by the grid's lower edge (0.5), where the posterior is still high");
+    const methods = (await modeller.agent.get(`/api/fits/${id}/methods.txt`).expect(200)).text;
+    expect(methods).toMatch(/Occurrence multiplier: [^;]*\(cut by the grid's lower edge \(0\.5\), where the posterior is still high\)/);
+    expect(post.warnings.join(' ')).toMatch(/^The posterior of Occurrence multiplier is still \d+% of its peak at the lower edge/);
+
+    // From m = 0, the lowest multiplier there is: the same data make the interval an upper limit, and no
+    // warning asks for a wider range below 0.
+    const fromZero = (await multiplierFit('None of four hundred, from zero (illustrative)', { magnetic: 0, total: 400, label: 'Illustrative null survey' }, 0)).fit.posterior;
+    expect(fromZero.intervals[0]).toMatchObject({ lowerEdge: false, lowerLimit: true, flat: false });
+    expect(fromZero.sentence).toContain('the posterior piles up at the lowest value the parameter can take (0): read it as an upper limit');
+    expect(fromZero.warnings.join(' ')).not.toMatch(/widen the range/);
+  }, 120_000);
+
+  it('knows which ends of a range are the parameter’s own limits (the scenario schema’s bounds, the rows’ largest multiplier)', () => {
+    // The check scenario: one planet row of occurrence 0.3 (tests/fixtures/check-1.json), so m ≤ 1/0.3;
+    // α_CE is allowed from 0.01 to 10 (shared/contracts/scenario.ts).
+    const scenario = parseScenario(checkScenario());
+    expect(rangeLimits(scenario, { path: 'companions.multiplier', min: 0, max: 1 / 0.3 })).toEqual({ lower: true, upper: true });
+    expect(rangeLimits(scenario, { path: 'companions.multiplier', min: 0.5, max: 3 })).toEqual({ lower: false, upper: false });
+    expect(rangeLimits(scenario, { path: 'envelope.alpha', min: 0.01, max: 10 })).toEqual({ lower: true, upper: true });
+    expect(rangeLimits(scenario, { path: 'envelope.alpha', min: 0.02, max: 2 })).toEqual({ lower: false, upper: false });
+  });
 
   it('refuses a bad grid, naming the field, and lets observers read but not start fits', async () => {
     const scenarioId = await createScenario(modeller.agent, checkScenario({ systems: 2000 }));

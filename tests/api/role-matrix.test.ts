@@ -76,7 +76,7 @@ export const EXPECTED_ACCESS: Record<string, Minimum> = {
   'GET /api/fits': 'observer',
   'GET /api/fits/:id': 'observer',
   'GET /api/fits/:id/methods.txt': 'observer',
-  'POST /api/fits/:id/cancel': 'modeller',
+  'POST /api/fits/:id/cancel': 'observer',
   'POST /api/fits/:id/resume': 'modeller',
   // Credit: members see the balance and what a run would cost; only admins buy and read the ledger.
   'GET /api/billing/balance': 'observer',

@@ -5,7 +5,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import path from 'node:path';
-import { ARTIFACTS, chooseOption, startBrowserStack, type BrowserStack } from '../support/browser.ts';
+import { ARTIFACTS, fillFitForm, startBrowserStack, type BrowserStack } from '../support/browser.ts';
 
 let stack: BrowserStack;
 beforeAll(async () => {
@@ -18,24 +18,15 @@ describe('fits', () => {
     const { page, context } = await stack.newPage();
     try {
       await stack.signIn(page, 'modeller');
-      await page.goto('/fits');
-      const form = page.getByRole('form', { name: 'New fit' });
-      await form.waitFor({ timeout: 30_000 });
-      await chooseOption(form.getByLabel('Scenario'), 'Baseline, fixed engulfment reach');
-      await chooseOption(form.getByLabel('Constraint set'), 'library');
-      await form.getByLabel('Systems per grid point').fill('20000');
-      const first = form.getByRole('group', { name: 'Parameter 1' });
-      await first.getByLabel('Parameter 1').selectOption('envelope.alpha');
-      await first.getByLabel('From').fill('0.1');
-      await first.getByLabel('To').fill('1');
-      await first.getByLabel('Points').fill('3');
-      await form.getByRole('button', { name: 'Add a parameter' }).click();
-      const second = form.getByRole('group', { name: 'Parameter 2' });
-      await second.getByLabel('Parameter 2').selectOption('giant.reachAU');
-      await second.getByLabel('From').fill('1');
-      await second.getByLabel('To').fill('4');
-      await second.getByLabel('Points').fill('3');
-      await second.getByLabel('Spacing').selectOption('log');
+      const form = await fillFitForm(page, {
+        scenario: 'Baseline, fixed engulfment reach',
+        constraintSet: 'library',
+        systems: 20_000,
+        parameters: [
+          { path: 'envelope.alpha', from: 0.1, to: 1, points: 3 },
+          { path: 'giant.reachAU', from: 1, to: 4, points: 3, spacing: 'log' },
+        ],
+      });
       // The cost comes first: 9 points × 20,000 systems.
       await expect.poll(() => page.getByTestId('fit-cost').textContent(), { timeout: 20_000 }).toMatch(/9 grid points × 20,000 systems, reserved at once as 180,000 systems/);
       await stack.screenshot(page, 'fit-form');

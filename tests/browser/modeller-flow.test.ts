@@ -10,6 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startBrowserStack, type BrowserStack } from '../support/browser.ts';
 
 let stack: BrowserStack;
+const EXAMPLE = JSON.parse(readFileSync(new URL('../../shared/scenarios/baseline-fixed-reach.json', import.meta.url), 'utf8'));
 
 /** The text of everything an input's aria-describedby points at (its hint and its error). */
 async function describedText(input: Locator): Promise<string> {
@@ -29,10 +30,18 @@ describe('modeller', () => {
       await stack.signIn(page, 'modeller');
       await page.goto('/scenarios/new');
       await page.getByRole('navigation', { name: 'Start from' }).getByRole('link', { name: /Baseline, fixed engulfment reach/ }).click();
+      // The address changes at once, but the example's builder replaces the blank one only when its
+      // render is done (a router transition: 0.3–0.6 s here, longer under load), and until then the blank
+      // builder still takes typing that the swap then throws away. Type once the example is open.
+      await page.getByText('Started from the example “Baseline, fixed engulfment reach”').waitFor({ timeout: 30_000 });
       await page.getByLabel('Scenario name').fill('Browser test baseline');
       await page.getByLabel('Efficiency α_CE').fill('0.5');
       await page.getByRole('button', { name: 'Save scenario' }).click();
       await page.waitForURL(/\/scenarios\/[A-Za-z0-9_-]{8,}$/);
+      // What was saved is the example with the one change (the blank builder has no companion rows).
+      const saved = await (await page.request.get(`/api/scenarios/${new URL(page.url()).pathname.split('/').pop()}`)).json();
+      expect(saved.document.companions.rows).toHaveLength(EXAMPLE.companions.rows.length);
+      expect(saved.document.envelope.alpha).toBe(0.5);
       await stack.screenshot(page, 'modeller-scenario-saved');
 
       await page.getByRole('link', { name: 'Run this scenario' }).click();

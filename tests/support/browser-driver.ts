@@ -71,3 +71,37 @@ export async function chooseOption(select: import('playwright-core').Locator, te
   const value = await option.getAttribute('value');
   await select.selectOption(value ?? text);
 }
+
+/** One parameter row of the Fits page's form. */
+export interface FitFormParameter {
+  path: string;
+  from: number;
+  to: number;
+  points: number;
+  spacing?: 'linear' | 'log';
+  prior?: 'uniform' | 'logUniform';
+}
+
+/** Opens the Fits page and fills its "New fit" form (without starting it); returns the form. */
+export async function fillFitForm(
+  page: Page,
+  fit: { scenario: string; constraintSet: string; systems: number; parameters: readonly FitFormParameter[] },
+): Promise<import('playwright-core').Locator> {
+  await page.goto('/fits');
+  const form = page.getByRole('form', { name: 'New fit' });
+  await form.waitFor({ timeout: 30_000 });
+  await chooseOption(form.getByLabel('Scenario'), fit.scenario);
+  await chooseOption(form.getByLabel('Constraint set'), fit.constraintSet);
+  await form.getByLabel('Systems per grid point').fill(String(fit.systems));
+  for (const [i, p] of fit.parameters.entries()) {
+    if (i > 0) await form.getByRole('button', { name: 'Add a parameter' }).click();
+    const group = form.getByRole('group', { name: `Parameter ${i + 1}` });
+    await group.getByLabel(`Parameter ${i + 1}`).selectOption(p.path);
+    await group.getByLabel('From').fill(String(p.from));
+    await group.getByLabel('To').fill(String(p.to));
+    await group.getByLabel('Points').fill(String(p.points));
+    if (p.spacing) await group.getByLabel('Spacing').selectOption(p.spacing);
+    if (p.prior) await group.getByLabel('Prior').selectOption(p.prior);
+  }
+  return form;
+}

@@ -13,7 +13,7 @@ import { startFakesOnFreePorts } from '../../server/fakes/local-fakes.ts';
 import { builtAppConfig, launchBrowserDriver, type BrowserDriver } from './browser-driver.ts';
 import { TEST_STRIPE_SECRETS, createTestDatabase } from './test-app.ts';
 
-export { chooseOption } from './browser-driver.ts';
+export { chooseOption, fillFitForm } from './browser-driver.ts';
 
 export const ARTIFACTS = path.join(PROJECT_ROOT, 'tests/artifacts');
 export const DEMO_PASSWORD = 'tidefield-demo';

@@ -35,7 +35,8 @@ export function fitsRoutes(registry: RouteRegistry, fitsService: FitsService): R
   });
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/:id/cancel', tag, access: 'modeller', tokenScope: 'run', summary: 'Cancel a queued or running fit (its reservation is refunded)',
+    method: 'post', path: '/:id/cancel', tag, access: 'observer', tokenScope: 'run',
+    summary: "Cancel a queued or running fit (its owner, or a modeller): the whole reservation is refunded and the chunks computed so far are discarded (no posterior; it cannot be resumed); 409 once it has finished",
     params: idParamsSchema, response: fitSummarySchema,
   }, ({ auth, params }) => fitsService.cancel(auth, params.id));
 

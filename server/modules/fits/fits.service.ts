@@ -3,13 +3,14 @@ import { SWEEPABLE_PARAMETERS, ScenarioValidationError, withParameter, type Scen
 import type { CreateFitBody, FitDetail, FitParameter, FitPosterior, FitSummary } from '../../../shared/contracts/fits.ts';
 import type { ImpliedFitQuestion } from '../../../shared/contracts/implied-occurrence.ts';
 import type { RunStatus } from '../../../shared/contracts/runs.ts';
+import { roleAtLeast } from '../../../shared/contracts/roles.ts';
 import { scenarioAtPoint } from '../../../shared/contracts/point-scenario.ts';
 import { multiplierMaxFor } from '../../../shared/engine/kernel/scenario-physics.ts';
 import type { ChunkTally } from '../../../shared/engine/kernel/tally.ts';
 import { ENGINE_VERSION } from '../../../shared/engine/version.ts';
 import type { Db } from '../../db/client.ts';
 import { newId } from '../../db/columns.ts';
-import { AppError, conflict, notFound } from '../../lib/errors.ts';
+import { AppError, conflict, forbidden, notFound } from '../../lib/errors.ts';
 import { departmentOf, type RequestAuth } from '../../lib/request-auth.ts';
 import type { Logger } from 'pino';
 import { recordAudit } from '../audit/audit.service.ts';
@@ -20,7 +21,7 @@ import { runs } from '../runs/runs.table.ts';
 import type { RunRow } from '../runs/runs.repository.ts';
 import type { RunsService } from '../runs/runs.service.ts';
 import type { ScenariosService } from '../scenarios/scenarios.service.ts';
-import { analyseFit, fitMethodsParagraph, fitPoints, nodeResult, parameterWords, type FitDefinition } from './fit-analysis.ts';
+import { analyseFit, bestNodeIndex, fitMethodsParagraph, fitPoints, nodeResult, parameterWords, type FitDefinition } from './fit-analysis.ts';
 import { fits, type FitRow } from './fits.table.ts';
 
 export const fitNotFound = () => notFound('That fit');
@@ -87,6 +88,7 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
       scenarioName: fit.scenarioName,
       constraintSetName: fit.constraintSetName,
       parameters: fit.parameters.map((p) => p.path),
+      ownerUserId: fit.ownerUserId,
       implied: fit.implied ?? null,
     };
   }
@@ -102,7 +104,9 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
     try {
       const definition = definitionOf(fit, scenarios[0]);
       posterior = analyseFit(definition, tallies.length, (i) => nodeResult(scenarios[i], tallies[i]));
-      methods = fitMethodsParagraph(definition, posterior, { engineVersion: fit.engineVersion, fitId: fit.id, scenarioName: fit.scenarioName });
+      const best = bestNodeIndex(fit.parameters, posterior);
+      const bestModel = best >= 0 ? { scenario: scenarios[best], result: nodeResult(scenarios[best], tallies[best]) } : undefined;
+      methods = fitMethodsParagraph(definition, posterior, { engineVersion: fit.engineVersion, fitId: fit.id, scenarioName: fit.scenarioName, best: bestModel });
     } catch (e) {
       error = e instanceof Error ? e.message : String(e);
       logger.warn({ fitId: fit.id, err: e }, 'fit posterior failed');
@@ -245,13 +249,27 @@ export function createFitsService(deps: { db: Db; runs: RunsService; scenarios: 
       return summary({ ...fit, runId }, (await runsOf([runId])).get(runId));
     },
 
+    /**
+     * The owner or any modeller may cancel a queued or running fit (an observer's implied-occurrence
+     * question is a fit of their own). The scheduler refunds the whole reservation (billing's settleRun:
+     * credits, and free systems of the month they were taken from) and deletes the checkpoint, so the
+     * chunks computed so far are discarded: a cancelled fit has no posterior and cannot be resumed.
+     */
     async cancel(auth: RequestAuth, id: string): Promise<FitSummary> {
       const department = departmentOf(auth);
       const fit = await load(department.id, id);
-      await scheduler.cancel(fit.runId);
-      await recordAudit(db, { departmentId: department.id, actorUserId: auth.user.id, action: 'fit.cancelled', target: id });
+      if (fit.ownerUserId !== auth.user.id && !roleAtLeast(auth.role!, 'modeller')) throw forbidden("Only the fit's owner or a modeller can cancel it.");
       const run = (await runsOf([fit.runId])).get(fit.runId);
-      return summary(fit, run);
+      const notLive = () => {
+        const status = fitStatus(fit, run);
+        const state = status === 'running' ? 'computed its grid (the posterior is being worked out)' : status === 'succeeded' ? 'succeeded' : `been ${status}`;
+        return conflict(`The fit has already ${state}; only a queued or running fit can be cancelled.`);
+      };
+      if (!run || (run.status !== 'queued' && run.status !== 'running')) throw notLive();
+      // false: it finished between the check and the cancel.
+      if (!(await scheduler.cancel(fit.runId))) throw notLive();
+      await recordAudit(db, { departmentId: department.id, actorUserId: auth.user.id, action: 'fit.cancelled', target: id });
+      return summary(fit, (await runsOf([fit.runId])).get(fit.runId));
     },
   };
 }

@@ -118,6 +118,7 @@ export function createImpliedService(deps: { runs: RunsService; fits: FitsServic
       return {
         fitId: fit.id,
         runId: fit.runId,
+        ownerUserId: fit.ownerUserId,
         status: fit.status,
         progress: fit.progress,
         error: fit.error,

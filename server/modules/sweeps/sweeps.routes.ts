@@ -26,7 +26,7 @@ export function sweepsRoutes(registry: RouteRegistry, sweeps: SweepsService): Ro
   }, ({ auth, params, query }) => sweeps.detail(auth, params.id, query.sample));
 
   defineRoute(router, registry, mount, {
-    method: 'post', path: '/:id/cancel', tag, access: 'modeller', tokenScope: 'run', summary: 'Cancel every point that has not finished', params: idParamsSchema, response: sweepSummarySchema,
+    method: 'post', path: '/:id/cancel', tag, access: 'modeller', tokenScope: 'run', summary: "Cancel every point that has not finished (each point's reservation is refunded); 409 when none is left to cancel", params: idParamsSchema, response: sweepSummarySchema,
   }, ({ auth, params }) => sweeps.cancel(auth, params.id));
 
   defineRoute(router, registry, mount, {

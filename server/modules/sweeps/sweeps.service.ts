@@ -196,8 +196,10 @@ export function createSweepsService(deps: { db: Db; runs: RunsService; scenarios
     async cancel(auth: RequestAuth, id: string): Promise<SweepSummary> {
       const department = departmentOf(auth);
       const { points } = await load(department.id, id);
+      const live = points.filter((run) => run.status === 'queued' || run.status === 'running');
+      if (live.length === 0) throw conflict(`The sweep is already ${sweepStatus(points)}; only a queued or running sweep can be cancelled.`);
       // The points are one job: cancelling any cancels them all.
-      for (const run of points) if (run.status === 'queued' || run.status === 'running') await scheduler.cancel(run.id);
+      for (const run of live) await scheduler.cancel(run.id);
       await recordAudit(db, { departmentId: department.id, actorUserId: auth.user.id, action: 'sweep.cancelled', target: id });
       const after = await load(department.id, id);
       return summary(after.row, after.points);

@@ -13,8 +13,10 @@ import { EngineError } from '../errors.ts';
  *   2.5–97.5% (95%) of the marginal, with the density taken linear between grid nodes (the CDF
  *   quadratic in each cell, inverted exactly). `best` is the marginal's highest grid node.
  * - Warnings say when a marginal is still above 10% of its peak at a range edge (the interval is cut
- *   by the range) and when the likelihood is flat (varies by less than ½ in ln L, i.e. less than a
- *   1σ change for one Gaussian parameter) over the grid or along one parameter.
+ *   by the range; on a log grid, the density per unit ln θ) and when the likelihood is flat (varies by less than ½ in ln L, i.e. less than a
+ *   1σ change for one Gaussian parameter) over the grid or along one parameter. Each interval
+ *   carries the same findings as flags (`lowerEdge`, `upperEdge`, `flat`), so that a sentence
+ *   quoting it can say that its ends are the grid's, or that it is the prior's.
  *
  * Example: a flat likelihood with a log-uniform prior on [1, 100] gives the quantiles
  * θ_q = 1 · 100^q, so the 68% interval is [100^0.15865, 100^0.84135] = [2.08, 48.0].
@@ -25,6 +27,10 @@ export type GridPrior = 'uniform' | 'logUniform';
 
 export interface GridAxis {
   path: string;
+  /** The parameter's name in warnings (default: its path). */
+  label?: string;
+  /** The range's lower (upper) end is the parameter's own limit (e.g. a multiplier of 0): nothing lies beyond it, so a posterior piled there is bounded by the parameter, not cut by the grid. */
+  limits?: { lower: boolean; upper: boolean };
   min: number;
   max: number;
   points: number;
@@ -39,10 +45,27 @@ export interface GridPosterior {
   /** ln of the normalised posterior density at every node (null where L is 0 or unknown). */
   logPosterior: (number | null)[];
   marginals: { path: string; values: number[]; density: number[] }[];
-  intervals: { path: string; best: number; lo68: number; hi68: number; lo95: number; hi95: number }[];
+  intervals: GridInterval[];
   /** Row-major index of the node of highest likelihood. */
   bestIndex: number;
   warnings: string[];
+}
+
+export interface GridInterval {
+  path: string;
+  best: number;
+  lo68: number;
+  hi68: number;
+  lo95: number;
+  hi95: number;
+  /** The marginal is still ≥ 10% of its peak at the range's lower (upper) edge: the interval is cut there by the grid, not by the data. */
+  lowerEdge: boolean;
+  upperEdge: boolean;
+  /** The same, at an edge that is the parameter's own limit: the posterior piles at the limit, so the result is in effect one-sided. */
+  lowerLimit: boolean;
+  upperLimit: boolean;
+  /** The likelihood does not vary along this parameter (by < ½ in ln L): its marginal is its prior. */
+  flat: boolean;
 }
 
 /** Probability outside a central 68.27% interval on each side: (1 − erf(1/√2)) / 2. */
@@ -147,42 +170,67 @@ export function gridPosterior(axes: readonly GridAxis[], logLikelihood: readonly
     return { path: axis.path, values: values[a], density: density.map((d) => (norm > 0 ? d / norm : 0)) };
   });
 
-  const intervals = marginals.map((m, a) => {
+  // Flat likelihood over the whole grid, or along one parameter (its profile: the best ln L at each of its values).
+  const spread = Math.max(...finiteLl) - Math.min(...finiteLl);
+  const flatEverywhere = spread < FLAT_DELTA_LN_L;
+  const flat = axes.map((_, a) => {
+    if (flatEverywhere || axes.length === 1) return flatEverywhere;
+    const profile = new Array<number>(sizes[a]).fill(-Infinity);
+    logLikelihood.forEach((ll, node) => {
+      if (ll !== null && Number.isFinite(ll)) profile[indexOf(node, a)] = Math.max(profile[indexOf(node, a)], ll);
+    });
+    const finite = profile.filter(Number.isFinite);
+    return finite.length > 0 && Math.max(...finite) - Math.min(...finite) < FLAT_DELTA_LN_L;
+  });
+
+  const intervals = marginals.map((m, a): GridInterval => {
     const x = m.values;
     const d = m.density;
+    const name = axes[a].label ?? m.path;
     const peakAt = d.reduce((best, v, i) => (v > d[best] ? i : best), 0);
-    const interval = {
+    // The edge test reads the density per unit of the grid's own coordinate: θ p(θ) per unit ln θ on a
+    // log grid. Per unit θ, the lower edge of a wide log grid looks crowded even when it holds little
+    // probability (and the upper edge the reverse).
+    const e = axes[a].scale === 'log' ? d.map((v, i) => v * x[i]) : d;
+    const top = Math.max(...e);
+    const limits = axes[a].limits ?? { lower: false, upper: false };
+    const piledLow = top > 0 && e[0] >= EDGE_FRACTION * top && !flat[a];
+    const piledHigh = top > 0 && e[x.length - 1] >= EDGE_FRACTION * top && !flat[a];
+    // A flat axis is named once as flat; its marginal is the prior, so its edges say nothing about the data.
+    if (piledLow) {
+      warnings.push(
+        limits.lower
+          ? `The posterior of ${name} is still ${Math.round((100 * e[0]) / top)}% of its peak at ${fmt(axes[a].min)}, the lowest value it can take: the data favour that limit, so read the result as an upper limit on ${name}; the central interval's lower end is not a measurement.`
+          : `The posterior of ${name} is still ${Math.round((100 * e[0]) / top)}% of its peak at the lower edge of the range (${fmt(axes[a].min)}): the data allow lower values, so widen the range; the intervals are cut by it.`,
+      );
+    }
+    if (piledHigh) {
+      warnings.push(
+        limits.upper
+          ? `The posterior of ${name} is still ${Math.round((100 * e[x.length - 1]) / top)}% of its peak at ${fmt(axes[a].max)}, the highest value it can take: the data favour that limit, so read the result as a lower limit on ${name}; the central interval's upper end is not a measurement.`
+          : `The posterior of ${name} is still ${Math.round((100 * e[x.length - 1]) / top)}% of its peak at the upper edge of the range (${fmt(axes[a].max)}): the data allow higher values, so widen the range; the intervals are cut by it.`,
+      );
+    }
+    return {
       path: m.path,
       best: x[peakAt],
       lo68: quantile(x, d, TAIL_68),
       hi68: quantile(x, d, 1 - TAIL_68),
       lo95: quantile(x, d, TAIL_95),
       hi95: quantile(x, d, 1 - TAIL_95),
+      lowerEdge: piledLow && !limits.lower,
+      upperEdge: piledHigh && !limits.upper,
+      lowerLimit: piledLow && limits.lower,
+      upperLimit: piledHigh && limits.upper,
+      flat: flat[a],
     };
-    const top = d[peakAt];
-    if (top > 0 && d[0] >= EDGE_FRACTION * top) {
-      warnings.push(`The posterior of ${m.path} is still ${Math.round((100 * d[0]) / top)}% of its peak at the lower edge of the range (${fmt(axes[a].min)}): the data allow lower values, so widen the range; the intervals are cut by it.`);
-    }
-    if (top > 0 && d[x.length - 1] >= EDGE_FRACTION * top) {
-      warnings.push(`The posterior of ${m.path} is still ${Math.round((100 * d[x.length - 1]) / top)}% of its peak at the upper edge of the range (${fmt(axes[a].max)}): the data allow higher values, so widen the range; the intervals are cut by it.`);
-    }
-    return interval;
   });
 
-  const spread = Math.max(...finiteLl) - Math.min(...finiteLl);
-  if (spread < FLAT_DELTA_LN_L) {
+  if (flatEverywhere) {
     warnings.push(`The likelihood is flat over the grid (ln L varies by ${fmt(spread)} < ${FLAT_DELTA_LN_L}): the constraints do not tell these parameter values apart, so the posterior is the prior.`);
-  } else if (axes.length > 1) {
+  } else {
     axes.forEach((axis, a) => {
-      // Profile likelihood along the axis: the best ln L at each of its values.
-      const profile = new Array<number>(sizes[a]).fill(-Infinity);
-      logLikelihood.forEach((ll, node) => {
-        if (ll !== null && Number.isFinite(ll)) profile[indexOf(node, a)] = Math.max(profile[indexOf(node, a)], ll);
-      });
-      const finite = profile.filter(Number.isFinite);
-      if (finite.length > 0 && Math.max(...finite) - Math.min(...finite) < FLAT_DELTA_LN_L) {
-        warnings.push(`The likelihood is flat along ${axis.path} (its profile varies by less than ${FLAT_DELTA_LN_L} in ln L): the constraints do not constrain it, so its marginal is its prior.`);
-      }
+      if (flat[a]) warnings.push(`The likelihood is flat along ${axis.label ?? axis.path} (its profile varies by less than ${FLAT_DELTA_LN_L} in ln L): the constraints do not constrain it, so its marginal is its prior.`);
     });
   }
 

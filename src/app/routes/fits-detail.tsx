@@ -6,6 +6,7 @@ import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
 import { ScorecardTable } from '../../features/constraints/components/scorecard-table.tsx';
 import { useFit } from '../../features/fits/api/get-fit.ts';
 import { FitResults } from '../../features/fits/components/fit-results.tsx';
+import { CancelFitControl } from '../../features/fits/components/cancel-fit-control.tsx';
 import { ResumeFitButton } from '../../features/fits/components/resume-fit-button.tsx';
 import { roleAtLeast } from '../../../shared/contracts/roles.ts';
 
@@ -23,7 +24,11 @@ export function Component() {
             description={`“${detail.scenarioName}” against “${detail.constraintSetName}”: ${detail.pointCount.toLocaleString('en-US')} grid points × ${detail.systems.toLocaleString('en-US')} systems, seed “${detail.seed}”, engine ${detail.engineVersion}.`}
           />
           {roleAtLeast(me.role, 'modeller') ? <ResumeFitButton departmentId={me.department.id} fit={detail} /> : null}
-          <FitResults fit={detail} scorecard={(evaluation) => <ScorecardTable evaluation={evaluation} />} />
+          <FitResults
+            fit={detail}
+            scorecard={(evaluation) => <ScorecardTable evaluation={evaluation} />}
+            progressActions={detail.ownerUserId === me.user.id || roleAtLeast(me.role, 'modeller') ? <CancelFitControl departmentId={me.department.id} fit={detail} /> : null}
+          />
         </>
       )}
     </QueryState>

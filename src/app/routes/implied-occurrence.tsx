@@ -7,6 +7,7 @@ import { PageHeader } from '../../components/ui/page-header.tsx';
 import { paths } from '../../config/paths.ts';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
 import { RunCostNotice } from '../../features/billing/components/run-cost-notice.tsx';
+import { CancelFitControl } from '../../features/fits/components/cancel-fit-control.tsx';
 import { ImpliedAnswer, ImpliedFitAnswer } from '../../features/implied/components/implied-answer.tsx';
 import { ImpliedForm } from '../../features/implied/components/implied-form.tsx';
 import { useSampleChoices } from '../../lib/api/scenario-choices.ts';
@@ -58,7 +59,18 @@ export function Component() {
             }
           />
         </Card>
-        {fitId && <ImpliedFitAnswer key={fitId} departmentId={me.department.id} fitId={fitId} />}
+        {fitId && (
+          <ImpliedFitAnswer
+            key={fitId}
+            departmentId={me.department.id}
+            fitId={fitId}
+            progressActions={(a) =>
+              a.ownerUserId === me.user.id || roleAtLeast(me.role, 'modeller') ? (
+                <CancelFitControl departmentId={me.department.id} fit={{ id: a.fitId, status: a.status, progress: a.progress, costCredits: a.costCredits }} label="Cancel the question" />
+              ) : null
+            }
+          />
+        )}
         {!fitId && runId && sampleId && <ImpliedAnswer key={`${runId}-${sampleId}`} departmentId={me.department.id} runId={runId} sampleId={sampleId} settingCaveat={settingCaveat} />}
       </div>
     </>

@@ -1,22 +1,49 @@
 import type { ReactNode } from 'react';
 import type { FitDetail } from '../../../../shared/contracts/fits.ts';
+import { intervalCaveat } from '../../../../shared/contracts/fit-interval-words.ts';
 import { VegaChart } from '../../../components/charts/vega-chart.tsx';
 import { Alert } from '../../../components/ui/alert.tsx';
+import { Badge } from '../../../components/ui/badge.tsx';
+import { formatDateTimeUtc } from '../../../lib/format.ts';
 import { Card } from '../../../components/ui/card.tsx';
 import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
 import { ProgressHeadline } from '../../../components/ui/progress-headline.tsx';
 import { marginalSpec } from '../../../components/charts/marginal-spec.ts';
 import { pairSpec } from './fit-chart-specs.ts';
-import { fitProgressText } from './fit-progress-text.ts';
+import { cancelledFitText, fitProgressText } from './fit-progress-text.ts';
 
 const num = (x: number) => String(Number(x.toPrecision(3)));
+const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
-/** Progress while the grid computes, then the posterior: marginals with 68/95% shaded, the corner plot, the best point, the sentence. */
-export function FitResults({ fit, scorecard }: { fit: FitDetail; scorecard?: (evaluation: NonNullable<FitDetail['posterior']>['bestPoint']['evaluation']) => ReactNode }) {
+/**
+ * Progress while the grid computes (with `progressActions`, e.g. a way to cancel), then the posterior:
+ * marginals with 68/95% shaded, the corner plot, the best point, the sentence. A cancelled fit says
+ * how far it got and that nothing of it was kept.
+ */
+export function FitResults({
+  fit,
+  scorecard,
+  progressActions,
+}: {
+  fit: FitDetail;
+  scorecard?: (evaluation: NonNullable<FitDetail['posterior']>['bestPoint']['evaluation']) => ReactNode;
+  progressActions?: ReactNode;
+}) {
+  if (fit.status === 'cancelled') {
+    return (
+      <Card title="Cancelled" actions={<Badge tone="warning">Cancelled</Badge>}>
+        <p data-testid="fit-cancelled">{cancelledFitText(fit, fit.finishedAt ? formatDateTimeUtc(fit.finishedAt) : null)}</p>
+      </Card>
+    );
+  }
   if (fit.status === 'queued' || fit.status === 'running') {
     const percent = `${(100 * fit.progress).toFixed(1)}%`;
     return (
-      <Card title="Progress" description={`${fit.pointCount.toLocaleString('en-US')} grid points × ${fit.systems.toLocaleString('en-US')} systems, one pass over the same draws.`}>
+      <Card
+        title="Progress"
+        description={`${fit.pointCount.toLocaleString('en-US')} grid points × ${fit.systems.toLocaleString('en-US')} systems, one pass over the same draws.`}
+        actions={progressActions}
+      >
         <div className="flex flex-col gap-3">
           <ProgressHeadline percent={percent} status={fitProgressText(fit)} />
           <ProgressBar
@@ -33,7 +60,7 @@ export function FitResults({ fit, scorecard }: { fit: FitDetail; scorecard?: (ev
       </Card>
     );
   }
-  if (!fit.posterior) return <Alert message={fit.error ?? `The fit ${fit.status === 'cancelled' ? 'was cancelled' : 'has no posterior'}.`} />;
+  if (!fit.posterior) return <Alert message={fit.error ?? 'The fit has no posterior.'} />;
   const post = fit.posterior;
   const n = post.parameters.length;
   return (
@@ -44,11 +71,11 @@ export function FitResults({ fit, scorecard }: { fit: FitDetail; scorecard?: (ev
           <Alert key={w} tone="info" message={w} className="mt-3" />
         ))}
       </Card>
-      <Card title="Intervals" description="Central credible intervals of each marginal; the peak is the marginal's highest grid value.">
+      <Card title="Intervals" description="Central credible intervals of each marginal; the peak is the marginal's highest grid value. An interval cut by the grid's edge, or the prior's own where the likelihood is flat, says so.">
         <table className="w-full text-sm" data-testid="fit-intervals">
           <thead>
             <tr className="text-left text-foam-300">
-              <th>Parameter</th><th>Peak</th><th>68%</th><th>95%</th>
+              <th>Parameter</th><th>Peak</th><th>68%</th><th>95%</th><th>Note</th>
             </tr>
           </thead>
           <tbody>
@@ -58,6 +85,7 @@ export function FitResults({ fit, scorecard }: { fit: FitDetail; scorecard?: (ev
                 <td>{num(iv.best)}</td>
                 <td>{num(iv.lo68)} – {num(iv.hi68)}</td>
                 <td>{num(iv.lo95)} – {num(iv.hi95)}</td>
+                <td className="text-foam-300">{capital(intervalCaveat(iv, fit.grid[i], post.parameters[i].unit) ?? '—')}</td>
               </tr>
             ))}
           </tbody>
@@ -84,7 +112,7 @@ export function FitResults({ fit, scorecard }: { fit: FitDetail; scorecard?: (ev
       </Card>
       <Card
         title="Best point"
-        description={`The grid point of highest likelihood: ${Object.entries(post.bestPoint.values).map(([path, v]) => `${post.parameters.find((p) => p.path === path)?.label ?? path} = ${num(v)}`).join(', ')}; ln L = ${post.bestPoint.logLikelihood === null ? '—' : post.bestPoint.logLikelihood.toFixed(2)}${post.bestPoint.goodnessOfFit.sigma !== null ? `, goodness of fit ${post.bestPoint.goodnessOfFit.sigma.toFixed(1)}σ` : ''}.`}
+        description={`The grid point of highest likelihood: ${Object.entries(post.bestPoint.values).map(([path, v]) => `${post.parameters.find((p) => p.path === path)?.label ?? path} = ${num(v)}${post.intervals.find((iv) => iv.path === path)?.flat ? ' (any grid value: the likelihood is flat along it)' : ''}`).join(', ')}; ln L = ${post.bestPoint.logLikelihood === null ? '—' : post.bestPoint.logLikelihood.toFixed(2)}${post.bestPoint.goodnessOfFit.sigma !== null ? `, goodness of fit ${post.bestPoint.goodnessOfFit.sigma.toFixed(1)}σ` : ''}.`}
       >
         {scorecard ? scorecard(post.bestPoint.evaluation) : <p>{post.bestPoint.evaluation.combined.verdict}</p>}
       </Card>

@@ -20,7 +20,7 @@ import { ApiError } from '../../../lib/api-client.ts';
 import { useImpliedOccurrence, type ImpliedAnswerResponse } from '../api/get-implied-occurrence.ts';
 import { useImpliedAnswer } from '../api/get-implied-answer.ts';
 import { useImpliedRun } from '../api/get-implied-run.ts';
-import { curveEnds, etaText, impliedSentence, occurrenceRows, scaledOccurrence, type ImpliedAnswer as ImpliedRange, type OccurrenceRow } from './implied-text.ts';
+import { cancelledQuestionText, curveEnds, etaText, impliedSentence, occurrenceRows, scaledOccurrence, type ImpliedAnswer as ImpliedRange, type OccurrenceRow } from './implied-text.ts';
 import { useScenarioChoice } from '../../../lib/api/scenario-choices.ts';
 import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
 
@@ -48,15 +48,15 @@ interface AnswerView {
   methods: string | null;
 }
 
-/** Follows the fit that answers the question, then states both answers side by side. */
-export function ImpliedFitAnswer({ departmentId, fitId }: { departmentId: string; fitId: string }) {
+/** Follows the fit that answers the question (with `progressActions` while it computes, e.g. a way to cancel), then states both answers side by side. */
+export function ImpliedFitAnswer({ departmentId, fitId, progressActions }: { departmentId: string; fitId: string; progressActions?: (answer: ImpliedOccurrenceAnswer) => ReactNode }) {
   const query = useImpliedAnswer(departmentId, fitId);
   return (
     <Card title="The answer" description="The one-parameter fit over the multiplier: every grid value of m from the same draws, in one pass. It answers twice, with two different quantities.">
       <QueryState query={query} loadingLabel="Loading the question…" errorTitle="The question could not be loaded">
         {(a) => {
-          if (a.status === 'queued' || a.status === 'running') return <FitProgress answer={a} />;
-          if (a.status === 'cancelled') return <Alert tone="info" message="The fit was cancelled before it finished, so there is no answer. Ask again above." />;
+          if (a.status === 'queued' || a.status === 'running') return <FitProgress answer={a} actions={progressActions?.(a)} />;
+          if (a.status === 'cancelled') return <Alert tone="info" message={<span data-testid="implied-cancelled">{cancelledQuestionText(a)}</span>} />;
           if (!a.confidence) return <ErrorState title="The fit failed" error={new ApiError({ status: 200, code: 'fit_failed', message: a.error ?? 'The fit stopped without saying why.' })} />;
           return <AnswerBody departmentId={departmentId} view={fitView(a, a.confidence)} />;
         }}
@@ -91,11 +91,11 @@ function fractionOnCurve(curve: ImpliedRange['curve'], m: number): number {
   return a.fraction + ((b.fraction - a.fraction) * (m - a.multiplier)) / (b.multiplier - a.multiplier);
 }
 
-function FitProgress({ answer }: { answer: ImpliedOccurrenceAnswer }) {
+function FitProgress({ answer, actions }: { answer: ImpliedOccurrenceAnswer; actions?: ReactNode }) {
   const percent = Math.round(100 * answer.progress);
   const words = answer.status === 'queued' ? 'Queued: the fit starts when a worker is free.' : `Running: ${percent}% of the draws done for all ${answer.pointCount} values of m.`;
   const about = `${answer.systems.toLocaleString('en-US')} systems of “${answer.scenarioName}” per value of m, seed “${answer.seed}”. This page follows the fit; you may also leave and come back through its link.`;
-  return <ProgressBlock label="Fit progress" percent={percent} words={words} about={about} />;
+  return <ProgressBlock label="Fit progress" percent={percent} words={words} about={about} actions={actions} />;
 }
 
 /** An answer from before implied occurrence was a fit: one run, the confidence range only. */
@@ -129,7 +129,7 @@ function RunProgress({ run }: { run: RunSummary }) {
 }
 
 /** A queued or running job: what is happening (announced politely), the bar, and what is being computed. */
-function ProgressBlock({ label, percent, words, about }: { label: string; percent: number; words: string; about: string }) {
+function ProgressBlock({ label, percent, words, about, actions }: { label: string; percent: number; words: string; about: string; actions?: ReactNode }) {
   return (
     <div className="flex flex-col gap-3">
       <p className="font-bold text-foam-50" aria-live="polite">
@@ -137,6 +137,7 @@ function ProgressBlock({ label, percent, words, about }: { label: string; percen
       </p>
       <ProgressBar label={label} value={percent} max={100} valueText={words} />
       <p className="text-sm text-foam-400">{about}</p>
+      {actions ? <div className="flex flex-wrap gap-2">{actions}</div> : null}
     </div>
   );
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { etaText, impliedSentence, multiplierRangeWords, occurrenceRows, scaledOccurrence } from './implied-text.ts';
+import { etaText, impliedSentence, multiplierRangeWords, occurrenceRows, scaledOccurrence, cancelledQuestionText } from './implied-text.ts';
 
 // A response like the demo baseline against 9 of 78 (the server's answer for that run, rounded).
 const curve = [
@@ -51,5 +51,15 @@ describe('etaText', () => {
     expect(etaText(0.2)).toBe('about 1 s left');
     expect(etaText(42)).toBe('about 42 s left');
     expect(etaText(400)).toBe('about 7 min left');
+  });
+});
+
+describe('cancelledQuestionText', () => {
+  // The server refunds the whole reservation on cancel and deletes the checkpoint (billing settleRun, run-scheduler cancel).
+  it('says how far the fit got, that it was discarded, and what came back', () => {
+    expect(cancelledQuestionText({ progress: 0.25, costCredits: 13 })).toBe(
+      'Cancelled after 25% of its one pass, which was discarded: there is no answer. Its whole reservation was given back (13 credits, and any free systems taken from this month’s allowance). Ask again above.',
+    );
+    expect(cancelledQuestionText({ progress: 0, costCredits: 0 })).toMatch(/^Cancelled before its first chunk was computed: there is no answer\. Its whole reservation was given back \(any free systems/);
   });
 });

@@ -79,3 +79,17 @@ export function etaText(seconds: number | null): string | null {
   const s = Math.max(1, Math.round(seconds));
   return s < 90 ? `about ${s} s left` : `about ${Math.round(s / 60)} min left`;
 }
+
+/**
+ * A cancelled question in words: how far its fit got, that nothing of it was kept (the server
+ * deletes a cancelled job's checkpoint) and that the whole reservation was given back (billing's
+ * refund on cancel, also for the part computed).
+ * Example: progress 0.25, 13 credits → "Cancelled after 25% of its one pass, which was discarded:
+ * there is no answer. Its whole reservation was given back (13 credits, and any free systems taken
+ * from this month’s allowance). Ask again above."
+ */
+export function cancelledQuestionText(answer: { progress: number; costCredits: number | null }): string {
+  const reached = answer.progress > 0 ? `Cancelled after ${formatSignificant(100 * answer.progress, 2)}% of its one pass, which was discarded` : 'Cancelled before its first chunk was computed';
+  const credits = answer.costCredits === null || answer.costCredits === 0 ? '' : `${answer.costCredits.toLocaleString('en-US')} credit${answer.costCredits === 1 ? '' : 's'}, and `;
+  return `${reached}: there is no answer. Its whole reservation was given back (${credits}any free systems taken from this month’s allowance). Ask again above.`;
+}

@@ -1,9 +1,6 @@
-import { useState } from 'react';
 import type { RunSummary } from '../../../../shared/contracts/runs.ts';
-import { Button } from '../../../components/ui/button.tsx';
 import { Card } from '../../../components/ui/card.tsx';
-import { ConfirmDialog } from '../../../components/ui/confirm-dialog.tsx';
-import { errorMessage } from '../../../components/ui/error-state.tsx';
+import { ConfirmedAction } from '../../../components/ui/confirmed-action.tsx';
 import { Spinner } from '../../../components/ui/spinner.tsx';
 import { useCancelRun } from '../api/cancel-run.ts';
 import type { ProgressSource } from '../hooks/use-live-run.ts';
@@ -28,7 +25,6 @@ function etaText(run: RunSummary): string {
 /** A queued or running run: a progress bar with chunks done and the time left, and a way to cancel. */
 export function RunProgressCard({ departmentId, run, source, canCancel }: RunProgressCardProps) {
   const cancel = useCancelRun(departmentId);
-  const [confirming, setConfirming] = useState(false);
   const percent = Math.floor(run.progress * 100);
   const label = run.status === 'queued' ? 'Queued' : `Running: ${percent}%`;
 
@@ -38,15 +34,16 @@ export function RunProgressCard({ departmentId, run, source, canCancel }: RunPro
       description="You can leave this page: the run carries on, and its results appear here when it ends."
       actions={
         canCancel && (
-          <Button
-            variant="danger"
-            onClick={() => {
-              cancel.reset();
-              setConfirming(true);
-            }}
+          <ConfirmedAction
+            label="Cancel the run"
+            title="Cancel this run?"
+            confirmLabel="Cancel the run"
+            cancelLabel="Keep it running"
+            action={cancel}
+            input={run.id}
           >
-            Cancel the run
-          </Button>
+            A cancelled run keeps no result; the credits and free systems reserved for it are given back. It stays in the list as cancelled.
+          </ConfirmedAction>
         )
       }
     >
@@ -66,20 +63,6 @@ export function RunProgressCard({ departmentId, run, source, canCancel }: RunPro
           {source === 'stream' ? 'live updates' : 'updates every 2 s (the live stream is unavailable)'}
         </p>
       </div>
-
-      <ConfirmDialog
-        open={confirming}
-        title="Cancel this run?"
-        confirmLabel="Cancel the run"
-        cancelLabel="Keep it running"
-        tone="danger"
-        pending={cancel.isPending}
-        error={cancel.isError ? errorMessage(cancel.error) : undefined}
-        onConfirm={() => cancel.mutate(run.id, { onSuccess: () => setConfirming(false) })}
-        onCancel={() => setConfirming(false)}
-      >
-        A cancelled run keeps no result; the credits and free systems reserved for it are given back. It stays in the list as cancelled.
-      </ConfirmDialog>
     </Card>
   );
 }

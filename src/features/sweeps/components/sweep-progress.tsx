@@ -1,9 +1,8 @@
-import { useState } from 'react';
 import type { SweepDetail } from '../../../../shared/contracts/sweeps.ts';
 import { Badge } from '../../../components/ui/badge.tsx';
 import { Button } from '../../../components/ui/button.tsx';
 import { Card } from '../../../components/ui/card.tsx';
-import { ConfirmDialog } from '../../../components/ui/confirm-dialog.tsx';
+import { ConfirmedAction } from '../../../components/ui/confirmed-action.tsx';
 import { errorMessage } from '../../../components/ui/error-state.tsx';
 import { DescriptionList } from '../../../components/ui/description-list.tsx';
 import { formatDateTimeUtc } from '../../../lib/format.ts';
@@ -18,7 +17,6 @@ import { ProgressBar } from '../../../components/ui/progress-bar.tsx';
 export function SweepProgress({ departmentId, detail, canCancel, scenarioName }: { departmentId: string; detail: SweepDetail; canCancel: boolean; scenarioName: string }) {
   const cancel = useCancelSweep(departmentId);
   const resume = useResumeSweep(departmentId);
-  const [confirming, setConfirming] = useState(false);
   const progress = pointsProgress(detail);
   const live = isSweepLive(detail.status);
   const missing = missingPoints(detail);
@@ -32,16 +30,18 @@ export function SweepProgress({ departmentId, detail, canCancel, scenarioName }:
       title="Progress"
       actions={
         live && canCancel ? (
-          <Button
-            variant="danger"
+          <ConfirmedAction
+            label="Cancel the sweep"
+            title="Cancel the sweep?"
+            confirmLabel="Cancel the remaining points"
+            cancelLabel="Keep it running"
             size="sm"
-            onClick={() => {
-              cancel.reset();
-              setConfirming(true);
-            }}
+            action={cancel}
+            input={detail.id}
           >
-            Cancel the sweep
-          </Button>
+            The points are computed together in one pass, so every point that has not finished stops. Each one’s reserved credit is given back in full (a
+            refund entry per point in the credit ledger), also for the part already computed, and that part is discarded: a cancelled sweep cannot be resumed.
+          </ConfirmedAction>
         ) : failed && canCancel ? (
           <Button size="sm" pending={resume.isPending} onClick={() => resume.mutate(detail.id)}>
             Resume the sweep
@@ -74,19 +74,6 @@ export function SweepProgress({ departmentId, detail, canCancel, scenarioName }:
           { term: 'Created', description: formatDateTimeUtc(detail.createdAt) },
         ]}
       />
-      <ConfirmDialog
-        open={confirming}
-        title="Cancel the sweep?"
-        confirmLabel="Cancel the remaining points"
-        cancelLabel="Keep it running"
-        tone="danger"
-        pending={cancel.isPending}
-        error={cancel.isError ? errorMessage(cancel.error) : undefined}
-        onConfirm={() => cancel.mutate(detail.id, { onSuccess: () => setConfirming(false) })}
-        onCancel={() => setConfirming(false)}
-      >
-        Points still queued or running stop, and their reserved credit is given back. Points that have finished keep their results.
-      </ConfirmDialog>
     </Card>
   );
 }
