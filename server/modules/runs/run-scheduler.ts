@@ -9,7 +9,7 @@ import { buildResult } from '../../../shared/engine/result/build-result.ts';
 import { RunAbortedError, type ChunkExecutor } from '../../engine-pool/chunk-executor.ts';
 import type { Db } from '../../db/client.ts';
 import { ChunkSet } from './chunk-set.ts';
-import { retryWhileDatabaseDown } from './database-retry.ts';
+import { isDatabaseUnavailable, retryWhileDatabaseDown } from './database-retry.ts';
 import { resultBinRows } from './result-bins.ts';
 import type { RunEvents } from './run-events.ts';
 import {
@@ -368,7 +368,13 @@ export function createRunScheduler(deps: {
       return;
     }
     ticking = tick()
-      .catch((error: unknown) => logger.error({ err: error }, 'scheduler tick failed'))
+      .catch((error: unknown) =>
+        // A deadlock or a dropped connection (e.g. the lease renewal against a concurrent cancel) is
+        // transient: the next tick does the same work again, well inside the lease.
+        isDatabaseUnavailable(error)
+          ? logger.warn({ err: error }, 'scheduler tick hit a transient database error; the next tick retries')
+          : logger.error({ err: error }, 'scheduler tick failed'),
+      )
       .finally(() => {
         ticking = null;
         if (again) {
