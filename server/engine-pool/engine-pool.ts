@@ -17,7 +17,7 @@ export function defaultWorkerCount(): number {
 /** A piscina pool of engine workers, one thread per worker, kept alive while idle for 30 s. */
 export function createEnginePool(options: { workers?: number; filename?: string } = {}): Piscina {
   const threads = options.workers ?? defaultWorkerCount();
-  return new Piscina({
+  const pool = new Piscina({
     filename: options.filename ?? TASK_FILE,
     minThreads: threads,
     maxThreads: threads,
@@ -27,4 +27,13 @@ export function createEnginePool(options: { workers?: number; filename?: string 
     // systems adds ~6 MB with 4 MB, ~23 MB with V8's default) at no measurable cost in speed.
     resourceLimits: { maxYoungGenerationSizeMb: 4 },
   });
+  // Aborting a task that a thread is already running (a cancelled run, the rest of a failed one) can
+  // cross the thread's reply: piscina then emits 'error' for a reply to a task it no longer holds,
+  // which with no listener is an uncaught exception. That reply is expected and carries nothing
+  // anyone waits for; any other pool error still reaches the executors' listeners, or is thrown.
+  pool.on('error', (error: unknown) => {
+    if (error instanceof Error && error.message.startsWith('Unexpected message from Worker')) return;
+    if (pool.listenerCount('error') === 1) throw error;
+  });
+  return pool;
 }
