@@ -27,7 +27,7 @@ export const UNIFORM_SCALE = 2 ** -32;
  * 8 ns per draw in the kernel against 2.5 ns in one long-lived generator (measured 2026-12-05).
  * seedrandom still seeds the stream (its exported xor4096 state) and is the reference: random.test.ts
  * checks every draw equal to chunkUniform's. The step is xorgens (Brent, R. P. 2006, "Some
- * long-period random number generators using shifts and xors", ANZIAM J. 48, C188) with a Weyl
+ * long-period random number generators using shifts and xors", ANZIAM J. 48, C188; from memory) with a Weyl
  * sequence, as seedrandom's xor4096.js writes it.
  */
 export class ChunkStream {
