@@ -9,6 +9,7 @@ import { buildEngulfmentGrid, commonEnvelopeOnset } from '../shared/engine/physi
 import { chunkUniform } from '../shared/engine/random.ts';
 import { CHUNK_SYSTEMS } from '../shared/engine/version.ts';
 import { createEnginePool } from '../server/engine-pool/engine-pool.ts';
+import { floorSystemsPerSecond } from './kernel-floor.ts';
 import { sweepCostRatio } from './points.ts';
 import { runScenario } from '../server/engine-pool/run-scenario.ts';
 
@@ -155,6 +156,11 @@ target('20-point α_CE sweep ≤ 3 runs (track)', trackSweepRatio <= 3, `${fmt(t
   process.stdout.write('\nsingle-run kernel\n');
   line("draws' time per system (fixedReach)", fmt(fixedDraws));
   line("draws' time per system (track)", fmt(trackDraws));
+  // What the draws, table reads and counts cost with no physics at all (bench/kernel-floor.ts):
+  // the part of the figure above that no change to the fates can remove.
+  const floorDraws = draws / floorSystemsPerSecond(fixed, 60);
+  line("floor: draws and counts only, no fates (fixedReach)", fmt(floorDraws));
+  line('kernel / floor (fixedReach)', fmt(fixedDraws / floorDraws));
   target("≤ 40 draws' time per system (fixedReach)", fixedDraws <= 40, `${fmt(fixedDraws)}`);
 }
 // ---- end of the single-run kernel block ------------------------------------------------------------
