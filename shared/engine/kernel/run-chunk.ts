@@ -195,8 +195,10 @@ class Outcome {
   readonly fate = new Int8Array(MAX_ROWS);
   readonly separation = new Float64Array(MAX_ROWS);
 }
-/** The first point's outcome (the reference) and the current point's. */
+/** The first point's outcome (the reference), and two more that the later points take in turn. */
 const reference = new Outcome();
+const outcomeA = new Outcome();
+const outcomeB = new Outcome();
 /**
  * Point 0's counts while a chunk runs: one tally that every chunk clears and reuses, and a copy
  * returned at the end. A tally that lives through a whole chunk outlasts the young generation, and
@@ -204,7 +206,6 @@ const reference = new Outcome();
  * systems before a full collection; the returned copy dies young.
  */
 let referenceTally: ChunkTally | null = null;
-const current = new Outcome();
 
 /**
  * Runs chunk `chunkIndex` of the prepared scenario: draws its systems from the generator
@@ -231,9 +232,10 @@ export function runChunk(prepared: PreparedScenario, chunkIndex: number): ChunkT
  * runChunk of the scenario with point p's values. The draws and everything that follows from
  * them alone (lifetime, IFMR, Kepler, the engulfment onset, radii) are computed once per system;
  * each point decides the companions' fates, fields and the selection. Point 0 is tallied as is;
- * another point is tallied only where its outcome differs from point 0's (its own counts added,
- * point 0's taken away), and point 0's counts are added to it at the end: exact, since every
- * count is an integer. `prepared` must be the preparation of any of the points (their draws agree).
+ * point p > 0 keeps only the change from point p − 1, where the two outcomes differ (p's counts
+ * added, p − 1's taken away), and the counts are summed along the points at the end: exact, since
+ * every count is an integer. Along a grid most systems change at a few points only, so a system
+ * touches a few tallies, not every point's. `prepared` must be the preparation of any of the points (their draws agree).
  */
 export function runChunkForPoints(prepared: PreparedScenario, points: readonly PreparedPoint[], chunkIndex: number): ChunkTally[] {
   const first = chunkIndex * CHUNK_SYSTEMS;
@@ -294,8 +296,10 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
       systemNow[FOSSIL_DEVIATE] = normalQuantile(rng.uniform() + HALF_STEP);
     }
     systemNow[FOSSIL_UNIFORM] = uFossil;
-    // Whether this system's outcome can differ between the points (false: point 0's counts hold for all).
-    let varies = spread.fossilVaries && uFossil < spread.maxFossilFraction && m1 >= fossilLoMsun && m1 <= fossilHiMsun;
+    // Whether this system's fates or fields can differ between the points, and whether which
+    // companions are present can (neither: point 0's counts hold for all).
+    let fatesVary = spread.fossilVaries && uFossil < spread.maxFossilFraction && m1 >= fossilLoMsun && m1 <= fossilHiMsun;
+    let presenceVaries = false;
 
     for (let r = 0; r < rowCount; r++) {
       const row = rows[r];
@@ -309,15 +313,24 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
       rowOccurrence[r] = occurrence;
       rowDrawThreshold[r] = drawThreshold;
       drawnCompanion(r, row, track);
-      if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : insideReach(r, spread.maxReachAU, spread.maxReachOutsideLog10A3)) && !destroyedAtEveryPoint(prepared, points, logs, spread, r)) varies = true;
-      if (spread.multiplierVaries && (row.hostMassSlope !== 0 || (u >= spread.minPresent[r] && u < spread.maxPresent[r]))) varies = true;
+      if (spread.fateVaries && (track ? rowEngulfed[r] === 1 : insideReach(r, spread.maxReachAU, spread.maxReachOutsideLog10A3)) && !destroyedAtEveryPoint(prepared, points, logs, spread, r)) fatesVary = true;
+      if (spread.multiplierVaries && (row.hostMassSlope !== 0 || (u >= spread.minPresent[r] && u < spread.maxPresent[r]))) presenceVaries = true;
     }
-    const pointsToEvaluate = varies ? pointCount : 1;
+    const pointsToEvaluate = fatesVary || presenceVaries ? pointCount : 1;
+    // If only presence varies, a point with the same companions present as the point before has
+    // that point's outcome: it is not evaluated (and adds no change).
+    let presence = fatesVary ? 0 : presenceMask(points[0], rows, rowCount);
+    let before = reference;
 
     // Magnitude-limited acceptance at the IFMR mass, computed once if a point needs it.
     let acceptanceAtIfmr = NaN;
     for (let p = 0; p < pointsToEvaluate; p++) {
-      const out = p === 0 ? reference : current;
+      if (p > 0 && !fatesVary) {
+        const mask = presenceMask(points[p], rows, rowCount);
+        if (mask === presence) continue;
+        presence = mask;
+      }
+      const out = p === 0 ? reference : before === outcomeA ? outcomeB : outcomeA;
       evaluatePoint(prepared, points[p], logs[p], out);
       if (out.accepted && magnitudeLimited) {
         const selection = prepared.selection as Extract<PreparedScenario['selection'], { kind: 'magnitudeLimited' }>;
@@ -329,16 +342,20 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
         out.accepted = uSelect < accept;
       }
       if (p === 0) tallyOutcome(tallies[0], reference, 1, rowCount);
-      else if (!sameOutcome(reference, current, rowCount)) {
-        tallyOutcome(tallies[p], current, 1, rowCount);
-        tallyOutcome(tallies[p], reference, -1, rowCount);
+      else {
+        if (!sameOutcome(before, out, rowCount)) {
+          tallyOutcome(tallies[p], out, 1, rowCount);
+          tallyOutcome(tallies[p], before, -1, rowCount);
+        }
+        before = out;
       }
     }
   }
 
+  // Point p's counts: point 0's plus the changes of points 1 … p (the chunk's scalars are set after).
+  for (let p = 1; p < pointCount; p++) addCountsInto(tallies[p], tallies[p - 1]);
   for (let p = 0; p < pointCount; p++) {
     const tally = tallies[p];
-    if (p > 0) addCountsInto(tally, tallies[0]);
     tally.chunks = 1;
     tally.systems = n;
     tally.whiteDwarfsFormed = whiteDwarfsFormed;
@@ -523,6 +540,20 @@ function fillFieldDeviate(): void {
   if (Number.isNaN(systemNow[FIELD_DEVIATE])) systemNow[FIELD_DEVIATE] = normalQuantile(systemNow[FIELD_UNIFORM] + HALF_STEP);
 }
 
+/** The rows whose drawn companion is present at the point, as bits (row r: bit r). */
+function presenceMask(point: PreparedPoint, rows: readonly PreparedRow[], rowCount: number): number {
+  let mask = 0;
+  for (let r = 0; r < rowCount; r++) {
+    if (rowDrawn[r] === 1 && presentAt(point, rows[r], r)) mask |= 1 << r;
+  }
+  return mask;
+}
+
+/** true iff drawn companion r is present at the point's multiplier (its presence uniform below the point's threshold). */
+function presentAt(point: PreparedPoint, row: PreparedRow, r: number): boolean {
+  return rowU[r] < (row.hostMassSlope === 0 ? point.presentThresholds[r] : Math.min(rowDrawThreshold[r], rowOccurrence[r] * point.multiplier));
+}
+
 /** a0 < reachAU for companion r; an orbit whose lower bound of log10 a0³ is above outsideLog10A3 is outside without computing a0. */
 function insideReach(r: number, reachAU: number, outsideLog10A3: number): boolean {
   if (rowLog10A3Floor[r] > outsideLog10A3) return false;
@@ -554,7 +585,7 @@ function evaluatePoint(prepared: PreparedScenario, point: PreparedPoint, logs: P
     if (rowDrawn[r] === 0) continue;
     const u = rowU[r];
     const occurrence = rowOccurrence[r];
-    const present = u < (rows[r].hostMassSlope === 0 ? point.presentThresholds[r] : Math.min(rowDrawThreshold[r], occurrence * point.multiplier));
+    const present = presentAt(point, rows[r], r);
     // An absent companion outside the giant's reach neither counts nor makes a field.
     if (!present && (track ? rowEngulfed[r] === 0 : rowLog10A3Floor[r] > logs.reachOutsideLog10A3)) continue;
     companionFate(prepared, point, logs, r, present);

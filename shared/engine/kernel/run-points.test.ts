@@ -140,6 +140,26 @@ describe('multi-point kernel: each point equals a separate run', { timeout: 120_
     });
   }
 
+  // The kernel tallies each point as a change from the point before it, and skips a point whose
+  // companions present are those of the point before when only presence varies for the system:
+  // grids in both orders, and a multiplier that goes up and comes back, must still equal separate runs.
+  it('grids in either order and revisited values: every point equals a separate run', () => {
+    const scenario = parseScenario(base);
+    const prepared = prepareScenario(scenario);
+    const multipliers = [0.3, 2.5, 0.3, 1.4, 1.4, 0.3];
+    const alphas = [0.05, 3, 0.4];
+    const grids: PointValues[][] = [
+      multipliers.map((m) => ({ 'companions.multiplier': m })),
+      multipliers.flatMap((m) => alphas.map((a) => ({ 'companions.multiplier': m, 'envelope.alpha': a }))),
+      alphas.flatMap((a) => multipliers.map((m) => ({ 'companions.multiplier': m, 'envelope.alpha': a }))),
+      multipliers.flatMap((m) => [0.1, 300, 0.1].map((t) => ({ 'companions.multiplier': m, 'field.thresholdMG': t }))),
+    ];
+    for (const points of grids) {
+      const tallies = runChunkPoints(prepared, preparePoints(scenario, prepared, points), 0);
+      points.forEach((values, p) => expect(tallies[p], JSON.stringify(values)).toEqual(separateRun(base, values)));
+    }
+  }, 120_000);
+
   it('the one-point pass is the single run, and the scenario hashes are those of the points’ scenarios', () => {
     const scenario = parseScenario(base);
     const prepared = prepareScenario(scenario);
