@@ -319,7 +319,7 @@ export function runChunkForPoints(prepared: PreparedScenario, points: readonly P
     const pointsToEvaluate = fatesVary || presenceVaries ? pointCount : 1;
     // If only presence varies, a point with the same companions present as the point before has
     // that point's outcome: it is not evaluated (and adds no change).
-    let presence = fatesVary ? 0 : presenceMask(points[0], rows, rowCount);
+    let presence = pointsToEvaluate > 1 && !fatesVary ? presenceMask(points[0], rows, rowCount) : 0;
     let before = reference;
 
     // Magnitude-limited acceptance at the IFMR mass, computed once if a point needs it.
