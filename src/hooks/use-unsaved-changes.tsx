@@ -11,15 +11,21 @@ export interface UnsavedChangesGuard {
 
 /**
  * While `dirty`, asks before the user leaves the page inside the app (to another path) and
- * lets the browser ask before the tab is closed or reloaded.
+ * lets the browser ask before the tab is closed or reloaded. With `search`, a new query on the
+ * same path asks too: for a page whose query chooses what is being edited (the new-scenario
+ * page keeps the example it started from in `?preset=`, and another example replaces the builder).
  */
-export function useUnsavedChanges(dirty: boolean, what: string): UnsavedChangesGuard {
+export function useUnsavedChanges(dirty: boolean, what: string, options: { search?: boolean } = {}): UnsavedChangesGuard {
   const released = useRef(false);
   const dirtyRef = useRef(dirty);
   dirtyRef.current = dirty;
   if (!dirty) released.current = false;
 
-  const blocker = useBlocker(({ currentLocation, nextLocation }) => dirtyRef.current && !released.current && currentLocation.pathname !== nextLocation.pathname);
+  const watchSearch = options.search ?? false;
+  const blocker = useBlocker(
+    ({ currentLocation, nextLocation }) =>
+      dirtyRef.current && !released.current && (currentLocation.pathname !== nextLocation.pathname || (watchSearch && currentLocation.search !== nextLocation.search)),
+  );
 
   useEffect(() => {
     if (!dirty) return;

@@ -146,6 +146,38 @@ describe('scenario builder', () => {
 });
 
 describe('overview', () => {
+  it('asks before another example replaces a builder with unsaved changes, keeps them on "Stay", and does not ask without changes', { timeout: 120_000 }, async () => {
+    const { page, context } = await stack.newPage();
+    try {
+      await stack.signIn(page, 'modeller');
+      await page.goto('/scenarios/new');
+      const examples = page.getByRole('navigation', { name: 'Start from' });
+      const example = examples.getByRole('link', { name: /Baseline, fixed engulfment reach/ });
+      await page.getByLabel('Scenario name').fill('My own start');
+      await example.click();
+      const dialog = page.getByRole('dialog', { name: 'Leave without saving?' });
+      await dialog.waitFor({ timeout: 10_000 });
+      await dialog.getByRole('button', { name: 'Stay on the page' }).click();
+      await dialog.waitFor({ state: 'hidden' });
+      expect(new URL(page.url()).search).toBe('');
+      expect(await page.getByLabel('Scenario name').inputValue()).toBe('My own start');
+
+      await example.click();
+      await dialog.getByRole('button', { name: 'Leave and lose the changes' }).click();
+      await page.getByText('Started from the example “Baseline, fixed engulfment reach”').waitFor({ timeout: 30_000 });
+      expect(new URL(page.url()).searchParams.get('preset')).toBe('baseline-fixed-reach');
+      expect(await page.getByLabel('Scenario name').inputValue()).toBe('');
+
+      // Nothing changed in the example's builder: going back to the blank one does not ask.
+      await examples.getByRole('link', { name: /^Blank/ }).click();
+      await page.waitForURL((url) => url.pathname === '/scenarios/new' && url.search === '');
+      await expect.poll(() => page.getByText('Started from the example').count(), { timeout: 30_000 }).toBe(0);
+      expect(await dialog.isVisible()).toBe(false);
+    } finally {
+      await context.close();
+    }
+  });
+
   it('offers a start to a department with no runs, then lists the run with its status and link', { timeout: 240_000 }, async () => {
     const { page, context } = await stack.newPage();
     try {

@@ -173,7 +173,7 @@ export function ScenarioBuilder({ departmentId, readOnly, baseline: initialBasel
     }
   }, [pendingFocus]);
 
-  const guard = useUnsavedChanges(changed && !readOnly, 'The scenario');
+  const guard = useUnsavedChanges(changed && !readOnly, 'The scenario', { search: isNew });
 
   async function submit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
