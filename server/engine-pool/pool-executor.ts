@@ -6,7 +6,7 @@ import { prepareScenario, type PreparedScenario } from '../../shared/engine/kern
 import { scenarioHash } from '../../shared/engine/kernel/scenario-hash.ts';
 import { unpackTally, type PackedTallies } from '../../shared/engine/kernel/packed-tally.ts';
 import type { ChunkTally } from '../../shared/engine/kernel/tally.ts';
-import { BATCH_RETRIES, BatchFailedError, pendingBatches, RunAbortedError, type BatchDone, type ChunkExecutor, type ExecuteRequest } from './chunk-executor.ts';
+import { BATCH_RETRIES, BatchFailedError, FinishedBatches, pendingBatches, RunAbortedError, type BatchDone, type ChunkExecutor, type ExecuteRequest } from './chunk-executor.ts';
 import type { ChunkBatchTask } from './chunk-task.ts';
 import { preparePointPasses } from './point-passes.ts';
 
@@ -77,11 +77,19 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
     const stop = () => local.abort(signal.reason);
     signal.addEventListener('abort', stop, { once: true });
     // A thread that cannot start makes the pool emit 'error' instead of rejecting a task.
-    let onPoolError: (error: unknown) => void = () => {};
-    const poolFailed = new Promise<never>((_, reject) => (onPoolError = reject));
-    poolFailed.catch(() => {});
+    let poolError: { error: unknown } | undefined;
+    let onFailure: ((error: unknown) => void) | undefined;
+    const onPoolError = (error: unknown) => {
+      poolError ??= { error };
+      onFailure?.(error);
+    };
     pool.on('error', onPoolError);
-    const inFlight = new Map<number, Promise<BatchDone>>();
+    const watchPool = (reject: (error: unknown) => void) => {
+      if (poolError) reject(poolError.error);
+      else onFailure = reject;
+      return () => (onFailure = undefined);
+    };
+    const inFlight = new FinishedBatches<BatchDone>();
     let next = 0;
     try {
       while (next < batches.length || inFlight.size > 0) {
@@ -90,11 +98,9 @@ export function createPoolExecutor(options: PoolExecutorOptions): ChunkExecutor 
           const done = runBatch({ prepared, chunks, passes, packed: true }, local.signal).then((tally): BatchDone =>
             'counts' in tally ? { batch, chunks, tally: unpackTally(tally, 0), pointTallies: tally } : { batch, chunks, tally },
           );
-          done.catch(() => {}); // observed by the race below; a late rejection after a failure is expected
-          inFlight.set(batch, done);
+          inFlight.add(done); // a late rejection after a failure is expected and handled there
         }
-        const finished = await Promise.race([poolFailed, ...inFlight.values()]);
-        inFlight.delete(finished.batch);
+        const finished = await inFlight.next(watchPool);
         if (signal.aborted) throw new RunAbortedError(signal.reason);
         yield finished;
       }

@@ -1,7 +1,7 @@
 import { Queue, QueueEvents, type Job } from 'bullmq';
 import type { Logger } from 'pino';
 import { packTallies } from '../../shared/engine/kernel/packed-tally.ts';
-import { BATCH_RETRIES, BatchFailedError, pendingBatches, RunAbortedError, type BatchDone, type ChunkExecutor, type ExecuteRequest } from '../engine-pool/chunk-executor.ts';
+import { BATCH_RETRIES, BatchFailedError, FinishedBatches, pendingBatches, RunAbortedError, type BatchDone, type ChunkExecutor, type ExecuteRequest } from '../engine-pool/chunk-executor.ts';
 import {
   cancelChannel,
   cancelledKey,
@@ -26,15 +26,14 @@ export interface RedisExecutorOptions {
 
 const DAY_S = 24 * 3600;
 
-function abortedPromise(signal: AbortSignal): { promise: Promise<never>; dispose(): void } {
-  let onAbort = () => {};
-  const promise = new Promise<never>((_, reject) => {
-    onAbort = () => reject(new RunAbortedError(signal.reason));
+/** firstFinished's watcher of the run's abort signal: rejects with RunAbortedError. */
+function watchAbort(signal: AbortSignal) {
+  return (reject: (error: unknown) => void) => {
+    const onAbort = () => reject(new RunAbortedError(signal.reason));
     if (signal.aborted) onAbort();
     else signal.addEventListener('abort', onAbort, { once: true });
-  });
-  promise.catch(() => {});
-  return { promise, dispose: () => signal.removeEventListener('abort', onAbort) };
+    return () => signal.removeEventListener('abort', onAbort);
+  };
 }
 
 /**
@@ -89,23 +88,15 @@ export function createRedisExecutor(options: RedisExecutorOptions): ChunkExecuto
     if (signal.aborted) throw new RunAbortedError(signal.reason);
     await queueEvents.waitUntilReady();
     const batches = pendingBatches(request.pending, options.batchChunks);
-    const aborted = abortedPromise(signal);
-    const inFlight = new Map<number, Promise<BatchDone>>();
+    const aborted = watchAbort(signal);
+    const inFlight = new FinishedBatches<BatchDone>();
     let next = 0;
-    try {
-      while (next < batches.length || inFlight.size > 0) {
-        while (inFlight.size < options.jobsPerRun && next < batches.length) {
-          const { batch, chunks } = batches[next++];
-          const done = runBatch(request, batch, chunks);
-          done.catch(() => {});
-          inFlight.set(batch, done);
-        }
-        const finished = await Promise.race([aborted.promise, ...inFlight.values()]);
-        inFlight.delete(finished.batch);
-        yield finished;
+    while (next < batches.length || inFlight.size > 0) {
+      while (inFlight.size < options.jobsPerRun && next < batches.length) {
+        const { batch, chunks } = batches[next++];
+        inFlight.add(runBatch(request, batch, chunks));
       }
-    } finally {
-      aborted.dispose();
+      yield await inFlight.next(aborted);
     }
   }
 
