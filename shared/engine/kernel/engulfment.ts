@@ -5,17 +5,19 @@ import { finalMassMsun } from '../physics/ifmr-piecewise.ts';
 import {
   buildEngulfmentGrid,
   engulfmentGridKey,
+  sharedEngulfmentGrid,
   type EngulfmentGrid,
+  type SharedEngulfmentGrid,
   type EngulfmentGridInput,
 } from '../physics/engulfment-grid.ts';
 import { ifmrSegments, lightestWhiteDwarfProgenitorMsun, preparedLifetime, resolvedRows } from './scenario-physics.ts';
 
-export type { EngulfmentGrid, EngulfmentGridInput };
+export type { EngulfmentGrid, EngulfmentGridInput, SharedEngulfmentGrid };
 
-/** The `track` giant as the kernel sees it: the grid and the key it is cached under. */
+/** The `track` giant as the kernel sees it: the grid (tables on shared memory) and the key it is cached under. */
 export interface PreparedTrack {
   kind: 'track';
-  grid: EngulfmentGrid;
+  grid: SharedEngulfmentGrid;
   gridKey: string;
 }
 
@@ -66,10 +68,11 @@ export function engulfmentGridInputFor(scenario: Scenario): EngulfmentGridInput 
 }
 
 /** The prepared `track` giant: the given grid (checked against this scenario's key) or a new one. */
-export function buildTrackGiant(scenario: Scenario, grid?: EngulfmentGrid): PreparedTrack {
+export function buildTrackGiant(scenario: Scenario, grid?: EngulfmentGrid | SharedEngulfmentGrid): PreparedTrack {
   const input = engulfmentGridInputFor(scenario);
   const gridKey = engulfmentGridKey(input);
-  return { kind: 'track', grid: grid ?? buildEngulfmentGrid(input), gridKey };
+  if (grid && grid.key !== gridKey) throw new EngineError('engulfmentGrid.key', grid.key, `the key of this scenario's grid (${gridKey})`);
+  return { kind: 'track', grid: sharedEngulfmentGrid(grid ?? buildEngulfmentGrid(input)), gridKey };
 }
 
 function logSpaced(lo: number, hi: number, n: number): number[] {

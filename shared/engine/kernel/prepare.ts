@@ -12,7 +12,7 @@ import { buildImfSampler, type ImfSampler } from '../physics/imf-sampler.ts';
 import { opticalFlux } from '../physics/selection-magnitude-limited.ts';
 import { ENGINE_VERSION } from '../version.ts';
 import { planChunks } from './chunks.ts';
-import { buildTrackGiant, type EngulfmentGrid, type PreparedTrack } from './engulfment.ts';
+import { buildTrackGiant, type EngulfmentGrid, type PreparedTrack, type SharedEngulfmentGrid } from './engulfment.ts';
 import { buildPrimaryTable, buildWhiteDwarfDraw, type PrimaryTable, type WhiteDwarfDraw } from './primary-table.ts';
 import { scenarioHash } from './scenario-hash.ts';
 import {
@@ -115,7 +115,7 @@ export interface PreparedScenario {
  * engulfment grid is built here unless one is passed in (the server caches grids by
  * engulfmentGridKey(engulfmentGridInputFor(scenario))).
  */
-export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: EngulfmentGrid } = {}): PreparedScenario {
+export function prepareScenario(scenario: Scenario, options: { engulfmentGrid?: EngulfmentGrid | SharedEngulfmentGrid } = {}): PreparedScenario {
   const rows = resolvedRows(scenario);
   const { chunkCount } = planChunks(scenario.systems);
   const p = scenario.primaries;
@@ -202,7 +202,7 @@ function drawFreeParts(scenario: Scenario, rows: readonly DrawnRow[], giant: Pre
 // One entry per option of each choice the preparation reads (a new variant without one is a type error).
 const isConstantHistory = byOption<HistoryOptions, 'kind', boolean>('kind', { constant: () => true, burst: () => false });
 
-const preparedGiant = byOption<GiantOptions, 'kind', PreparedGiant, [Scenario, EngulfmentGrid | undefined]>('kind', {
+const preparedGiant = byOption<GiantOptions, 'kind', PreparedGiant, [Scenario, EngulfmentGrid | SharedEngulfmentGrid | undefined]>('kind', {
   fixedReach: (giant) => ({ kind: 'fixedReach', reachAU: giant.reachAU }),
   track: (_giant, scenario, grid) => buildTrackGiant(scenario, grid),
 });

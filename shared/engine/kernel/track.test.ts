@@ -36,6 +36,21 @@ describe('giant.kind = "track" wiring', { timeout: 60_000 }, () => {
     expect(structuredClone(prepared)).toEqual(prepared);
   });
 
+  it('shares the grid’s tables with a worker (a structured clone, as a batch is sent, does not copy them) and refuses another scenario’s grid', () => {
+    const prepared = prepareScenario(scenario, { engulfmentGrid: grid });
+    if (prepared.giant.kind !== 'track') throw new Error('expected the track giant');
+    const clone = structuredClone(prepared);
+    if (clone.giant.kind !== 'track') throw new Error('expected the track giant');
+    const original = prepared.giant.grid.onsetRadiusAU;
+    expect(clone.giant.grid.onsetRadiusAU.buffer).toBeInstanceOf(SharedArrayBuffer);
+    expect(Array.from(original)).toEqual(grid.onsetRadiusAU);
+    const before = original[7];
+    original[7] = 12345.5;
+    expect(clone.giant.grid.onsetRadiusAU[7]).toBe(12345.5);
+    original[7] = before;
+    expect(() => prepareScenario(scenario, { engulfmentGrid: { ...grid, key: 'f'.repeat(64) } })).toThrow(/engulfmentGrid\.key/);
+  });
+
   it('engulfs exactly the companions inside a_crit(M1, M2): the engulfed share matches quadrature over the grid', () => {
     const prepared = prepareScenario(scenario, { engulfmentGrid: grid });
     let tally = emptyTallyFor(prepared.scenarioHash);

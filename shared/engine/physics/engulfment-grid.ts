@@ -3,6 +3,7 @@ import { sha256 } from '@noble/hashes/sha2.js';
 import { bytesToHex, utf8ToBytes } from '@noble/hashes/utils.js';
 import type { GiantTrackOptions } from '../../contracts/scenario.ts';
 import { EngineError, requireInRange } from '../errors.ts';
+import { sharedFloat64Array } from '../numerics/shared-arrays.ts';
 import { criticalSeparationOnTrackAU } from './critical-separation.ts';
 import { buildGiantTrack } from './giant-track.ts';
 import { evolveOrbitAlongTrack } from './orbit-evolution.ts';
@@ -36,20 +37,20 @@ export interface EngulfmentGridInput {
 }
 
 /**
- * The engulfment boundary and envelope tables on the (M1, M2) grid; plain data only.
+ * The engulfment boundary and envelope tables on the (M1, M2) grid, with its tables as `Table`.
  * Row-major tables: entry (i, j) of an M1 × M2 table sits at i · M2count + j; entry (i, k) of
  * a per-primary table at i · envelopeSamples + k.
  */
-export interface EngulfmentGrid {
+export interface EngulfmentGridOf<Table extends ArrayLike<number>> {
   algorithmVersion: string;
   /** engulfmentGridKey of the input this grid was built from. */
   key: string;
   /** ln(M1 / Msun) at the primary nodes. */
-  logPrimaryMass: number[];
+  logPrimaryMass: Table;
   /** ln(M2 / Msun) at the companion nodes. */
-  logCompanionMass: number[];
+  logCompanionMass: Table;
   /** ln(a_crit / AU), M1 × M2, row-major. */
-  logCriticalSeparationAU: number[];
+  logCriticalSeparationAU: Table;
   /** Samples per (M1, M2) node of the onset tables, uniform in x = ln(a0/a_crit) over [onsetLogRatioMin, onsetLogRatioMax]. */
   onsetSamples: number;
   onsetLogRatioMin: number;
@@ -59,10 +60,40 @@ export interface EngulfmentGrid {
    * companion on the tidally decaying orbit), entry ((i · M2count) + j) · onsetSamples + k:
    * core mass and total mass (Msun), radius and orbital separation (AU) at that moment.
    */
-  onsetCoreMassMsun: number[];
-  onsetStarMassMsun: number[];
-  onsetRadiusAU: number[];
-  onsetSeparationAU: number[];
+  onsetCoreMassMsun: Table;
+  onsetStarMassMsun: Table;
+  onsetRadiusAU: Table;
+  onsetSeparationAU: Table;
+}
+
+/** The grid as plain data: how it is built, cached (JSON) and handed to a thread. */
+export type EngulfmentGrid = EngulfmentGridOf<number[]>;
+
+/**
+ * The grid as the kernel holds it: every table a Float64Array on shared memory where the platform
+ * has it (numerics/shared-arrays.ts), so the prepared scenario sent to a worker with each batch
+ * shares the ≈ 0.9 MB of tables instead of copying them.
+ */
+export type SharedEngulfmentGrid = EngulfmentGridOf<Float64Array>;
+
+/** The kernel's form of a grid (see SharedEngulfmentGrid); a grid already in that form is returned as it is. */
+export function sharedEngulfmentGrid(grid: EngulfmentGrid | SharedEngulfmentGrid): SharedEngulfmentGrid {
+  const shared = (t: ArrayLike<number>) => {
+    if (t instanceof Float64Array) return t;
+    const out = sharedFloat64Array(t.length);
+    out.set(t);
+    return out;
+  };
+  return {
+    ...grid,
+    logPrimaryMass: shared(grid.logPrimaryMass),
+    logCompanionMass: shared(grid.logCompanionMass),
+    logCriticalSeparationAU: shared(grid.logCriticalSeparationAU),
+    onsetCoreMassMsun: shared(grid.onsetCoreMassMsun),
+    onsetStarMassMsun: shared(grid.onsetStarMassMsun),
+    onsetRadiusAU: shared(grid.onsetRadiusAU),
+    onsetSeparationAU: shared(grid.onsetSeparationAU),
+  };
 }
 
 /**
@@ -133,7 +164,7 @@ export function buildEngulfmentGrid(input: EngulfmentGridInput): EngulfmentGrid 
  * Allocation-free: it runs in the hot loop millions of times per second.
  * Units: masses in Msun (> 0). Example: on a grid built with default options, (1, 0.001) → ≈ 2.5 AU.
  */
-export function criticalSeparationAU(grid: EngulfmentGrid, m1Msun: number, m2Msun: number): number {
+export function criticalSeparationAU(grid: EngulfmentGridOf<ArrayLike<number>>, m1Msun: number, m2Msun: number): number {
   if (!(m1Msun > 0 && m1Msun < Infinity)) throw new EngineError('m1Msun', m1Msun, '(0, ∞) Msun');
   if (!(m2Msun > 0 && m2Msun < Infinity)) throw new EngineError('m2Msun', m2Msun, '(0, ∞) Msun');
   const xs = grid.logPrimaryMass;
@@ -165,7 +196,7 @@ export function criticalSeparationAU(grid: EngulfmentGrid, m1Msun: number, m2Msu
  * Example: M1 = 1 (IFMR 0.569), M2 = 0.3, a0 = 1.76 AU, default track options → a red-giant-branch
  * onset; the direct integration gives core 0.325 Msun, envelope 0.64 Msun, R ≈ 41 Rsun, a ≈ 0.40 AU.
  */
-export function commonEnvelopeOnset(grid: EngulfmentGrid, m1Msun: number, m2Msun: number, a0AU: number, out: Float64Array): boolean {
+export function commonEnvelopeOnset(grid: EngulfmentGridOf<ArrayLike<number>>, m1Msun: number, m2Msun: number, a0AU: number, out: Float64Array): boolean {
   if (!(m1Msun > 0 && m1Msun < Infinity)) throw new EngineError('m1Msun', m1Msun, '(0, ∞) Msun');
   if (!(m2Msun > 0 && m2Msun < Infinity)) throw new EngineError('m2Msun', m2Msun, '(0, ∞) Msun');
   const xs = grid.logPrimaryMass;
@@ -204,7 +235,7 @@ export function commonEnvelopeOnset(grid: EngulfmentGrid, m1Msun: number, m2Msun
 }
 
 /** Bilinear blend of four nodes' values, each linear between its samples at offset and offset + 1. */
-function blend(t: number[], o00: number, o01: number, o10: number, o11: number, w00: number, w01: number, w10: number, w11: number, w: number): number {
+function blend(t: ArrayLike<number>, o00: number, o01: number, o10: number, o11: number, w00: number, w01: number, w10: number, w11: number, w: number): number {
   const v = w00 * t[o00] + w01 * t[o01] + w10 * t[o10] + w11 * t[o11];
   const v1 = w00 * t[o00 + 1] + w01 * t[o01 + 1] + w10 * t[o10 + 1] + w11 * t[o11 + 1];
   return v + w * (v1 - v);
@@ -251,7 +282,7 @@ function clamp(x: number, lo: number, hi: number): number {
 }
 
 /** Index i of the interval [nodes[i], nodes[i + 1]] holding x (x within the nodes), by bisection. */
-function lowerNode(nodes: number[], x: number): number {
+function lowerNode(nodes: ArrayLike<number>, x: number): number {
   let lo = 0;
   let hi = nodes.length - 1;
   while (hi - lo > 1) {
