@@ -5,6 +5,7 @@ import { Card } from '../../components/ui/card.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { paths } from '../../config/paths.ts';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
+import { formatCredits } from '../../features/billing/components/amounts.ts';
 import { RunCostNotice } from '../../features/billing/components/run-cost-notice.tsx';
 import { useConstraintSets } from '../../features/constraints/api/get-constraint-sets.ts';
 import { useFits } from '../../features/fits/api/get-fits.ts';
@@ -19,7 +20,7 @@ function FitCost({ departmentId, systems, points }: { departmentId: string; syst
     <div className="flex flex-col gap-2">
       <RunCostNotice departmentId={departmentId} systems={total} runs={1} />
       <p className="text-sm text-foam-400">
-        {points.toLocaleString('en-US')} grid points × {systems.toLocaleString('en-US')} systems, reserved at once as {total.toLocaleString('en-US')} systems (at list price {listPriceCredits(total).toLocaleString('en-US')} credits); refunded if the fit fails or is cancelled.
+        {points.toLocaleString('en-US')} grid points × {systems.toLocaleString('en-US')} systems, reserved at once as {total.toLocaleString('en-US')} systems (at list price {formatCredits(listPriceCredits(total))}); refunded if the fit fails or is cancelled.
       </p>
     </div>
   );

@@ -6,6 +6,7 @@ import { Card } from '../../components/ui/card.tsx';
 import { PageHeader } from '../../components/ui/page-header.tsx';
 import { paths } from '../../config/paths.ts';
 import { useSignedInMe } from '../../features/auth/hooks/use-signed-in-me.ts';
+import { formatCredits } from '../../features/billing/components/amounts.ts';
 import { RunCostNotice } from '../../features/billing/components/run-cost-notice.tsx';
 import { CancelFitControl } from '../../features/fits/components/cancel-fit-control.tsx';
 import { ImpliedAnswer, ImpliedFitAnswer } from '../../features/implied/components/implied-answer.tsx';
@@ -52,7 +53,7 @@ export function Component() {
                   <RunCostNotice departmentId={me.department.id} systems={systems * IMPLIED_GRID_POINTS} runs={1} />
                   <p className="text-sm text-foam-400">
                     Like any fit, credit is reserved for every value of m: {IMPLIED_GRID_POINTS} × {systems.toLocaleString('en-US')} systems ={' '}
-                    {(IMPLIED_GRID_POINTS * systems).toLocaleString('en-US')} systems (at list price {listPriceCredits(IMPLIED_GRID_POINTS * systems).toLocaleString('en-US')} credits); refunded if the fit fails or is cancelled.
+                    {(IMPLIED_GRID_POINTS * systems).toLocaleString('en-US')} systems (at list price {formatCredits(listPriceCredits(IMPLIED_GRID_POINTS * systems))}); refunded if the fit fails or is cancelled.
                   </p>
                 </div>
               )
